@@ -38,6 +38,7 @@ export const ERROR_CODES = {
   INVALID_DATA: "species data that fail schema validation (issues listed with paths)",
   UNKNOWN_SPECIES: "no species with this key, formula or name in the library",
   AMBIGUOUS_PHASE: "a key without a phase that matches more than one phase",
+  AMBIGUOUS_SPECIES: "a formula or name that matches more than one species (isomers): use the full key",
   MISSING_DATA: "the species lacks the data the computation needs",
   OUT_OF_RANGE: "a temperature outside the species' data range, without extrapolation",
   // extents, streams, balances

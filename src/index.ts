@@ -18,14 +18,43 @@ export type { TemperatureUnit, PressureUnit, EnergyUnit, AmountUnit } from "./un
 
 // ── numeric (layer 0) ─────────────────────────────────────────────────────────
 // (numeric section)
+export {
+  rational, rationalFrom, rationalFromInteger, rationalFromDecimalString, rationalFromNumber,
+  rationalAdd, rationalSub, rationalMul, rationalDiv, rationalNeg, rationalCompare, rationalIsZero,
+  rationalToNumber, rationalToString, gcdBigInt, lcmBigInt, scaleToCoprimeIntegers, divideByGcd,
+} from "./numeric/rational.js";
+export type { Rational, RationalLike } from "./numeric/rational.js";
+export { reducedRowEchelon, matrixRank, nullSpace, integerNullSpace, solveLinearSystem } from "./numeric/linearAlgebra.js";
+export type { MatrixLike, RowEchelonResult, LinearSolution } from "./numeric/linearAlgebra.js";
+export { findRoot } from "./numeric/roots.js";
+export type { FindRootOptions, RootResult } from "./numeric/roots.js";
 
 // ── formula (layer 1) ─────────────────────────────────────────────────────────
 export type { Formula, Phase } from "./formula/types.js";
 // (formula section)
+export { parseFormula, FORMULA_LIMITS } from "./formula/parseFormula.js";
+export { safeParseFormula } from "./formula/safeParseFormula.js";
+export type { SafeParseFormulaResult } from "./formula/safeParseFormula.js";
+export { formatFormula } from "./formula/formatFormula.js";
+export type { FormatFormulaOptions } from "./formula/formatFormula.js";
+export { molarMass, ELECTRON_MOLAR_MASS_G_PER_MOL } from "./formula/molarMass.js";
+export type { MolarMassOptions } from "./formula/molarMass.js";
+export { elementMassFractions } from "./formula/elementMassFractions.js";
+export { ATOMIC_WEIGHTS, HYDROGEN_ISOTOPES, ATOMIC_WEIGHTS_EDITION, elementData } from "./data/atomicWeights.js";
+export type { ElementData, AtomicWeightKind } from "./data/atomicWeights.js";
 
 // ── reaction (layer 2) ────────────────────────────────────────────────────────
 export type { Reaction, Term } from "./reaction/types.js";
 // (reaction section)
+export { parseReaction, MAX_REACTION_LENGTH, MAX_REACTION_COEFFICIENT } from "./reaction/parseReaction.js";
+export { balanceReaction } from "./reaction/balanceReaction.js";
+export type { BalanceInput, BalanceReactionOptions } from "./reaction/balanceReaction.js";
+export { checkBalance } from "./reaction/checkBalance.js";
+export type { BalanceCheck } from "./reaction/checkBalance.js";
+export { independentReactions } from "./reaction/independentReactions.js";
+export { formatReaction } from "./reaction/formatReaction.js";
+export type { FormatReactionOptions } from "./reaction/formatReaction.js";
+export { scaleReaction, reverseReaction } from "./reaction/scaleReaction.js";
 
 // ── extent and combustion (layer 3) ──────────────────────────────────────────
 export type { Flows, Stream, ExtentSpec } from "./extent/types.js";
@@ -33,9 +62,34 @@ export type { Flows, Stream, ExtentSpec } from "./extent/types.js";
 
 // ── heat capacity (layer 3) ───────────────────────────────────────────────────
 // (heat-capacity section)
+export type {
+  CpForm, ShomateForm, PolynomialForm, Nasa7Form, Nasa9Form, ConstantCpForm, TabulatedCpForm, CpRange, RangeOptions,
+} from "./heat-capacity/types.js";
+export { createHeatCapacity } from "./heat-capacity/createHeatCapacity.js";
+export type { HeatCapacity, HeatCapacityValue, CreateHeatCapacityOptions } from "./heat-capacity/createHeatCapacity.js";
+export { boundaryJumps } from "./heat-capacity/boundaryJumps.js";
+export type { BoundaryJump } from "./heat-capacity/boundaryJumps.js";
+export { fitCp } from "./heat-capacity/fitCp.js";
+export type { CpPoint, FitCpFormName, FitCpOptions, FitCpResult } from "./heat-capacity/fitCp.js";
 
 // ── species and library (layer 4) ─────────────────────────────────────────────
 // (species section)
+export type {
+  Species, Library, LibraryGetOptions, SpeciesEvaluation, SpeciesTransition,
+} from "./species/types.js";
+export { species } from "./species/species.js";
+export { createLibrary } from "./species/createLibrary.js";
+export type { CreateLibraryOptions } from "./species/createLibrary.js";
+export { builtInLibrary } from "./species/builtInLibrary.js";
+export {
+  validateSpeciesData, MAX_ABS_HF298_KJ_PER_MOL, MAX_CP_J_PER_MOL_K, MAX_S298_J_PER_MOL_K, MAX_LOWEST_TMIN_K,
+} from "./species/validateSpeciesData.js";
+export type { SpeciesDataIssue, ValidateSpeciesDataOptions } from "./species/validateSpeciesData.js";
+export {
+  speciesDataSchema, speciesEntrySchema, cpFormSchema, cpRangeSchema, transitionSchema, unitsBlockSchema, speciesDataJsonSchema,
+} from "./species/schema.js";
+export type { SpeciesData, SpeciesDataInput, SpeciesEntry, SpeciesEntryInput } from "./species/schema.js";
+export { SOURCES, citation } from "./species/citation.js";
 
 // ── enthalpy (layer 5) ────────────────────────────────────────────────────────
 // (enthalpy section)
@@ -45,3 +99,10 @@ export type { Flows, Stream, ExtentSpec } from "./extent/types.js";
 
 // ── flame (layer 6) ───────────────────────────────────────────────────────────
 // (flame section)
+export { equilibriumComposition } from "./flame/equilibriumComposition.js";
+export type { EquilibriumInput, EquilibriumOptions, EquilibriumResult } from "./flame/equilibriumComposition.js";
+export { adiabaticFlameTemperature } from "./flame/adiabaticFlameTemperature.js";
+export type { AdiabaticFlameInput, AdiabaticFlameOptions, AdiabaticFlameResult } from "./flame/adiabaticFlameTemperature.js";
+export { flameTemperatureSweep } from "./flame/flameTemperatureSweep.js";
+export type { FlameSweep, FlameSweepResult } from "./flame/flameTemperatureSweep.js";
+export { DEFAULT_FLAME_PRODUCTS } from "./flame/flameDefaults.js";

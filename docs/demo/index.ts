@@ -1,9 +1,13 @@
+export {};
 /**
  * `npm run demo`: the library's main job on scenarios of our own. Each section lives in its
  * own file beside this one and prints a readable report.
  */
 const sections: string[] = [
   // (demo sections: add "./<area>.js" here)
+  "./formula.js",
+  "./species.js",
+  "./heat-capacity.js",
 ];
 
 console.log("rxtherm demo — invented plant scenarios, every number traceable to its data source\n");

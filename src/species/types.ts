@@ -37,6 +37,69 @@ export interface Species {
   entropy(T: number, P?: number, options?: RangeOptions): number;
   /** G(T, P) = H(T) − T·S(T, P), J/mol. */
   gibbs(T: number, P?: number, options?: RangeOptions): number;
+  /** Label of the data set the entry comes from (e.g. `"nist-janaf"`, `"gri30"`), when given. */
+  readonly dataset?: string;
+  /** Other names the species is found by (lowercase lookups). */
+  readonly aliases: readonly string[];
+  /** Notes about the data (derivations, flagged weaknesses), when the data file gives them. */
+  readonly note?: string;
+  /** Phase transitions inside the Cp ranges (T in K, ΔH in J/mol), in increasing T. */
+  readonly transitions: readonly SpeciesTransition[];
+  /** Cp°, H°, S° and G° at once, with whether T lay outside the data range (see {@link SpeciesEvaluation}). */
+  evaluate(T: number, P?: number, options?: RangeOptions): SpeciesEvaluation;
+}
+
+/**
+ * A phase transition inside a species' Cp ranges (e.g. alpha → beta quartz at 847 K).
+ *
+ * @category Species
+ */
+export interface SpeciesTransition {
+  /** Transition temperature, K. */
+  readonly TK: number;
+  /** Transition enthalpy, J/mol (H steps up by this much at TK; S by ΔH/TK). */
+  readonly dHJPerMol: number;
+  /** What changes, e.g. `"alpha-beta quartz"`. */
+  readonly label?: string;
+  /** Source id of the transition data. */
+  readonly source: string;
+}
+
+/**
+ * The result of {@link Species.evaluate}: all properties at one state, and whether the
+ * temperature lay outside the data range (evaluated with `{ extrapolate: true }`).
+ *
+ * @category Species
+ */
+export interface SpeciesEvaluation {
+  /** Temperature, K. */
+  readonly T: number;
+  /** Pressure, Pa. */
+  readonly P: number;
+  /** Cp°(T), J/(mol·K). */
+  readonly cp: number;
+  /** H°(T) = ΔfH°(298.15 K) + ∫Cp dT, J/mol. */
+  readonly enthalpy: number;
+  /** S(T, P), J/(mol·K). */
+  readonly entropy: number;
+  /** G(T, P) = H − T·S, J/mol. */
+  readonly gibbs: number;
+  /** True when T lay outside {@link Species.range}. */
+  readonly extrapolated: boolean;
+}
+
+/**
+ * Options of {@link Library.get} and {@link Library.has}.
+ *
+ * @category Species
+ */
+export interface LibraryGetOptions {
+  /**
+   * Data set to take the entry from (e.g. `"gri30"` for the GRI-Mech 3.0 polynomials) instead of
+   * the key's default entry.
+   * @defaultValue undefined (the default entry)
+   */
+  dataset?: string;
 }
 
 /**
@@ -46,9 +109,15 @@ export interface Species {
  */
 export interface Library {
   /** The species with this key; a key without phase resolves when only one phase exists. */
-  get(key: string): Species;
+  get(key: string, options?: LibraryGetOptions): Species;
   /** True when {@link Library.get} would succeed. */
-  has(key: string): boolean;
+  has(key: string, options?: LibraryGetOptions): boolean;
   /** All keys, sorted. */
   keys(): string[];
+  /** The data sets that hold an entry for this key (resolved like {@link Library.get}); the default one first. */
+  datasets(key: string): string[];
+  /** Every species (default entries), sorted by key. */
+  all(): Species[];
+  /** Full citation of a source id used by this library's data (built-in registry or a user file's `sources`). */
+  citation(id: string): string;
 }

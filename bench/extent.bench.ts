@@ -1,0 +1,87 @@
+/**
+ * Benchmarks of the extent module: solveExtents (5 reactions, 15 species) exact and float,
+ * and combustion of a 10-component gas, each beside a hand-written baseline in the same process.
+ */
+import { combustion } from "../src/extent/combustion.js";
+import { solveExtents } from "../src/extent/solveExtents.js";
+import { measure, report } from "./harness.js";
+
+// invented reformer/shift/methanation/ammonia/SO2 feed: 15 species, 5 independent reactions
+const FEED = {
+  CH4: 30, H2O: 90, CO: 2, CO2: 3, H2: 10, N2: 20, NH3: 0, O2: 6, SO2: 1, SO3: 0,
+  C2H6: 2, C2H4: 0, Ar: 0.3, He: 0.1, CH3OH: 0,
+};
+const REACTIONS = [
+  "CH4 + H2O -> CO + 3 H2",
+  "CO + H2O -> CO2 + H2",
+  "C2H6 -> C2H4 + H2",
+  "N2 + 3 H2 -> 2 NH3",
+  "2 SO2 + O2 -> 2 SO3",
+];
+const SPECS = [
+  { of: "CH4", conversion: 0.7 },
+  { of: "CO", outlet: 6.5 },
+  { of: "C2H6", conversion: 0.35 },
+  { reaction: 3, extent: 1.2 },
+  { of: "SO2", conversion: 0.95 },
+] as const;
+
+/** Baseline: the same 5×5 system written out by hand and solved by float Gauss elimination. */
+function handSolve(): number[] {
+  // ν columns of the key species; A ξ = b
+  const A = [
+    [-1, 0, 0, 0, 0],
+    [1, -1, 0, 0, 0],
+    [0, 0, -1, 0, 0],
+    [0, 0, 0, 1, 0],
+    [0, 0, 0, 0, -2],
+  ];
+  const b = [-0.7 * 30, 6.5 - 2, -0.35 * 2, 1.2, -0.95 * 1];
+  const n = 5;
+  const M = A.map((r, i) => [...r, b[i] as number]);
+  for (let c = 0; c < n; c++) {
+    let p = c;
+    for (let i = c + 1; i < n; i++) if (Math.abs(M[i]![c]!) > Math.abs(M[p]![c]!)) p = i;
+    [M[c], M[p]] = [M[p]!, M[c]!];
+    for (let i = c + 1; i < n; i++) {
+      const f = M[i]![c]! / M[c]![c]!;
+      for (let k = c; k <= n; k++) M[i]![k]! -= f * M[c]![k]!;
+    }
+  }
+  const x = new Array<number>(n).fill(0);
+  for (let i = n - 1; i >= 0; i--) {
+    let v = M[i]![n]!;
+    for (let k = i + 1; k < n; k++) v -= M[i]![k]! * x[k]!;
+    x[i] = v / M[i]![i]!;
+  }
+  return x;
+}
+
+const GAS = {
+  "CH4(g)": 0.87, "C2H6(g)": 0.05, "C3H8(g)": 0.02, "C4H10(g)": 0.005, "H2(g)": 0.01,
+  "CO(g)": 0.005, "CO2(g)": 0.015, "N2(g)": 0.02, "H2S(g)": 0.0001, "He(g)": 0.0049,
+};
+
+/** Baseline: theoretical O2 and flue totals of the same gas by a hand-written element tally. */
+function handCombustion(): number {
+  const C = 0.87 + 0.1 + 0.06 + 0.02 + 0.005 + 0.015;
+  const H = 0.87 * 4 + 0.05 * 6 + 0.02 * 8 + 0.005 * 10 + 0.02 + 0.0002;
+  const O = 0.005 + 0.03;
+  const S = 0.0001;
+  const o2 = C + H / 4 + S - O / 2;
+  const air = (1.15 * o2) / 0.209476;
+  return C + H / 2 + S + 0.02 + air - o2;
+}
+
+export function run(): void {
+  const exact = measure("solveExtents exact (5 rx, 15 sp)", () => solveExtents({ feed: FEED, reactions: REACTIONS, specs: SPECS }));
+  const float = measure("solveExtents float (5 rx, 15 sp)", () =>
+    solveExtents({ feed: FEED, reactions: REACTIONS, specs: SPECS }, { arithmetic: "float" }),
+  );
+  const base = measure("hand 5×5 float Gauss", handSolve);
+  report("solveExtents", exact, base, "median < 20 µs");
+  report("solveExtents", float, base, "median < 20 µs");
+  const comb = measure("combustion 10-component gas, 15 % excess", () => combustion({ fuel: GAS, excessAir: 0.15 }));
+  const cbase = measure("hand element tally", handCombustion);
+  report("combustion", comb, cbase, "median < 10 µs");
+}

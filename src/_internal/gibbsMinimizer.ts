@@ -1,0 +1,495 @@
+/**
+ * Private numerical core of the equilibrium solvers in src/flame/: Gibbs-energy minimisation of an
+ * ideal-gas mixture plus optional pure condensed species, by the element-potential (Lagrange
+ * multiplier) method, written against plain arrays so it can be tested with synthetic data.
+ *
+ * Method. Minimise G/RT = Σ_gas n_j (μ°_j + ln(n_j/N) + ln(P/P°)) + Σ_cond n_k μ°_k subject to the
+ * element balances Σ_j a_ij n_j = b_i (μ°_j = g°_j(T)/RT at P° = 1 bar). The stationarity
+ * conditions μ_j = Σ_i a_ij π_i (π_i: element potential divided by RT) are linearised in ln n_j
+ * (gases), n_k (condensed) and ln N; eliminating Δln n_j leaves a dense system of size
+ * (elements + 1 + active condensed) in the unknowns π_i, Δln N and Δn_k, solved by Gaussian
+ * elimination with partial pivoting. Steps are damped so that no major species changes by more
+ * than a factor e² per iteration and no trace species jumps above mole fraction 1e-4 in one step;
+ * trace species stay in ln-space, so amounts down to ~1e-300 mol are represented without
+ * clipping. Condensed species enter when their driving force μ°_k − Σ a_ik π_i is negative and
+ * leave when their amount would turn negative. At fixed volume the ln(P/P°) and ln N terms are
+ * replaced by ln(n_j R T / (V P°)), and the ln N unknown disappears.
+ *
+ * The same matrix, with a different right-hand side, gives the temperature derivatives of the
+ * equilibrium amounts, hence the equilibrium heat capacity used by the Newton step of the
+ * enthalpy- (or energy-) balance outer loop.
+ *
+ * References: W. B. White, S. M. Johnson, G. B. Dantzig, "Chemical equilibrium in complex
+ * mixtures", J. Chem. Phys. 28 (1958) 751–755; W. R. Smith, R. W. Missen, Chemical Reaction
+ * Equilibrium Analysis: Theory and Algorithms, Wiley (1982), ch. 6 (element-potential methods).
+ *
+ * @internal
+ * @module
+ */
+
+/** A prepared minimisation problem: element matrix, phase flags and element amounts. */
+export interface GibbsProblem {
+  /** Number of (independent) element rows. */
+  readonly m: number;
+  /** Number of species. */
+  readonly ns: number;
+  /** Element matrix, row-major: a[i * ns + j] = atoms of element i in species j. */
+  readonly a: Float64Array;
+  /** 1 for an ideal-gas species, 0 for a pure condensed species. */
+  readonly gas: Uint8Array;
+  /** Element amounts, mol (length m). */
+  readonly b: Float64Array;
+}
+
+/** Iteration state; kept between calls for warm starts. */
+export interface GibbsState {
+  /** ln n_j (mol) of each gas species (unused entries for condensed species). */
+  lnn: Float64Array;
+  /** Amount (mol) of each condensed species; 0 when inactive. */
+  nc: Float64Array;
+  /** 1 when the condensed species is in the active phase set. */
+  active: Uint8Array;
+  /** ln of the gas-phase total, mol (isobaric problems). */
+  lnN: number;
+  /** Element potentials divided by RT (length m). */
+  pi: Float64Array;
+  /** True once the state holds a converged solution (usable for warm starts). */
+  warm: boolean;
+}
+
+/** Conditions of one solve. */
+export interface GibbsConditions {
+  /** g°_j(T)/(R T) at P° for every species. */
+  readonly mu0: Float64Array;
+  /** "P": fixed T and P (lnP = ln(P/P°)); "V": fixed T and V (lnP = ln(R T/(V P°)) per mol). */
+  readonly kind: "P" | "V";
+  /** ln(P/P°) for kind "P"; ln(R·T/(V·P°)) (1/mol) for kind "V". */
+  readonly lnP: number;
+}
+
+/** Outcome of one solve. */
+export interface GibbsOutcome {
+  converged: boolean;
+  iterations: number;
+  /** max_i |Σ_j a_ij n_j − b_i| / b_i. */
+  elementResidual: number;
+  /** Why the solve failed, when it did. */
+  reason?: string;
+}
+
+/** Limits of one solve. */
+export interface GibbsLimits {
+  maxIterations: number;
+  /** Required relative element residual. */
+  elementTolerance: number;
+}
+
+/** ln of the mole fraction below which a gas species counts as a trace species. */
+const TRACE_LN_X = Math.log(1e-8);
+/** A trace species may rise to at most this ln mole fraction in one step. */
+const TRACE_CAP_LN_X = Math.log(1e-4);
+/** Largest change of ln n of a major species per step. */
+const MAX_LN_STEP = 2;
+/** Condensed amount, relative to the element total, below which a shrinking species leaves. */
+const NEGLIGIBLE_CONDENSED = 1e-12;
+/** Step-size tolerance on ln n of the species that matter. */
+const STEP_TOLERANCE = 1e-10;
+
+/** Fresh (cold) state for a problem. */
+export function createGibbsState(p: GibbsProblem): GibbsState {
+  const s: GibbsState = {
+    lnn: new Float64Array(p.ns),
+    nc: new Float64Array(p.ns),
+    active: new Uint8Array(p.ns),
+    lnN: 0,
+    pi: new Float64Array(p.m),
+    warm: false,
+  };
+  coldStart(p, s);
+  return s;
+}
+
+/** Reset a state to the cold initial estimate: equal amounts of every gas species. */
+export function coldStart(p: GibbsProblem, s: GibbsState): void {
+  let bSum = 0;
+  for (let i = 0; i < p.m; i++) bSum += p.b[i]!;
+  let ngas = 0;
+  let atoms = 0;
+  for (let j = 0; j < p.ns; j++) {
+    if (!p.gas[j]) continue;
+    ngas++;
+    for (let i = 0; i < p.m; i++) atoms += p.a[i * p.ns + j]!;
+  }
+  const meanAtoms = ngas > 0 && atoms > 0 ? atoms / ngas : 1;
+  const total = bSum / meanAtoms;
+  const each = Math.log(total / Math.max(ngas, 1));
+  for (let j = 0; j < p.ns; j++) {
+    s.lnn[j] = p.gas[j] ? each : 0;
+    s.nc[j] = 0;
+    s.active[j] = 0;
+  }
+  s.lnN = Math.log(total);
+  s.pi.fill(0);
+  s.warm = false;
+  // an element held by no gas species must start with a condensed carrier
+  for (let i = 0; i < p.m; i++) {
+    let inGas = false;
+    for (let j = 0; j < p.ns; j++) if (p.gas[j] && p.a[i * p.ns + j]! > 0) inGas = true;
+    if (inGas) continue;
+    for (let j = 0; j < p.ns; j++) {
+      if (!p.gas[j] && p.a[i * p.ns + j]! > 0) {
+        s.active[j] = 1;
+        s.nc[j] = p.b[i]! / p.a[i * p.ns + j]! / 2;
+        break;
+      }
+    }
+  }
+}
+
+/** Relative element residual of a state. */
+export function elementResidual(p: GibbsProblem, s: GibbsState): number {
+  let worst = 0;
+  for (let i = 0; i < p.m; i++) {
+    let sum = 0;
+    for (let j = 0; j < p.ns; j++) {
+      const aij = p.a[i * p.ns + j]!;
+      if (aij === 0) continue;
+      sum += aij * (p.gas[j] ? Math.exp(s.lnn[j]!) : s.nc[j]!);
+    }
+    const bi = p.b[i]!;
+    const r = Math.abs(sum - bi) / bi;
+    if (r > worst) worst = r;
+  }
+  return worst;
+}
+
+/**
+ * Solve the equilibrium at fixed T and P (or T and V) from the given state (warm or cold).
+ * On success the state holds the equilibrium amounts and element potentials.
+ */
+export function solveGibbs(p: GibbsProblem, c: GibbsConditions, s: GibbsState, lim: GibbsLimits): GibbsOutcome {
+  const { m, ns, a, gas, b } = p;
+  const isP = c.kind === "P";
+  const mu = new Float64Array(ns);
+  const n = new Float64Array(ns);
+  const dln = new Float64Array(ns);
+  let bScale = 0;
+  for (let i = 0; i < m; i++) bScale += b[i]!;
+  let iterations = 0;
+  let phaseChanges = 0;
+  const maxPhaseChanges = 2 * ns + 4;
+  while (iterations < lim.maxIterations) {
+    iterations++;
+    // active condensed species, in order
+    const cond: number[] = [];
+    for (let j = 0; j < ns; j++) if (!gas[j] && s.active[j]) cond.push(j);
+    const nc = cond.length;
+    const size = m + (isP ? 1 : 0) + nc;
+    const M = new Float64Array(size * size);
+    const r = new Float64Array(size);
+    let nGas = 0;
+    let sumNmu = 0;
+    for (let j = 0; j < ns; j++) {
+      if (!gas[j]) continue;
+      const nj = Math.exp(s.lnn[j]!);
+      n[j] = nj;
+      const muj = isP ? c.mu0[j]! + c.lnP + s.lnn[j]! - s.lnN : c.mu0[j]! + c.lnP + s.lnn[j]!;
+      mu[j] = muj;
+      nGas += nj;
+      sumNmu += nj * muj;
+    }
+    const Nt = Math.exp(s.lnN);
+    // element rows
+    for (let i = 0; i < m; i++) {
+      let bc = 0;
+      let rhs = 0;
+      let si = 0;
+      for (let j = 0; j < ns; j++) {
+        const aij = a[i * ns + j]!;
+        if (aij === 0) continue;
+        if (gas[j]) {
+          const w = aij * n[j]!;
+          bc += w;
+          rhs += w * mu[j]!;
+          si += w;
+          for (let l = 0; l <= i; l++) {
+            const alj = a[l * ns + j]!;
+            if (alj !== 0) M[i * size + l] = M[i * size + l]! + w * alj;
+          }
+        } else if (s.active[j]) {
+          bc += aij * s.nc[j]!;
+        }
+      }
+      for (let l = 0; l < i; l++) M[l * size + i] = M[i * size + l]!;
+      r[i] = b[i]! - bc + rhs;
+      if (isP) {
+        M[i * size + m] = si;
+        M[m * size + i] = si;
+      }
+      for (let k = 0; k < nc; k++) {
+        const aik = a[i * ns + cond[k]!]!;
+        const col = m + (isP ? 1 : 0) + k;
+        M[i * size + col] = aik;
+        M[col * size + i] = aik;
+      }
+    }
+    if (isP) {
+      M[m * size + m] = nGas - Nt;
+      r[m] = Nt - nGas + sumNmu;
+    }
+    for (let k = 0; k < nc; k++) r[m + (isP ? 1 : 0) + k] = c.mu0[cond[k]!]!;
+    if (!solveDense(M, r, size)) {
+      return { converged: false, iterations, elementResidual: elementResidual(p, s), reason: "singular element-potential matrix" };
+    }
+    for (let i = 0; i < m; i++) s.pi[i] = r[i]!;
+    const dlnN = isP ? r[m]! : 0;
+    // species updates and step limiting
+    let lambda = 1;
+    let bigMajor = isP ? 5 * Math.abs(dlnN) : 0;
+    let stepMeasure = isP ? Math.abs(dlnN) : 0;
+    const lnTotal = isP ? s.lnN : Math.log(Math.max(nGas, 1e-300));
+    for (let j = 0; j < ns; j++) {
+      if (!gas[j]) continue;
+      let sumA = 0;
+      for (let i = 0; i < m; i++) {
+        const aij = a[i * ns + j]!;
+        if (aij !== 0) sumA += aij * s.pi[i]!;
+      }
+      const d = -mu[j]! + sumA + dlnN;
+      dln[j] = d;
+      const lnx = s.lnn[j]! - lnTotal;
+      if (lnx > TRACE_LN_X) {
+        if (Math.abs(d) > bigMajor) bigMajor = Math.abs(d);
+      } else if (d - dlnN > 0) {
+        const cap = (TRACE_CAP_LN_X - lnx) / (d - dlnN);
+        if (cap < lambda) lambda = Math.max(cap, 0);
+      }
+      const weight = Math.exp(lnx) * Math.max(Math.abs(d), d * d);
+      if (weight > stepMeasure) stepMeasure = weight;
+    }
+    if (bigMajor > MAX_LN_STEP) lambda = Math.min(lambda, MAX_LN_STEP / bigMajor);
+    // a condensed species whose amount the step would drive below a tenth of its value is only
+    // reduced tenfold (a projected step); once negligible and still falling, it leaves the phase set
+    let removed = -1;
+    for (let k = 0; k < nc; k++) {
+      const j = cond[k]!;
+      const dn = r[m + (isP ? 1 : 0) + k]!;
+      const rel = Math.abs(dn) / Math.max(nGas, 1e-300);
+      if (rel > stepMeasure) stepMeasure = rel;
+      if (dn < 0 && s.nc[j]! + dn < 0 && s.nc[j]! < NEGLIGIBLE_CONDENSED * bScale) removed = j;
+    }
+    if (removed >= 0 && phaseChanges < maxPhaseChanges) {
+      phaseChanges++;
+      s.active[removed] = 0;
+      s.nc[removed] = 0;
+      continue;
+    }
+    if (lambda < 1e-12) lambda = 1e-12;
+    for (let j = 0; j < ns; j++) if (gas[j]) s.lnn[j] = s.lnn[j]! + lambda * dln[j]!;
+    for (let k = 0; k < nc; k++) {
+      const j = cond[k]!;
+      s.nc[j] = Math.max(s.nc[j]! / 10, s.nc[j]! + lambda * r[m + (isP ? 1 : 0) + k]!);
+    }
+    if (isP) s.lnN += lambda * dlnN;
+    if (!Number.isFinite(s.lnN) || !finiteAll(s.lnn)) {
+      return { converged: false, iterations, elementResidual: Number.NaN, reason: "non-finite iterate" };
+    }
+    if (lambda === 1 && stepMeasure < STEP_TOLERANCE) {
+      const res = elementResidual(p, s);
+      if (res <= lim.elementTolerance) {
+        // phase test: a condensed species with negative driving force enters
+        let best = -1;
+        let bestForce = -1e-9;
+        for (let j = 0; j < ns; j++) {
+          if (gas[j] || s.active[j]) continue;
+          let sumA = 0;
+          for (let i = 0; i < m; i++) sumA += a[i * ns + j]! * s.pi[i]!;
+          const force = c.mu0[j]! - sumA;
+          if (force < bestForce) {
+            bestForce = force;
+            best = j;
+          }
+        }
+        if (best >= 0 && phaseChanges < maxPhaseChanges) {
+          phaseChanges++;
+          s.active[best] = 1;
+          s.nc[best] = 0;
+          continue;
+        }
+        s.warm = true;
+        return { converged: true, iterations, elementResidual: res };
+      }
+    }
+  }
+  return { converged: false, iterations, elementResidual: elementResidual(p, s), reason: "iteration limit" };
+}
+
+/**
+ * Temperature derivatives at a converged equilibrium: d ln n_j/dT (gases), dn_k/dT (active
+ * condensed), written into `dlnGas` and `dnCond`. `hRT[j]` is h_j/(R T) of every species.
+ * Returns false when the matrix is singular.
+ */
+export function equilibriumDerivatives(
+  p: GibbsProblem,
+  c: GibbsConditions,
+  s: GibbsState,
+  T: number,
+  hRT: Float64Array,
+  dlnGas: Float64Array,
+  dnCond: Float64Array,
+): boolean {
+  const { m, ns, a, gas } = p;
+  const isP = c.kind === "P";
+  const cond: number[] = [];
+  for (let j = 0; j < ns; j++) if (!gas[j] && s.active[j]) cond.push(j);
+  const nc = cond.length;
+  const size = m + (isP ? 1 : 0) + nc;
+  const M = new Float64Array(size * size);
+  const r = new Float64Array(size);
+  // d mu0_j/dT = −h_j/(R T²); at fixed V the ln(RT/V) term adds 1/T for gases
+  const dmu = new Float64Array(ns);
+  for (let j = 0; j < ns; j++) dmu[j] = -hRT[j]! / T + (gas[j] && !isP ? 1 / T : 0);
+  let nGas = 0;
+  let rhsN = 0;
+  for (let j = 0; j < ns; j++) {
+    if (!gas[j]) continue;
+    const nj = Math.exp(s.lnn[j]!);
+    nGas += nj;
+    rhsN += nj * dmu[j]!;
+  }
+  const Nt = isP ? Math.exp(s.lnN) : nGas;
+  for (let i = 0; i < m; i++) {
+    let si = 0;
+    let rhs = 0;
+    for (let j = 0; j < ns; j++) {
+      const aij = a[i * ns + j]!;
+      if (aij === 0 || !gas[j]) continue;
+      const w = aij * Math.exp(s.lnn[j]!);
+      si += w;
+      rhs += w * dmu[j]!;
+      for (let l = 0; l < m; l++) {
+        const alj = a[l * ns + j]!;
+        if (alj !== 0) M[i * size + l] = M[i * size + l]! + w * alj;
+      }
+    }
+    r[i] = rhs;
+    if (isP) {
+      M[i * size + m] = si;
+      M[m * size + i] = si;
+    }
+    for (let k = 0; k < nc; k++) {
+      const aik = a[i * ns + cond[k]!]!;
+      const col = m + (isP ? 1 : 0) + k;
+      M[i * size + col] = aik;
+      M[col * size + i] = aik;
+    }
+  }
+  if (isP) {
+    M[m * size + m] = nGas - Nt;
+    r[m] = rhsN;
+  }
+  for (let k = 0; k < nc; k++) r[m + (isP ? 1 : 0) + k] = dmu[cond[k]!]!;
+  if (!solveDense(M, r, size)) return false;
+  const dlnN = isP ? r[m]! : 0;
+  for (let j = 0; j < ns; j++) {
+    if (gas[j]) {
+      let sumA = 0;
+      for (let i = 0; i < m; i++) sumA += a[i * ns + j]! * r[i]!;
+      dlnGas[j] = sumA - dmu[j]! + dlnN;
+    } else {
+      dlnGas[j] = 0;
+      dnCond[j] = 0;
+    }
+  }
+  for (let k = 0; k < nc; k++) dnCond[cond[k]!] = r[m + (isP ? 1 : 0) + k]!;
+  return true;
+}
+
+/** Solve M x = r in place (x returned in r) by Gaussian elimination with partial pivoting. */
+export function solveDense(M: Float64Array, r: Float64Array, size: number): boolean {
+  let scale = 0;
+  for (let q = 0; q < size * size; q++) scale = Math.max(scale, Math.abs(M[q]!));
+  const tiny = scale * 1e-300;
+  for (let col = 0; col < size; col++) {
+    let piv = col;
+    let best = Math.abs(M[col * size + col]!);
+    for (let row = col + 1; row < size; row++) {
+      const v = Math.abs(M[row * size + col]!);
+      if (v > best) {
+        best = v;
+        piv = row;
+      }
+    }
+    if (!(best > tiny) || !Number.isFinite(best)) return false;
+    if (piv !== col) {
+      for (let k = 0; k < size; k++) {
+        const t = M[col * size + k]!;
+        M[col * size + k] = M[piv * size + k]!;
+        M[piv * size + k] = t;
+      }
+      const t = r[col]!;
+      r[col] = r[piv]!;
+      r[piv] = t;
+    }
+    const d = M[col * size + col]!;
+    for (let row = col + 1; row < size; row++) {
+      const f = M[row * size + col]! / d;
+      if (f === 0) continue;
+      for (let k = col; k < size; k++) M[row * size + k] = M[row * size + k]! - f * M[col * size + k]!;
+      r[row] = r[row]! - f * r[col]!;
+    }
+  }
+  for (let row = size - 1; row >= 0; row--) {
+    let sum = r[row]!;
+    for (let k = row + 1; k < size; k++) sum -= M[row * size + k]! * r[k]!;
+    r[row] = sum / M[row * size + row]!;
+  }
+  return true;
+}
+
+function finiteAll(x: Float64Array): boolean {
+  for (let j = 0; j < x.length; j++) if (!Number.isFinite(x[j]!)) return false;
+  return true;
+}
+
+/**
+ * {@link solveGibbs} with restarts: when the solve from the given state fails and the problem
+ * has condensed species, retry from a cold start with each condensed species active in turn
+ * (a feed whose elements the gas phase alone cannot hold, e.g. carbon beyond the oxygen, needs
+ * its condensed carrier from the first iteration), then with all of them active.
+ */
+export function solveGibbsRobust(p: GibbsProblem, c: GibbsConditions, s: GibbsState, lim: GibbsLimits): GibbsOutcome {
+  let out = solveGibbs(p, c, s, lim);
+  if (out.converged) return out;
+  let total = out.iterations;
+  const tryFrom = (activate: (j: number) => boolean): GibbsOutcome => {
+    coldStart(p, s);
+    let bMin = Infinity;
+    for (let i = 0; i < p.m; i++) bMin = Math.min(bMin, p.b[i]!);
+    for (let j = 0; j < p.ns; j++) {
+      if (!p.gas[j] && activate(j)) {
+        s.active[j] = 1;
+        s.nc[j] = Math.max(s.nc[j]!, bMin / 4);
+      }
+    }
+    const o = solveGibbs(p, c, s, lim);
+    total += o.iterations;
+    return o;
+  };
+  if (s.warm) {
+    // a warm start that failed: retry cold first
+    out = tryFrom(() => false);
+    if (out.converged) return { ...out, iterations: total };
+  }
+  const condensed: number[] = [];
+  for (let j = 0; j < p.ns; j++) if (!p.gas[j]) condensed.push(j);
+  for (const k of condensed) {
+    out = tryFrom((j) => j === k);
+    if (out.converged) return { ...out, iterations: total };
+  }
+  if (condensed.length > 1) {
+    out = tryFrom(() => true);
+    if (out.converged) return { ...out, iterations: total };
+  }
+  return { ...out, iterations: total };
+}

@@ -1,0 +1,197 @@
+import { RxthermError } from "../errors.js";
+import type { Reaction } from "../reaction/types.js";
+import { type Q, Q0, qAdd, qDiv, qFromNumber, qIsZero, qMul, qSub, qToNumber, solveExact } from "./_rational.js";
+import { buildSystem, resolveSpecies, validateFlows } from "./_system.js";
+import type { Flows } from "./types.js";
+
+/**
+ * Input of {@link reconcileExtents}.
+ *
+ * @category Stoichiometry
+ */
+export interface ReconcileExtentsInput {
+  /** Feed: species key → mol or mol/s. */
+  feed: Flows;
+  /** Balanced reactions, as equation text or {@link Reaction} objects. */
+  reactions: readonly (Reaction | string)[];
+  /** Measured outlet flows (mol or mol/s) of at least as many species as there are reactions. */
+  measured: Flows;
+}
+
+/**
+ * Options of {@link reconcileExtents}.
+ *
+ * @category Stoichiometry
+ */
+export interface ReconcileExtentsOptions {
+  /**
+   * Weight of each measured species in the sum of squares (e.g. 1/σ² of the analyser).
+   * Species not listed get weight 1. Weights must be finite and > 0.
+   * @defaultValue every weight 1
+   */
+  weights?: Record<string, number>;
+}
+
+/**
+ * Result of {@link reconcileExtents}.
+ *
+ * @category Stoichiometry
+ */
+export interface ReconcileExtentsResult {
+  /** Least-squares extents, mol or mol/s. */
+  extents: number[];
+  /** Outlet flows of every species at those extents, mol or mol/s. */
+  outlet: Flows;
+  /** Measured − reconciled outlet flow of each measured species, mol or mol/s. */
+  residuals: Flows;
+  /** Weighted sum of squared residuals, (mol or mol/s)². */
+  sumOfSquares: number;
+  /**
+   * Element-balance closure of the measured data: (element leaving ÷ element fed) × 100, in %,
+   * for each element fed; outlet species that were not measured count at their reconciled flow.
+   */
+  closurePercent: Record<string, number>;
+  /** Outlet species that were not measured (taken at their reconciled flow in the closure). */
+  unmeasured: string[];
+}
+
+/**
+ * Least-squares extents of reaction from more measured outlet flows than reactions, and the
+ * element-balance closure of the measured data.
+ *
+ * With N the measured-species × reactions coefficient matrix, the extents minimise
+ * Σ wₛ (mₛ − nₛ,feed − Σⱼ Nₛⱼ ξⱼ)², i.e. they solve the normal equations
+ * (Nᵀ W N) ξ = Nᵀ W (m − n_feed), exactly in rationals. The closure per element
+ * (out ÷ in × 100 %) shows whether the plant data close before any fitting: a value far from 100 %
+ * points to a flow meter or analyser error, or a missing stream. Exact data give the exact
+ * extents and 100 % closure.
+ *
+ * @param input - feed and measured outlet flows (mol or mol/s) and the reactions
+ * @param options - weights of the measured species
+ * @returns extents (mol or mol/s), reconciled outlet, residuals, closure per element (%)
+ * @throws {@link RxthermError} `SPEC_COUNT_MISMATCH` with fewer measured species than reactions (details: `needed`, `given`)
+ * @throws {@link RxthermError} `SINGULAR_SPECS` when the measured species cannot separate the extents (details: `rank`)
+ * @throws {@link RxthermError} `INVALID_ARGUMENT` for a measured species in neither the feed nor a reaction, a bad weight or a non-finite flow
+ * @throws {@link RxthermError} `NEGATIVE_FLOW` for a negative feed or measured flow
+ * @throws {@link RxthermError} `UNBALANCED_REACTION` for an unbalanced reaction
+ * @example
+ * const r = reconcileExtents({
+ *   feed: { CO: 10, H2O: 15, CO2: 0, H2: 0 },
+ *   reactions: ["CO + H2O -> CO2 + H2"],
+ *   measured: { CO: 3, CO2: 7.2, H2: 6.8 },
+ * });
+ * r.extents           // => [7]
+ * r.residuals         // => { CO: 0, CO2: 0.2, H2: -0.2 }
+ * r.closurePercent.C  // => 102   (C in 10, out 3 + 7.2)
+ * @category Stoichiometry
+ * @see D. M. Himmelblau, J. B. Riggs, Basic Principles and Calculations in Chemical Engineering, 8th ed., Prentice Hall 2012 (material balances with measurement errors, least squares)
+ */
+export function reconcileExtents(input: ReconcileExtentsInput, options: ReconcileExtentsOptions = {}): ReconcileExtentsResult {
+  const fn = "reconcileExtents";
+  if (input === null || typeof input !== "object") {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object { feed, reactions, measured }`, {});
+  }
+  const sys = buildSystem(input.feed, input.reactions, fn);
+  validateFlows(input.measured, fn, "measured", false);
+  const weights = options.weights ?? {};
+  const R = sys.reactions.length;
+  const measuredIdx: number[] = [];
+  const measuredQ: Q[] = [];
+  const weightQ: Q[] = [];
+  const seen = new Set<number>();
+  for (const [key, value] of Object.entries(input.measured)) {
+    const s = resolveSpecies(sys, key, fn, "measured");
+    if (s === undefined) {
+      throw new RxthermError("INVALID_ARGUMENT", `${fn}: measured species ${key} is in neither the feed nor any reaction`, { species: key });
+    }
+    if (seen.has(s)) {
+      throw new RxthermError("INVALID_ARGUMENT", `${fn}: species ${sys.species[s]} is measured twice (as ${key})`, { species: key });
+    }
+    seen.add(s);
+    const w = weights[key] ?? weights[sys.species[s] as string] ?? 1;
+    if (typeof w !== "number" || !Number.isFinite(w) || w <= 0) {
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires weights > 0, got ${String(w)} for ${key}`, { species: key, weight: w });
+    }
+    measuredIdx.push(s);
+    measuredQ.push(qFromNumber(value));
+    weightQ.push(qFromNumber(w));
+  }
+  const informative = measuredIdx.filter((s) => sys.reacting[s]).length;
+  if (informative < R) {
+    throw new RxthermError(
+      "SPEC_COUNT_MISMATCH",
+      `${fn} needs measured outlet flows of at least ${R} species taking part in the reactions, got ${informative}`,
+      { needed: R, given: informative, missing: R - informative },
+    );
+  }
+  // normal equations
+  const A: Q[][] = Array.from({ length: R }, () => new Array<Q>(R).fill(Q0));
+  const b: Q[] = new Array<Q>(R).fill(Q0);
+  measuredIdx.forEach((s, k) => {
+    const w = weightQ[k] as Q;
+    const target = qSub(measuredQ[k] as Q, sys.feedQ[s] as Q);
+    for (let i = 0; i < R; i++) {
+      const ni = (sys.nu[i] as Q[])[s] as Q;
+      if (qIsZero(ni)) continue;
+      const wni = qMul(w, ni);
+      b[i] = qAdd(b[i] as Q, qMul(wni, target));
+      const Ai = A[i] as Q[];
+      for (let j = 0; j < R; j++) {
+        const nj = (sys.nu[j] as Q[])[s] as Q;
+        if (!qIsZero(nj)) Ai[j] = qAdd(Ai[j] as Q, qMul(wni, nj));
+      }
+    }
+  });
+  const sol = solveExact(A, b);
+  if (sol.x === null) {
+    throw new RxthermError(
+      "SINGULAR_SPECS",
+      `${fn}: the measured species (${measuredIdx.map((s) => sys.species[s]).join(", ")}) cannot separate the ${R} extents (rank ${sol.rank})`,
+      { rank: sol.rank, measured: measuredIdx.map((s) => sys.species[s]) },
+    );
+  }
+  const xi = sol.x;
+  const outQ: Q[] = sys.species.map((_, s) => {
+    let v = sys.feedQ[s] as Q;
+    for (let j = 0; j < R; j++) {
+      const c = (sys.nu[j] as Q[])[s] as Q;
+      if (!qIsZero(c)) v = qAdd(v, qMul(c, xi[j] as Q));
+    }
+    return v;
+  });
+  const outlet: Flows = {};
+  sys.species.forEach((key, s) => (outlet[key] = qToNumber(outQ[s] as Q)));
+  const residuals: Flows = {};
+  let ss: Q = Q0;
+  measuredIdx.forEach((s, k) => {
+    const r = qSub(measuredQ[k] as Q, outQ[s] as Q);
+    residuals[sys.species[s] as string] = qToNumber(r);
+    ss = qAdd(ss, qMul(weightQ[k] as Q, qMul(r, r)));
+  });
+  // closure: measured values where measured, reconciled flows elsewhere
+  const outForClosure: Q[] = outQ.slice();
+  measuredIdx.forEach((s, k) => (outForClosure[s] = measuredQ[k] as Q));
+  const elIn = new Map<string, Q>();
+  const elOut = new Map<string, Q>();
+  sys.species.forEach((_, s) => {
+    for (const [el, count] of Object.entries(sys.formulas[s]?.elements ?? {})) {
+      const c = qFromNumber(count);
+      elIn.set(el, qAdd(elIn.get(el) ?? Q0, qMul(c, sys.feedQ[s] as Q)));
+      elOut.set(el, qAdd(elOut.get(el) ?? Q0, qMul(c, outForClosure[s] as Q)));
+    }
+  });
+  const closurePercent: Record<string, number> = {};
+  for (const [el, vin] of elIn) {
+    if (qIsZero(vin)) continue;
+    closurePercent[el] = qToNumber(qMul(qDiv(elOut.get(el) ?? Q0, vin), { n: 100n, d: 1n }));
+  }
+  const unmeasured = sys.species.filter((_, s) => !seen.has(s));
+  return {
+    extents: xi.map(qToNumber),
+    outlet,
+    residuals,
+    sumOfSquares: qToNumber(ss),
+    closurePercent,
+    unmeasured,
+  };
+}

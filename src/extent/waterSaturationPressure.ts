@@ -1,0 +1,44 @@
+import { RxthermError } from "../errors.js";
+
+/**
+ * Saturation (vapour) pressure of water between its triple point and critical point.
+ *
+ * The IAPWS-IF97 saturation-pressure equation (region 4): with ϑ = T + n₉/(T − n₁₀),
+ * A = ϑ² + n₁ϑ + n₂, B = n₃ϑ² + n₄ϑ + n₅, C = n₆ϑ² + n₇ϑ + n₈,
+ * p_sat = [2C / (−B + √(B² − 4AC))]⁴ MPa. Used by {@link combustion} for humid air.
+ *
+ * @param temperatureK - temperature in K, 273.15 ≤ T ≤ 647.096
+ * @returns saturation pressure in Pa
+ * @throws {@link RxthermError} `OUT_OF_RANGE` outside 273.15–647.096 K (details: `T`, `range`)
+ * @example
+ * waterSaturationPressure(300) // => 3536.58941… (Pa)
+ * @category Stoichiometry
+ * @see IAPWS R7-97(2012), Revised Release on the IAPWS Industrial Formulation 1997 for the Thermodynamic Properties of Water and Steam, eq. 30 and table 34 (coefficients), table 35 (check values)
+ */
+export function waterSaturationPressure(temperatureK: number): number {
+  if (typeof temperatureK !== "number" || !Number.isFinite(temperatureK) || temperatureK < 273.15 || temperatureK > 647.096) {
+    throw new RxthermError("OUT_OF_RANGE", `waterSaturationPressure requires 273.15 <= T <= 647.096 K, got ${String(temperatureK)}`, {
+      T: temperatureK,
+      range: [273.15, 647.096],
+    });
+  }
+  const T = temperatureK;
+  const theta = T + N9 / (T - N10);
+  const A = theta * theta + N1 * theta + N2;
+  const B = N3 * theta * theta + N4 * theta + N5;
+  const C = N6 * theta * theta + N7 * theta + N8;
+  const x = (2 * C) / (-B + Math.sqrt(B * B - 4 * A * C));
+  return x * x * x * x * 1e6;
+}
+
+// IAPWS-IF97 region 4 coefficients n1..n10 (IAPWS R7-97(2012), table 34)
+const N1 = 0.11670521452767e4;
+const N2 = -0.72421316703206e6;
+const N3 = -0.17073846940092e2;
+const N4 = 0.12020824702470e5;
+const N5 = -0.32325550322333e7;
+const N6 = 0.14915108613530e2;
+const N7 = -0.48232657361591e4;
+const N8 = 0.40511340542057e6;
+const N9 = -0.23855557567849;
+const N10 = 0.65017534844798e3;

@@ -1,0 +1,229 @@
+import { RxthermError } from "../errors.js";
+import { parseFormula } from "../formula/parseFormula.js";
+import { rationalFromDecimalString, rationalToNumber, type Rational } from "../numeric/rational.js";
+import { makeIntegerTerm, makeReaction, makeTerm } from "../_internal/reactionTerms.js";
+import type { Reaction, Term } from "./types.js";
+
+/** Longest equation text {@link parseReaction} accepts, in UTF-16 code units. @category Reaction */
+export const MAX_REACTION_LENGTH = 4096;
+
+/** Largest stoichiometric coefficient {@link parseReaction} accepts. @category Reaction */
+export const MAX_REACTION_COEFFICIENT = 1e9;
+
+/**
+ * Parse a chemical equation such as `"CH4 + 2 O2 -> CO2 + 2 H2O"` into a {@link Reaction}.
+ *
+ * **Grammar.**
+ * - Exactly one separator between the sides: `->`, `→`, `=`, `<=>` or `⇌` (all mean the same
+ *   here; direction and equilibrium are not recorded).
+ * - Terms are joined by `+`. A `+` written directly after a species and followed by a space,
+ *   another `+`, the end of the side or a phase suffix is that species' charge: in
+ *   `Na+ + Cl- -> NaCl(s)` the first `+` is the charge of Na⁺ and the second joins the terms.
+ *   Elsewhere (`H2+O2`) a `+` joins terms. So write a positive charge with its digits first
+ *   (`Fe3+`, `Fe^3+`, `Fe^{3+}`, `Fe³⁺`): `Fe+3 + e-` reads as `Fe`, then `3 ...`. A `+` right
+ *   after `^` or right before a closing bracket is never a separator.
+ * - Each term is an optional coefficient and a species. The coefficient is an integer (`2`),
+ *   a decimal (`6.5`) or a fraction (`13/2`), read exactly; it may be glued to the formula
+ *   (`2H2O`, `1/2O2`) because no formula starts with a digit. Exponent notation is not
+ *   accepted in coefficients (`2e-` is two electrons). A missing coefficient is 1. A leading
+ *   number is always the coefficient, so an adduct with a leading multiplier is written with
+ *   a bracket in an equation: `(CdSO4)3·8H2O`, not `3CdSO4·8H2O`.
+ * - The species is any text {@link parseFormula} accepts (phases `(g)`, `(aq)`..., charges,
+ *   the electron `e-`); `Term.species` is that text, trimmed.
+ *
+ * The same species may appear on both sides (a catalyst); the result keeps the terms as written.
+ * Columns in error details are 0-based offsets into the whole equation text.
+ *
+ * @param text - the equation
+ * @returns the reaction with exact coefficients (`Term.exact`, e.g. `"13/2"`) and their numbers
+ * @throws RxthermError `EMPTY_INPUT` for empty or blank text
+ * @throws RxthermError `INPUT_TOO_LONG` above {@link MAX_REACTION_LENGTH} characters (details: `length`, `limit`)
+ * @throws RxthermError `INVALID_REACTION` with no separator, more than one, an empty side, an
+ *   empty term or a coefficient without a species (details: `column`, `reason`)
+ * @throws RxthermError `INVALID_COUNT` for a zero or malformed coefficient (details: `column`, `coefficient`)
+ * @throws RxthermError `COUNT_TOO_LARGE` for a coefficient above {@link MAX_REACTION_COEFFICIENT}
+ * @throws RxthermError any code of {@link parseFormula} for a bad species, with `column`
+ *   re-based to the whole equation and `species` set to the term's text
+ * @example
+ * const r = parseReaction("C3H8 + 5 O2 -> 3 CO2 + 4 H2O");
+ * r.products[1].coefficient // => 4
+ * parseReaction("MnO4- + 8 H+ + 5 e- -> Mn2+ + 4 H2O").reactants.map((t) => t.species) // => ["MnO4-", "H+", "e-"]
+ * parseReaction("C2H6 + 7/2 O2 = 2 CO2 + 3 H2O").reactants[1].exact // => "7/2"
+ * @category Reaction
+ * @see IUPAC, Quantities, Units and Symbols in Physical Chemistry ("Green Book"), 3rd ed. (2007), §2.10.1 (chemical equations, stoichiometric numbers)
+ */
+export function parseReaction(text: string): Reaction {
+  if (typeof text !== "string" || text.trim() === "") {
+    throw new RxthermError("EMPTY_INPUT", "parseReaction requires a non-empty equation", { column: 0 });
+  }
+  if (text.length > MAX_REACTION_LENGTH) {
+    throw new RxthermError("INPUT_TOO_LONG", `parseReaction accepts at most ${MAX_REACTION_LENGTH} characters, got ${text.length}`, {
+      length: text.length,
+      limit: MAX_REACTION_LENGTH,
+    });
+  }
+  const arrows = findArrows(text);
+  if (arrows.length === 0) {
+    throw new RxthermError("INVALID_REACTION", "parseReaction requires one of ->, →, =, <=>, ⇌ between the sides, found none", {
+      column: text.length,
+      reason: "no separator",
+    });
+  }
+  if (arrows.length > 1) {
+    const second = arrows[1] as Arrow;
+    throw new RxthermError("INVALID_REACTION", `parseReaction requires exactly one separator, found another "${second.token}" at column ${second.column}`, {
+      column: second.column,
+      reason: "more than one separator",
+    });
+  }
+  const arrow = arrows[0] as Arrow;
+  const reactants = parseSide(text, 0, arrow.column, "reactants");
+  const products = parseSide(text, arrow.column + arrow.token.length, text.length, "products");
+  return makeReaction(reactants, products);
+}
+
+// ── private helpers ──────────────────────────────────────────────────────────
+
+interface Arrow {
+  readonly token: string;
+  readonly column: number;
+}
+
+const ARROW_TOKENS = ["<=>", "->", "→", "⇌", "="] as const;
+const PHASE_AFTER_CHARGE = /^\((?:g|l|s|aq|cr|gr)\)/;
+const COEFFICIENT = /^(\d+\s*\/\s*\d+|\d+\.\d+|\.\d+|\d+)/;
+
+function findArrows(text: string): Arrow[] {
+  const out: Arrow[] = [];
+  for (let i = 0; i < text.length; ) {
+    const c = text.charCodeAt(i);
+    // only "<", "-", "=", "→", "⇌" can start a separator
+    if (c !== 60 && c !== 45 && c !== 61 && c !== 0x2192 && c !== 0x21cc) {
+      i++;
+      continue;
+    }
+    const token = ARROW_TOKENS.find((t) => text.startsWith(t, i));
+    if (token) {
+      out.push({ token, column: i });
+      i += token.length;
+    } else i++;
+  }
+  return out;
+}
+
+function isSpace(ch: string | undefined): boolean {
+  return ch === " " || ch === "\t" || ch === "\n" || ch === "\r" || ch === "\u00a0";
+}
+
+/** Split text[start, end) into terms at separator `+` signs and parse each. */
+function parseSide(text: string, start: number, end: number, side: "reactants" | "products"): Term[] {
+  if (text.slice(start, end).trim() === "") {
+    throw new RxthermError("INVALID_REACTION", `parseReaction requires at least one species on the ${side} side`, {
+      column: start,
+      reason: `empty ${side} side`,
+    });
+  }
+  const terms: Term[] = [];
+  let termStart = start;
+  let hasContent = false; // the current term has non-space text before this point
+  for (let i = start; i < end; i++) {
+    const ch = text[i] as string;
+    if (ch === "+") {
+      const prev = text[i - 1];
+      const next = i + 1 < end ? text[i + 1] : undefined;
+      const isCharge =
+        hasContent &&
+        !isSpace(prev) &&
+        (prev === "^" ||
+          next === undefined ||
+          isSpace(next) ||
+          next === "+" ||
+          next === ")" ||
+          next === "]" ||
+          next === "}" ||
+          PHASE_AFTER_CHARGE.test(text.slice(i + 1, end)));
+      if (!isCharge) {
+        terms.push(parseTerm(text, termStart, i));
+        termStart = i + 1;
+        hasContent = false;
+        continue;
+      }
+    }
+    if (!isSpace(ch)) hasContent = true;
+  }
+  terms.push(parseTerm(text, termStart, end));
+  return terms;
+}
+
+function parseTerm(text: string, start: number, end: number): Term {
+  const raw = text.slice(start, end);
+  const lead = raw.length - raw.trimStart().length;
+  const body = raw.trim();
+  const column = start + lead;
+  if (body === "") {
+    throw new RxthermError("INVALID_REACTION", `parseReaction found an empty term at column ${column} (a "+" with nothing on one side)`, {
+      column,
+      reason: "empty term",
+    });
+  }
+  let coefficient: Rational = ONE;
+  let integerCoefficient = 1; // the coefficient when it is a small integer, else 0
+  let speciesOffset = 0;
+  const first = body.charCodeAt(0);
+  const m = (first >= 48 && first <= 57) || first === 46 ? COEFFICIENT.exec(body) : null;
+  if (m) {
+    const ctext = m[1] as string;
+    coefficient = rationalFromDecimalString(ctext.replace(/\s+/g, ""));
+    if (coefficient.num === 0n) {
+      throw new RxthermError("INVALID_COUNT", `parseReaction requires a positive coefficient, got "${ctext}" at column ${column}`, {
+        column,
+        coefficient: ctext,
+      });
+    }
+    if (rationalToNumber(coefficient) > MAX_REACTION_COEFFICIENT) {
+      throw new RxthermError("COUNT_TOO_LARGE", `parseReaction accepts coefficients up to ${MAX_REACTION_COEFFICIENT}, got "${ctext}" at column ${column}`, {
+        column,
+        coefficient: ctext,
+        limit: MAX_REACTION_COEFFICIENT,
+      });
+    }
+    integerCoefficient = coefficient.den === 1n && ctext.length < 10 ? Number(coefficient.num) : 0;
+    speciesOffset = ctext.length;
+    while (isSpace(body[speciesOffset])) speciesOffset++;
+  }
+  const species = body.slice(speciesOffset);
+  const speciesColumn = column + speciesOffset;
+  if (species === "") {
+    throw new RxthermError("INVALID_REACTION", `parseReaction found a coefficient without a species at column ${column}`, {
+      column,
+      reason: "coefficient without a species",
+    });
+  }
+  let formula;
+  try {
+    formula = parseFormula(species);
+  } catch (e) {
+    if (e instanceof RxthermError) {
+      const inner = positionOf(e.details);
+      const where = speciesColumn + (inner ?? 0);
+      throw new RxthermError(e.code, `parseReaction: bad species "${species}" (column ${speciesColumn} of the equation; error at column ${where}): ${e.message.replace(/^\[rxtherm\]\s*/, "")}`, {
+        ...e.details,
+        column: where,
+        species,
+        speciesColumn,
+      });
+    }
+    throw e;
+  }
+  return integerCoefficient > 0 ? makeIntegerTerm({ species, formula }, integerCoefficient) : makeTerm({ species, formula }, coefficient);
+}
+
+const ONE: Rational = Object.freeze({ num: 1n, den: 1n });
+
+function positionOf(details: Readonly<Record<string, unknown>>): number | undefined {
+  for (const key of ["column", "index", "offset", "position"]) {
+    const v = details[key];
+    if (typeof v === "number" && Number.isInteger(v) && v >= 0) return v;
+  }
+  return undefined;
+}

@@ -1,0 +1,170 @@
+/**
+ * The zod schema of species data files (JSON) and the JSON Schema generated from it.
+ *
+ * Units are carried by the field names and are fixed: formation enthalpy in kJ/mol
+ * (`hf298KJPerMol`, as the tables print it), entropy and Cp in J/(mol·K), temperatures in K.
+ * The schema checks the structure; {@link validateSpeciesData} adds the checks a structural
+ * schema cannot express (contiguous ranges, Cp > 0, formula ↔ key, source ids, unsafe keys).
+ *
+ * @module
+ */
+import { z } from "zod";
+
+// zod 4 numbers reject NaN and ±Infinity
+const finite = z.number();
+const positiveK = z.number().positive().describe("temperature in K (> 0)");
+const sourceId = z.string().min(1).describe("id of a citation in the file's `sources` or in the built-in registry");
+
+const shomateSchema = z.strictObject({
+  form: z.literal("shomate"),
+  A: finite, B: finite, C: finite, D: finite, E: finite,
+  F: finite.optional().describe("kJ/mol"),
+  G: finite.optional().describe("J/(mol·K)"),
+  H: finite.optional().describe("kJ/mol"),
+}).describe("Shomate: Cp = A + B·t + C·t² + D·t³ + E/t², t = T/1000 K, Cp in J/(mol·K)");
+
+const polynomialSchema = z.strictObject({
+  form: z.literal("polynomial"),
+  a: finite, b: finite.optional(), c: finite.optional(), d: finite.optional(), e: finite.optional(),
+  temperatureUnit: z.enum(["K", "C"]).describe("the temperature variable: K or °C"),
+  energyUnit: z.enum(["J", "kJ"]).describe("Cp in J/(mol·K) or kJ/(mol·K)"),
+}).describe("Cp = a + b·T + c·T² + d·T³ + e/T²");
+
+const nasa7Schema = z.strictObject({
+  form: z.literal("nasa7"),
+  a: z.array(finite).length(7).describe("a1..a7, T in K"),
+}).describe("NASA 7-coefficient polynomial: Cp/R = a1 + a2·T + a3·T² + a4·T³ + a5·T⁴");
+
+const nasa9Schema = z.strictObject({
+  form: z.literal("nasa9"),
+  a: z.array(finite).length(9).describe("a1..a7 then b1, b2, T in K"),
+}).describe("NASA 9-coefficient polynomial: Cp/R = a1/T² + a2/T + a3 + a4·T + a5·T² + a6·T³ + a7·T⁴");
+
+const constantSchema = z.strictObject({
+  form: z.literal("constant"),
+  cpJPerMolK: finite,
+}).describe("constant Cp in J/(mol·K)");
+
+const tabulatedSchema = z.strictObject({
+  form: z.literal("tabulated"),
+  temperaturesK: z.array(positiveK).min(2),
+  cpJPerMolK: z.array(finite).min(2),
+}).describe("(T, Cp) points interpolated linearly");
+
+/**
+ * Zod schema of one Cp form (discriminated by `form`).
+ *
+ * @category Species data
+ */
+export const cpFormSchema = z.discriminatedUnion("form", [
+  shomateSchema, polynomialSchema, nasa7Schema, nasa9Schema, constantSchema, tabulatedSchema,
+]);
+
+/**
+ * Zod schema of one Cp range: a form valid over [TminK, TmaxK], with an optional source id
+ * overriding the species' `heatCapacity.source` for this range.
+ *
+ * @category Species data
+ */
+export const cpRangeSchema = z.strictObject({
+  TminK: positiveK,
+  TmaxK: positiveK,
+  cp: cpFormSchema,
+  source: sourceId.optional(),
+  note: z.string().optional(),
+});
+
+/**
+ * Zod schema of a phase transition inside a species' Cp ranges (e.g. alpha → beta quartz):
+ * H steps up by `dHKJPerMol` (kJ/mol) at `TK` (K), S by ΔH/T.
+ *
+ * @category Species data
+ */
+export const transitionSchema = z.strictObject({
+  TK: positiveK,
+  dHKJPerMol: finite.describe("transition enthalpy, kJ/mol"),
+  label: z.string().optional(),
+  source: sourceId,
+});
+
+/**
+ * Zod schema of one species entry of a data file.
+ *
+ * @category Species data
+ */
+export const speciesEntrySchema = z.strictObject({
+  key: z.string().min(1).max(64).describe("formula with phase, e.g. CO2(g); isomers may carry a prefix, e.g. n-C4H10(g)"),
+  formula: z.string().min(1).max(64),
+  phase: z.enum(["g", "l", "s", "aq", "cr"]),
+  name: z.string().min(1).optional(),
+  aliases: z.array(z.string().min(1)).optional(),
+  cas: z.string().regex(/^\d{2,7}-\d{2}-\d$/).optional(),
+  dataset: z.string().min(1).max(32).regex(/^[a-z0-9][a-z0-9._-]*$/).optional()
+    .describe("label of the data set this entry comes from, e.g. nist-janaf, gri30"),
+  alternative: z.boolean().optional()
+    .describe("true: selectable only by its dataset, not the default for its key"),
+  hf298KJPerMol: finite.describe("standard enthalpy of formation at 298.15 K, kJ/mol"),
+  hf298Source: sourceId,
+  hf298UncertaintyKJPerMol: z.number().nonnegative().optional(),
+  s298JPerMolK: finite.describe("standard molar entropy at 298.15 K and 1 bar, J/(mol·K)"),
+  s298Source: sourceId,
+  heatCapacity: z.strictObject({
+    source: sourceId,
+    ranges: z.array(cpRangeSchema).min(1),
+  }),
+  transitions: z.array(transitionSchema).optional(),
+  note: z.string().optional(),
+});
+
+/**
+ * Zod schema of the optional `units` block: if present it must state exactly the units the
+ * field names carry (a file written in other units is rejected, not converted).
+ *
+ * @category Species data
+ */
+export const unitsBlockSchema = z.strictObject({
+  hf298: z.literal("kJ/mol").optional(),
+  s298: z.literal("J/(mol K)").optional(),
+  cp: z.literal("J/(mol K)").optional(),
+  temperature: z.literal("K").optional(),
+});
+
+/**
+ * Zod schema of a whole species data file: `sources` (id → full citation) and `species`.
+ *
+ * @category Species data
+ * @example
+ * speciesDataSchema.safeParse({ sources: {}, species: [] }).success // => true
+ */
+export const speciesDataSchema = z.strictObject({
+  $schema: z.string().optional(),
+  description: z.string().optional(),
+  units: unitsBlockSchema.optional(),
+  sources: z.record(z.string().min(1), z.string().min(1)),
+  species: z.array(speciesEntrySchema),
+});
+
+/** One species entry as written in a data file (input shape). @category Species data */
+export type SpeciesEntryInput = z.input<typeof speciesEntrySchema>;
+/** A whole species data file (input shape). @category Species data */
+export type SpeciesDataInput = z.input<typeof speciesDataSchema>;
+/** One validated species entry. @category Species data */
+export type SpeciesEntry = z.output<typeof speciesEntrySchema>;
+/** A validated species data file. @category Species data */
+export type SpeciesData = z.output<typeof speciesDataSchema>;
+
+/**
+ * JSON Schema (draft 2020-12) of species data files, generated from {@link speciesDataSchema}
+ * with zod's `z.toJSONSchema`. The same document is kept in `docs/species-data.schema.json`
+ * (a test checks it is up to date). The JSON Schema covers the structure only; the semantic
+ * checks of {@link validateSpeciesData} (contiguous ranges, Cp > 0, sources...) come on top.
+ *
+ * @returns a fresh JSON Schema object
+ * @category Species data
+ * @example
+ * speciesDataJsonSchema().required // => ["sources", "species"]
+ */
+export function speciesDataJsonSchema(): Record<string, unknown> {
+  const schema = z.toJSONSchema(speciesDataSchema, { target: "draft-2020-12" }) as Record<string, unknown>;
+  return { ...schema, title: "rxtherm species data file" };
+}

@@ -1,0 +1,76 @@
+import { describe, expect, it } from "vitest";
+import { test, fc } from "@fast-check/vitest";
+import { adiabaticReactionTemperature, adiabaticTemperatureRise } from "../../src/energy/adiabaticReactionTemperature.js";
+import { heatDuty } from "../../src/energy/heatDuty.js";
+import { caught } from "../enthalpy/_helpers.js";
+
+const METHANE_AIR = {
+  inlet: { T: 298.15, flows: { "CH4(g)": 1, "O2(g)": 2, "N2(g)": 7.52 } },
+  reactions: ["CH4(g) + 2 O2(g) -> CO2(g) + 2 H2O(g)"],
+  specs: [{ of: "CH4(g)", conversion: 1 }],
+};
+
+describe("adiabaticReactionTemperature", () => {
+  it("adiabaticReactionTemperature(stoichiometric methane–air, complete) is the documented example", () => {
+    const r = adiabaticReactionTemperature(METHANE_AIR);
+    expect(Math.round(r.T * 10) / 10).toBe(2327.2);
+    // common practice: complete-combustion (no dissociation) adiabatic temperature of stoichiometric methane–air ≈ 2330 K
+    expect(Math.abs(r.T - 2330)).toBeLessThan(20);
+    expect(r.extents).toEqual([1]);
+    expect(Math.abs(r.residual)).toBeLessThan(1e-6);
+  });
+
+  it("adiabaticReactionTemperature closes the energy balance: heatDuty(inlet → outlet) is zero", () => {
+    const r = adiabaticReactionTemperature(METHANE_AIR);
+    const q = heatDuty({ inlet: METHANE_AIR.inlet, outlet: r.outlet });
+    expect(Math.abs(q.duty)).toBeLessThan(1e-6 * Math.abs(r.inletEnthalpy));
+  });
+
+  test.prop([fc.double({ min: 0, max: 1, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }), fc.double({ min: 300, max: 700, noNaN: true })])(
+    "adiabaticReactionTemperature: an exothermic reaction never cools the stream, and more conversion heats it more",
+    (x1, x2, tIn) => {
+      const base = { inlet: { T: tIn, flows: { "CO(g)": 1, "H2O(g)": 1.5, "N2(g)": 2 } }, reactions: ["CO(g) + H2O(g) -> CO2(g) + H2(g)"] };
+      const lo = Math.min(x1, x2);
+      const hi = Math.max(x1, x2);
+      const tLo = adiabaticReactionTemperature({ ...base, specs: [{ of: "CO(g)", conversion: lo }] }).T;
+      const tHi = adiabaticReactionTemperature({ ...base, specs: [{ of: "CO(g)", conversion: hi }] }).T;
+      expect(tLo).toBeGreaterThanOrEqual(tIn - 1e-6);
+      expect(tHi).toBeGreaterThanOrEqual(tLo - 1e-6);
+    },
+  );
+
+  it("adiabaticReactionTemperature throws NO_BRACKET inside limits that cannot hold the answer", () => {
+    const e = caught(() => adiabaticReactionTemperature(METHANE_AIR, { limitsK: [300, 1500] }));
+    expect(e.code).toBe("NO_BRACKET");
+    expect(e.details).toHaveProperty("limits", [300, 1500]);
+  });
+
+  it("adiabaticReactionTemperature passes the extent errors through", () => {
+    expect(caught(() => adiabaticReactionTemperature({ ...METHANE_AIR, specs: [] })).code).toBe("SPEC_COUNT_MISMATCH");
+    expect(caught(() => adiabaticReactionTemperature({ ...METHANE_AIR, inlet: { T: -1, flows: { "CH4(g)": 1 } } })).code).toBe("INVALID_ARGUMENT");
+  });
+});
+
+describe("adiabaticTemperatureRise", () => {
+  it("adiabaticTemperatureRise of a lean hydrogen batch is the documented example", () => {
+    const r = adiabaticTemperatureRise({
+      inlet: { T: 298.15, flows: { "H2(g)": 0.02, "O2(g)": 0.01, "N2(g)": 0.97 } },
+      reactions: ["2 H2(g) + O2(g) -> 2 H2O(g)"],
+      specs: [{ of: "H2(g)", conversion: 1 }],
+    });
+    expect(Math.round(r.deltaT * 10) / 10).toBe(166.5);
+    expect(r.startT).toBe(298.15);
+    expect(r.T - r.startT).toBe(r.deltaT);
+  });
+
+  it("adiabaticTemperatureRise starts from the adiabatic mixing temperature of streams at different T", () => {
+    const r = adiabaticTemperatureRise({
+      inlet: [{ T: 300, flows: { "N2(g)": 1 } }, { T: 500, flows: { "N2(g)": 1, "CO(g)": 0.1, "H2O(g)": 0.1 } }],
+      reactions: ["CO(g) + H2O(g) -> CO2(g) + H2(g)"],
+      specs: [{ reaction: 0, extent: 0 }],
+    });
+    expect(r.startT).toBeGreaterThan(300);
+    expect(r.startT).toBeLessThan(500);
+    expect(Math.abs(r.deltaT)).toBeLessThan(1e-6); // no reaction: outlet is the adiabatic mix
+  });
+});

@@ -1,0 +1,175 @@
+import { describe, expect, it } from "vitest";
+import { test, fc } from "@fast-check/vitest";
+import { readFileSync } from "node:fs";
+import { equilibriumComposition } from "../../src/flame/equilibriumComposition.js";
+import { species } from "../../src/species/species.js";
+import { RxthermError } from "../../src/errors.js";
+import { GAS_CONSTANT_J_PER_MOL_K } from "../../src/units.js";
+
+const R = GAS_CONSTANT_J_PER_MOL_K;
+// Rows copied from NIST-JANAF Thermochemical Tables, 4th ed. (Chase 1998); see the fixture's description.
+const janaf = JSON.parse(readFileSync(new URL("../fixtures/flame-janaf.json", import.meta.url), "utf8")) as {
+  species: Record<string, { janaf_table: string; rows: { T: number; logKf: number | null }[] }>;
+};
+const WATER_SET = ["H2O(g)", "H2(g)", "O2(g)", "OH(g)", "H(g)", "O(g)"];
+const FLAME_SET = ["CO2(g)", "CO(g)", "H2O(g)", "H2(g)", "O2(g)", "OH(g)", "H(g)", "O(g)", "N2(g)", "NO(g)", "N(g)", "Ar(g)"];
+
+function codeOf(f: () => unknown): { code: string; details: Record<string, unknown> } {
+  try {
+    f();
+  } catch (e) {
+    if (e instanceof RxthermError) return { code: e.code, details: e.details as Record<string, unknown> };
+    throw e;
+  }
+  throw new Error("expected an RxthermError");
+}
+
+/** Total Gibbs energy of an ideal-gas mixture, J: Σ n (g°(T) + RT ln(x P/P°)). */
+function mixtureGibbs(moles: Record<string, number>, T: number, P: number): number {
+  const N = Object.values(moles).reduce((a, b) => a + b, 0);
+  let G = 0;
+  for (const [k, n] of Object.entries(moles)) {
+    if (n <= 0) continue;
+    G += n * (species(k).gibbs(T) + R * T * Math.log((n / N) * (P / 1e5)));
+  }
+  return G;
+}
+
+describe("equilibriumComposition", () => {
+  it("equilibriumComposition(steam at 3000 K) gives the documented example value", () => {
+    const r = equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET, T: 3000 });
+    expect(r.moleFractions["H2O(g)"]).toBeCloseTo(0.6435, 4); // the @example value (built-in data)
+    expect(r.converged).toBe(true);
+    expect(r.elementResidual).toBeLessThanOrEqual(1e-12);
+  });
+
+  // H2 + ½ O2 ⇌ H2O at 1 bar: Kf = x_H2O / (x_H2 · x_O2^½) · (P/P°)^(−½)
+  for (const T of [2000, 2500, 3000]) {
+    it(`equilibriumComposition(H2O ⇌ H2 + ½O2, ${T} K, 1 bar) reproduces log Kf of NIST-JANAF table H-064`, () => {
+      const row = janaf.species["H2O(g)"]!.rows.find((x) => x.T === T)!;
+      const logKf = row.logKf!; // NIST-JANAF 4th ed. 1998, table H-064 (H2O, ideal gas), log Kf column
+      const r = equilibriumComposition({ feed: { "H2O(g)": 2 }, species: ["H2O(g)", "H2(g)", "O2(g)"], T, P: 100000 });
+      const x = r.moleFractions;
+      const computed = Math.log10(x["H2O(g)"]! / (x["H2(g)"]! * Math.sqrt(x["O2(g)"]!)));
+      // table rounding 0.001 plus the Shomate fit's deviation from the table
+      expect(Math.abs(computed - logKf)).toBeLessThan(0.003);
+    });
+  }
+
+  it("equilibriumComposition(stoichiometric CH4–air products at 2226 K) gives the tabulated CO and NO", () => {
+    // products of CH4 + 2 (O2 + 3.76 N2) at 2226 K and 1 atm; published equilibrium mole fractions
+    // x_CO ≈ 0.0088 and x_NO ≈ 0.0020 (from memory: widely tabulated for the stoichiometric
+    // methane–air flame in combustion texts; they depend on the data set)
+    const r = equilibriumComposition({ feed: { "CH4(g)": 1, "O2(g)": 2, "N2(g)": 7.52 }, species: FLAME_SET, T: 2226, P: 101325 });
+    expect(r.moleFractions["CO(g)"]).toBeGreaterThan(0.0088 * 0.95);
+    expect(r.moleFractions["CO(g)"]).toBeLessThan(0.0088 * 1.05);
+    expect(r.moleFractions["NO(g)"]).toBeGreaterThan(0.0020 * 0.95);
+    expect(r.moleFractions["NO(g)"]).toBeLessThan(0.0020 * 1.05);
+    expect(r.excluded).toEqual(["Ar(g)"]);
+  });
+
+  it("equilibriumComposition({ H }) returns the T whose equilibrium enthalpy is H", () => {
+    const feed = { "CO(g)": 1, "H2O(g)": 1.5, "N2(g)": 0.2 };
+    const set = ["CO(g)", "CO2(g)", "H2(g)", "H2O(g)", "N2(g)", "CH4(g)"];
+    const atT = equilibriumComposition({ feed, species: set, T: 1100 });
+    const atH = equilibriumComposition({ feed, species: set, H: atT.enthalpy });
+    expect(atH.T).toBeCloseTo(1100, 5);
+    expect(Math.abs(atH.energyResidual) / Math.abs(atT.enthalpy)).toBeLessThan(1e-9);
+    expect(atH.temperatureIterations).toBeGreaterThan(0);
+  });
+
+  it("equilibriumComposition deposits graphite from a carbon-rich feed and puts its potential at g°/RT", () => {
+    const T = 900;
+    const r = equilibriumComposition({ feed: { "CH4(g)": 1, "O2(g)": 0.3 }, species: ["CH4(g)", "CO(g)", "CO2(g)", "H2(g)", "H2O(g)", "C(gr)"], T });
+    expect(r.condensed["C(gr)"]).toBeGreaterThan(0.1);
+    // a pure condensed phase present at equilibrium has μ = g° (stationarity; common practice)
+    expect(r.elementPotentials.C).toBeCloseTo(species("C(gr)").gibbs(T) / (R * T), 9);
+    expect(r.elementResidual).toBeLessThanOrEqual(1e-12);
+  });
+
+  it("equilibriumComposition leaves graphite out when the feed has oxygen to spare", () => {
+    const r = equilibriumComposition({ feed: { "CH4(g)": 1, "O2(g)": 2 }, species: ["CH4(g)", "CO(g)", "CO2(g)", "H2(g)", "H2O(g)", "O2(g)", "C(gr)"], T: 900 });
+    expect(r.condensed).toEqual({});
+    expect(r.moles["C(gr)"]).toBe(0);
+  });
+
+  it("equilibriumComposition({ elements }) equals the same feed given as species", () => {
+    const a = equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET, T: 2800 });
+    const b = equilibriumComposition({ elements: { H: 2, O: 1 }, species: WATER_SET, T: 2800 });
+    for (const k of WATER_SET) expect(b.moles[k]).toBeCloseTo(a.moles[k]!, 12);
+  });
+
+  it("equilibriumComposition does not mutate its inputs", () => {
+    const feed = Object.freeze({ "H2O(g)": 1 });
+    const set = Object.freeze([...WATER_SET]);
+    expect(() => equilibriumComposition(Object.freeze({ feed, species: set, T: 2500 }))).not.toThrow();
+  });
+
+  test.prop([
+    fc.double({ min: 0.1, max: 3, noNaN: true }),
+    fc.double({ min: 0.1, max: 3, noNaN: true }),
+    fc.double({ min: 0.5, max: 8, noNaN: true }),
+    fc.double({ min: 1200, max: 3400, noNaN: true }),
+    fc.double({ min: 2e4, max: 2e6, noNaN: true }),
+  ], { numRuns: 40 })("equilibriumComposition conserves every element to 1e-12 (CH4/O2/N2 feeds)", (ch4, o2, n2, T, P) => {
+    const feed = { "CH4(g)": ch4, "O2(g)": o2, "N2(g)": n2 };
+    const r = equilibriumComposition({ feed, species: [...FLAME_SET, "CH4(g)"], T, P });
+    expect(r.elementResidual).toBeLessThanOrEqual(1e-12);
+    const C = Object.entries(r.moles).reduce((s, [k, n]) => s + n * (species(k).formula.elements.C ?? 0), 0);
+    expect(Math.abs(C - ch4) / ch4).toBeLessThan(1e-12);
+  });
+
+  test.prop([
+    fc.double({ min: 1500, max: 3300, noNaN: true }),
+    fc.double({ min: -1, max: 1, noNaN: true }),
+  ], { numRuns: 30 })("equilibriumComposition is a Gibbs minimum: shifting along a reaction raises G", (T, direction) => {
+    const r = equilibriumComposition({ feed: { "H2O(g)": 1, "CO2(g)": 0.5 }, species: ["H2O(g)", "H2(g)", "O2(g)", "CO2(g)", "CO(g)"], T, P: 1e5 });
+    const G0 = mixtureGibbs(r.moles as Record<string, number>, T, 1e5);
+    // 2 CO2 ⇌ 2 CO + O2 and 2 H2O ⇌ 2 H2 + O2 keep the elements
+    const eps = 1e-3 * Math.min(r.moles["CO(g)"]!, r.moles["O2(g)"]!, r.moles["H2(g)"]!);
+    const m = { ...r.moles } as Record<string, number>;
+    m["CO2(g)"] = m["CO2(g)"]! - 2 * eps * direction;
+    m["CO(g)"] = m["CO(g)"]! + 2 * eps * direction;
+    m["H2O(g)"] = m["H2O(g)"]! + 2 * eps * (1 - Math.abs(direction));
+    m["H2(g)"] = m["H2(g)"]! - 2 * eps * (1 - Math.abs(direction));
+    m["O2(g)"] = m["O2(g)"]! + eps * direction - eps * (1 - Math.abs(direction));
+    expect(mixtureGibbs(m, T, 1e5)).toBeGreaterThanOrEqual(G0 - 1e-9 * Math.abs(G0));
+  });
+
+  it("equilibriumComposition rejects bad input with a code", () => {
+    expect(codeOf(() => equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET })).code).toBe("INVALID_ARGUMENT");
+    expect(codeOf(() => equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET, T: 2000, H: 0 })).code).toBe("INVALID_ARGUMENT");
+    expect(codeOf(() => equilibriumComposition({ species: WATER_SET, T: 2000 })).code).toBe("INVALID_ARGUMENT");
+    expect(codeOf(() => equilibriumComposition({ feed: { "H2O(g)": -1 }, species: WATER_SET, T: 2000 })).details).toMatchObject({ species: "H2O(g)", amount: -1 });
+    expect(codeOf(() => equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET, T: -5 })).code).toBe("INVALID_ARGUMENT");
+    expect(codeOf(() => equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET, T: 2000, P: 0 })).code).toBe("INVALID_ARGUMENT");
+    expect(codeOf(() => equilibriumComposition({ feed: { "H2O(g)": 1 }, species: [], T: 2000 })).code).toBe("INVALID_ARGUMENT");
+  });
+
+  it("equilibriumComposition throws ELEMENTS_NOT_COVERED when no product holds a feed element", () => {
+    const e = codeOf(() => equilibriumComposition({ feed: { "CH4(g)": 1, "O2(g)": 2, "N2(g)": 1 }, species: ["CO2(g)", "H2O(g)", "O2(g)"], T: 2000 }));
+    expect(e.code).toBe("ELEMENTS_NOT_COVERED");
+    expect(e.details.elements).toEqual(["N"]);
+  });
+
+  it("equilibriumComposition throws ELEMENTS_NOT_COVERED when the products cannot hold the element ratio", () => {
+    // CO2 alone holds C:O = 1:2 only; the feed has 1:3
+    const e = codeOf(() => equilibriumComposition({ elements: { C: 1, O: 3 }, species: ["CO2(g)"], T: 1500 }));
+    expect(e.code).toBe("ELEMENTS_NOT_COVERED");
+    expect(e.details.elementResidual).toBeGreaterThan(0.1);
+  });
+
+  it("equilibriumComposition throws NO_CONVERGENCE when the iteration limit is too small", () => {
+    const e = codeOf(() => equilibriumComposition({ feed: { "CH4(g)": 1, "O2(g)": 2, "N2(g)": 7.52 }, species: FLAME_SET, T: 2200 }, { maxIterations: 2 }));
+    expect(e.code).toBe("NO_CONVERGENCE");
+    expect(e.details).toMatchObject({ T: 2200 });
+  });
+
+  it("equilibriumComposition throws OUT_OF_RANGE beyond the data range unless asked to extrapolate", () => {
+    const e = codeOf(() => equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET, T: 4000 }));
+    expect(e.code).toBe("OUT_OF_RANGE");
+    expect(e.details.range).toEqual([298, 3500]);
+    const r = equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET, T: 4000 }, { extrapolate: true });
+    expect(r.extrapolated).toBe(true);
+  });
+});

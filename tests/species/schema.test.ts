@@ -1,0 +1,54 @@
+import { readFileSync, writeFileSync } from "node:fs";
+import { describe, expect, it } from "vitest";
+import { speciesDataJsonSchema, speciesDataSchema } from "../../src/species/schema.js";
+import { demoData } from "./helpers.js";
+
+const FILE = new URL("../../docs/species-data.schema.json", import.meta.url);
+
+describe("speciesDataSchema", () => {
+  it("the @example: an empty file parses", () => {
+    expect(speciesDataSchema.safeParse({ sources: {}, species: [] }).success).toBe(true);
+  });
+
+  it("rejects unknown fields (strict objects) and unknown Cp forms", () => {
+    expect(speciesDataSchema.safeParse({ sources: {}, species: [], extra: 1 }).success).toBe(false);
+    const d = demoData() as any;
+    d.species[0].heatCapacity.ranges[0].cp = { form: "cubic", a: 1 };
+    const r = speciesDataSchema.safeParse(d);
+    expect(r.success).toBe(false);
+    expect(r.error!.issues[0]!.path).toEqual(["species", 0, "heatCapacity", "ranges", 0, "cp", "form"]);
+  });
+
+  it("accepts every Cp form of the heat-capacity layer", () => {
+    const forms = [
+      { form: "shomate", A: 30, B: 1, C: 0, D: 0, E: 0 },
+      { form: "polynomial", a: 30, b: 0.01, temperatureUnit: "C", energyUnit: "J" },
+      { form: "nasa7", a: [3.5, 0, 0, 0, 0, -1000, 3] },
+      { form: "nasa9", a: [0, 0, 3.5, 0, 0, 0, 0, -1000, 3] },
+      { form: "constant", cpJPerMolK: 29 },
+      { form: "tabulated", temperaturesK: [200, 400], cpJPerMolK: [29, 30] },
+    ];
+    for (const cp of forms) {
+      const d = demoData() as any;
+      d.species[0].heatCapacity.ranges[0].cp = cp;
+      expect(speciesDataSchema.safeParse(d).success, cp.form).toBe(true);
+    }
+  });
+});
+
+describe("speciesDataJsonSchema", () => {
+  it("the @example: sources and species are required", () => {
+    expect(speciesDataJsonSchema().required).toEqual(["sources", "species"]);
+  });
+
+  it("docs/species-data.schema.json is up to date (regenerate: UPDATE_SCHEMA=1 npx vitest run tests/species/schema.test.ts)", () => {
+    const text = JSON.stringify(speciesDataJsonSchema(), null, 2) + "\n";
+    if (process.env["UPDATE_SCHEMA"] === "1") writeFileSync(FILE, text);
+    expect(readFileSync(FILE, "utf8")).toBe(text);
+  });
+
+  it("describes the Cp forms as a oneOf/anyOf keyed by form", () => {
+    const text = JSON.stringify(speciesDataJsonSchema());
+    for (const f of ["shomate", "polynomial", "nasa7", "nasa9", "constant", "tabulated"]) expect(text).toContain(`"const":"${f}"`);
+  });
+});
