@@ -62,15 +62,31 @@ const GAS = {
   "CO(g)": 0.005, "CO2(g)": 0.015, "N2(g)": 0.02, "H2S(g)": 0.0001, "He(g)": 0.0049,
 };
 
-/** Baseline: theoretical O2 and flue totals of the same gas by a hand-written element tally. */
-function handCombustion(): number {
-  const C = 0.87 + 0.1 + 0.06 + 0.02 + 0.005 + 0.015;
-  const H = 0.87 * 4 + 0.05 * 6 + 0.02 * 8 + 0.005 * 10 + 0.02 + 0.0002;
-  const O = 0.005 + 0.03;
-  const S = 0.0001;
+// element table of GAS written out by hand (C, H, O, N, S per molecule)
+const GAS_ELEMENTS: Record<string, [number, number, number, number, number]> = {
+  "CH4(g)": [1, 4, 0, 0, 0], "C2H6(g)": [2, 6, 0, 0, 0], "C3H8(g)": [3, 8, 0, 0, 0], "C4H10(g)": [4, 10, 0, 0, 0],
+  "H2(g)": [0, 2, 0, 0, 0], "CO(g)": [1, 0, 1, 0, 0], "CO2(g)": [1, 0, 2, 0, 0], "N2(g)": [0, 0, 0, 2, 0],
+  "H2S(g)": [0, 2, 0, 0, 1], "He(g)": [0, 0, 0, 0, 0],
+};
+
+/** Baseline: the same flue-gas balance by a hand-written element tally over a fixed table (no parsing, no checks). */
+function handCombustion(): Record<string, number> {
+  let C = 0, H = 0, O = 0, N = 0, S = 0;
+  for (const [k, n] of Object.entries(GAS)) {
+    const e = GAS_ELEMENTS[k]!;
+    C += n * e[0]; H += n * e[1]; O += n * e[2]; N += n * e[3]; S += n * e[4];
+  }
   const o2 = C + H / 4 + S - O / 2;
   const air = (1.15 * o2) / 0.209476;
-  return C + H / 2 + S + 0.02 + air - o2;
+  const flue: Record<string, number> = {
+    "CO2(g)": C + air * 0.000412, "H2O(g)": H / 2, "SO2(g)": S, "N2(g)": N / 2 + air * 0.780772,
+    "O2(g)": air * 0.209476 - o2, "Ar(g)": air * 0.00934, "He(g)": GAS["He(g)"],
+  };
+  let total = 0;
+  for (const v of Object.values(flue)) total += v;
+  const wet: Record<string, number> = {};
+  for (const [k, v] of Object.entries(flue)) wet[k] = v / total;
+  return wet;
 }
 
 export function run(): void {

@@ -59,6 +59,19 @@ export { scaleReaction, reverseReaction } from "./reaction/scaleReaction.js";
 // ── extent and combustion (layer 3) ──────────────────────────────────────────
 export type { Flows, Stream, ExtentSpec } from "./extent/types.js";
 // (extent section)
+export { solveExtents } from "./extent/solveExtents.js";
+export type { SolveExtentsInput, SolveExtentsOptions, SolveExtentsResult } from "./extent/solveExtents.js";
+export { limitingReactant } from "./extent/limitingReactant.js";
+export type { LimitingReactantResult } from "./extent/limitingReactant.js";
+export { reconcileExtents } from "./extent/reconcileExtents.js";
+export type { ReconcileExtentsInput, ReconcileExtentsOptions, ReconcileExtentsResult } from "./extent/reconcileExtents.js";
+export { massToMolarFlows, molarToMassFlows, moleFractions, massFractions, totalFlow, totalMassFlow } from "./extent/streams.js";
+export type { MassFlowOptions } from "./extent/streams.js";
+export { combustion, DRY_AIR, AIR_21_79 } from "./extent/combustion.js";
+export type { CombustionInput, CombustionResult, UltimateAnalysis, UltimateFuel, AirHumidity } from "./extent/combustion.js";
+export { excessAirFromFlueO2, excessAirFromFlueCO2 } from "./extent/excessAirFromFlueO2.js";
+export type { ExcessAirFromFlueO2Input, ExcessAirFromFlueCO2Input } from "./extent/excessAirFromFlueO2.js";
+export { waterSaturationPressure } from "./extent/waterSaturationPressure.js";
 
 // ── heat capacity (layer 3) ───────────────────────────────────────────────────
 // (heat-capacity section)
@@ -93,9 +106,33 @@ export { SOURCES, citation } from "./species/citation.js";
 
 // ── enthalpy (layer 5) ────────────────────────────────────────────────────────
 // (enthalpy section)
+export { reactionEnthalpy } from "./enthalpy/reactionEnthalpy.js";
+export type { ReactionEnthalpyOptions, ReactionEnthalpyResult, ReactionEnthalpyTerm } from "./enthalpy/reactionEnthalpy.js";
+export { reactionEntropy } from "./enthalpy/reactionEntropy.js";
+export type { ReactionEntropyOptions } from "./enthalpy/reactionEntropy.js";
+export { reactionGibbs } from "./enthalpy/reactionGibbs.js";
+export type { ReactionGibbsOptions } from "./enthalpy/reactionGibbs.js";
+export { equilibriumConstant } from "./enthalpy/equilibriumConstant.js";
+export type { EquilibriumConstantOptions } from "./enthalpy/equilibriumConstant.js";
+export { hessCombine } from "./enthalpy/hessCombine.js";
+export type { HessCombination, KnownReactionEnthalpy } from "./enthalpy/hessCombine.js";
+export { reactionEnthalpyFromCombustion, COMBUSTION_REFERENCE_SPECIES } from "./enthalpy/reactionEnthalpyFromCombustion.js";
+export type { CombustionEnthalpyResult } from "./enthalpy/reactionEnthalpyFromCombustion.js";
+export { formationEnthalpyFromCombustion } from "./enthalpy/formationEnthalpyFromCombustion.js";
+export type { FormationEnthalpyFromCombustionOptions } from "./enthalpy/formationEnthalpyFromCombustion.js";
+export { heatingValue } from "./enthalpy/heatingValue.js";
+export type { HeatingValueOptions } from "./enthalpy/heatingValue.js";
+export { wobbeIndex, AIR_MOLAR_MASS_G_PER_MOL } from "./enthalpy/wobbeIndex.js";
+export type { WobbeIndexOptions } from "./enthalpy/wobbeIndex.js";
 
 // ── energy balances (layer 6) ─────────────────────────────────────────────────
 // (energy section)
+export { heatDuty } from "./energy/heatDuty.js";
+export type { HeatDutyInput, HeatDutyOptions, HeatDutyResult, StreamHeat, PhaseChange } from "./energy/heatDuty.js";
+export { adiabaticReactionTemperature, adiabaticTemperatureRise } from "./energy/adiabaticReactionTemperature.js";
+export type {
+  AdiabaticReactionInput, AdiabaticReactionOptions, AdiabaticReactionResult, AdiabaticTemperatureRiseResult,
+} from "./energy/adiabaticReactionTemperature.js";
 
 // ── flame (layer 6) ───────────────────────────────────────────────────────────
 // (flame section)

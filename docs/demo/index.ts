@@ -5,9 +5,13 @@ export {};
  */
 const sections: string[] = [
   // (demo sections: add "./<area>.js" here)
+  "./extent.js",
+  "./reaction.js",
   "./formula.js",
   "./species.js",
   "./heat-capacity.js",
+  "./energy.js",
+  "./flame.js",
 ];
 
 console.log("rxtherm demo — invented plant scenarios, every number traceable to its data source\n");

@@ -41,7 +41,7 @@ export function invalidData(fn: string, label: string | undefined, path: (string
   throw new RxthermError(
     "INVALID_DATA",
     `${fn}${label ? ` (${label})` : ""}: ${requirement} at ${path.join(".")}, got ${short(received)}`,
-    { label, path, received },
+    { label, path, received, issues: [{ path, message: requirement }] },
   );
 }
 
@@ -272,7 +272,10 @@ export function prepareRanges(fn: string, label: string | undefined, ranges: rea
       throw new RxthermError(
         "INVALID_DATA",
         `${fn}${label ? ` (${label})` : ""}: ranges must be contiguous, found a ${problem} between ${prev.range.TmaxK} K and ${next.range.TminK} K`,
-        { label, path: ["ranges", next.index, "TminK"], problem, boundary: [prev.range.TmaxK, next.range.TminK], ranges: [prev.index, next.index] },
+        {
+          label, path: ["ranges", next.index, "TminK"], problem, boundary: [prev.range.TmaxK, next.range.TminK], ranges: [prev.index, next.index],
+          issues: [{ path: ["ranges", next.index, "TminK"], message: `ranges must be contiguous (${problem})` }],
+        },
       );
     }
   }

@@ -12,6 +12,7 @@ import { RxthermError } from "../errors.js";
 import { GAS_CONSTANT_J_PER_MOL_K, STANDARD_PRESSURE_PA } from "../units.js";
 import { increasingNewton } from "./increasingNewton.js";
 import type { Species } from "../species/types.js";
+import { nonNegativeLeastSquares } from "./nonNegativeLeastSquares.js";
 import {
   coldStart,
   createGibbsState,
@@ -52,11 +53,14 @@ export interface Engine {
   readonly rows: readonly number[];
   readonly problem: GibbsProblem;
   readonly state: GibbsState;
-  /** Data-range intersection of the gas species, K. */
+  /** Data-range intersection of the product species, K. */
   readonly rangeK: readonly [number, number];
   readonly mu0: Float64Array;
   readonly hRT: Float64Array;
   readonly cpR: Float64Array;
+  /** Scratch: d ln n_j/dT and dn_k/dT. */
+  readonly dlnT: Float64Array;
+  readonly dncT: Float64Array;
   /** Temperature at which mu0/hRT/cpR were last evaluated (NaN before). */
   thermoT: number;
   /** Iterations spent by the core since the last reset of this counter. */
@@ -115,6 +119,7 @@ export function prepareEngine(
     bAll[i] = feedElements.get(elements[i]!)!;
     for (let j = 0; j < ns; j++) aAll[i * ns + j] = species[j]!.formula.elements[elements[i]!] ?? 0;
   }
+  checkCovered(fn, aAll, mAll, ns, bAll, keys);
   const rows = independentRows(aAll, mAll, ns);
   const m = rows.length;
   const a = new Float64Array(m * ns);
@@ -131,10 +136,8 @@ export function prepareEngine(
   for (let j = 0; j < ns; j++) {
     const s = species[j]!;
     gas[j] = s.phase === "g" ? 1 : 0;
-    if (gas[j]) {
-      lo = Math.max(lo, s.range[0]);
-      hi = Math.min(hi, s.range[1]);
-    }
+    lo = Math.max(lo, s.range[0]);
+    hi = Math.min(hi, s.range[1]);
   }
   const problem: GibbsProblem = { m, ns, a, gas, b };
   return {
@@ -144,6 +147,8 @@ export function prepareEngine(
     mu0: new Float64Array(ns),
     hRT: new Float64Array(ns),
     cpR: new Float64Array(ns),
+    dlnT: new Float64Array(ns),
+    dncT: new Float64Array(ns),
     thermoT: Number.NaN,
     iterations: 0,
     extrapolated: false,
@@ -159,6 +164,7 @@ export function setFeedElements(e: Engine, feedElements: ReadonlyMap<string, num
     e.bAll[i] = feedElements.get(e.elements[i]!)!;
     scale += e.bAll[i]!;
   }
+  checkCovered(e.fn, e.aAll, e.elements.length, e.problem.ns, e.bAll, e.keys);
   // the warm state is kept in normalised amounts (b / scale), so it stays a good start
   e.scale = scale;
   e.rows.forEach((r, i) => {
@@ -173,10 +179,11 @@ export function evaluateThermo(e: Engine, T: number, lim: EngineLimits): void {
   const opts = { extrapolate: lim.extrapolate };
   if (T < e.rangeK[0] || T > e.rangeK[1]) {
     if (!lim.extrapolate) {
+      const worst = e.species.find((sp) => T < sp.range[0] || T > sp.range[1]);
       throw new RxthermError(
         "OUT_OF_RANGE",
-        `${e.fn} needs product data at ${T} K, outside the common data range [${e.rangeK[0]}, ${e.rangeK[1]}] K of the product set`,
-        { T, range: [e.rangeK[0], e.rangeK[1]] },
+        `${e.fn} needs product data at ${T} K, outside the common data range [${e.rangeK[0]}, ${e.rangeK[1]}] K of the product set (${worst?.key ?? "?"} covers [${worst?.range[0]}, ${worst?.range[1]}] K)`,
+        { T, range: [e.rangeK[0], e.rangeK[1]], species: worst?.key ?? null },
       );
     }
     e.extrapolated = true;
@@ -249,8 +256,8 @@ export function amount(e: Engine, j: number): number {
  */
 export function energyAndSlope(e: Engine, T: number, kind: "P" | "V"): { value: number; slope: number } {
   const { ns, gas } = e.problem;
-  const dln = new Float64Array(ns);
-  const dnc = new Float64Array(ns);
+  const dln = e.dlnT;
+  const dnc = e.dncT;
   const c: GibbsConditions = { mu0: e.mu0, kind, lnP: 0 };
   const ok = equilibriumDerivatives(e.problem, c, e.state, T, e.hRT, dln, dnc);
   let value = 0;
@@ -303,6 +310,25 @@ export function solveEnergy(
   // probes of the search outside the range do not count; the answer does
   e.extrapolated = T < e.rangeK[0] || T > e.rangeK[1];
   return { T, outerIterations: root.iterations, residual: root.value };
+}
+
+/**
+ * Throw ELEMENTS_NOT_COVERED unless some non-negative amounts of the products hold the feed's
+ * elements exactly (non-negative least squares; relative residual above 1e-8 means they cannot).
+ */
+function checkCovered(fn: string, a: Float64Array, m: number, ns: number, b: Float64Array, keys: readonly string[]): void {
+  const scaled = new Float64Array(m);
+  let sum = 0;
+  for (let i = 0; i < m; i++) sum += b[i]!;
+  for (let i = 0; i < m; i++) scaled[i] = b[i]! / sum;
+  const { residual } = nonNegativeLeastSquares(a, m, ns, scaled);
+  if (residual > 1e-8) {
+    throw new RxthermError(
+      "ELEMENTS_NOT_COVERED",
+      `${fn} requires a product set that can hold the feed's element ratios; no non-negative amounts of ${keys.join(", ")} do (closest misses an element by ${residual.toExponential(2)}, relative)`,
+      { elementResidual: residual, products: [...keys] },
+    );
+  }
 }
 
 /** Indices of a maximal set of linearly independent rows of a (m × n), by pivoted elimination. */

@@ -112,8 +112,11 @@ export function resolveMembers(fn: string, what: string, flows: string | Flows, 
 /** Element totals of members (scaled by `factor`) added into `into`. */
 function addElements(into: Map<string, number>, members: readonly Member[], factor: number): void {
   if (factor === 0) return;
-  for (const m of members) {
-    for (const [el, c] of Object.entries(m.species.formula.elements)) {
+  for (let i = 0; i < members.length; i++) {
+    const m = members[i]!;
+    const e = m.species.formula.elements;
+    for (const el in e) {
+      const c = e[el]!;
       if (c !== 0) into.set(el, (into.get(el) ?? 0) + factor * m.n * c);
     }
   }
@@ -206,25 +209,15 @@ function oxidizerUnits(s: FlameSetup, phi: number): number {
 /** Solve one point of a prepared problem, warm-starting from the previous point. */
 export function solveFlamePoint(s: FlameSetup, pt: FlamePoint): FlamePointResult {
   const units = oxidizerUnits(s, pt.phi);
-  const oxOpts = { extrapolate: s.lim.extrapolate };
-  // reactant energy, gas moles × T (for the vessel volume)
-  let H0 = 0;
-  let nRT = 0;
-  let reactantsExtrapolated = false;
-  const addStream = (members: readonly Member[], factor: number, T: number): void => {
-    for (const m of members) {
-      const n = m.n * factor;
-      if (T < m.species.range[0] || T > m.species.range[1]) reactantsExtrapolated = true;
-      H0 += n * m.species.enthalpy(T, oxOpts);
-      if (m.species.phase === "g") nRT += n * R * T;
-    }
-  };
-  addStream(s.fuel, 1, pt.fuelT);
-  addStream(s.oxidizer, units, pt.oxidizerT);
-  addStream(s.diluent, 1, pt.diluentT);
+  // reactant enthalpy and Σ n R T of the gases (for the vessel volume)
+  const acc: StreamSums = { H: 0, nRT: 0, extrapolated: false };
+  addStream(s.fn, "fuel", acc, s.fuel, 1, pt.fuelT, s.lim.extrapolate);
+  addStream(s.fn, "oxidizer", acc, s.oxidizer, units, pt.oxidizerT, s.lim.extrapolate);
+  addStream(s.fn, "diluent", acc, s.diluent, 1, pt.diluentT, s.lim.extrapolate);
+  const reactantsExtrapolated = acc.extrapolated;
   // constant volume: V = Σ n R T_in / P; the balance is on U = H − (n R T) for gases
-  const volume = nRT / pt.P;
-  const target = s.constantVolume ? H0 - nRT : H0;
+  const volume = acc.nRT / pt.P;
+  const target = s.constantVolume ? acc.H - acc.nRT : acc.H;
   const els = new Map<string, number>();
   addElements(els, s.fuel, 1);
   addElements(els, s.oxidizer, units);
@@ -234,7 +227,8 @@ export function solveFlamePoint(s: FlameSetup, pt: FlamePoint): FlamePointResult
 
   let completeT: number | null = null;
   let complete: CompleteSolution | null = null;
-  const canComplete = [...els.keys()].every((e) => COMPLETE_ELEMENTS.has(e));
+  let canComplete = true;
+  for (const el of els.keys()) if (!COMPLETE_ELEMENTS.has(el)) canComplete = false;
   if (s.mode === "complete" || canComplete) {
     try {
       complete = solveComplete(s, els, target, s.constantVolume, pt);
@@ -325,9 +319,39 @@ function cached(s: FlameSetup, key: string): Species {
 
 function gasMolesOf(s: FlameSetup, moles: Record<string, number>): number {
   let g = 0;
-  for (const [k, n] of Object.entries(moles)) if (cached(s, k).phase === "g") g += n;
+  for (const k in moles) if (cached(s, k).phase === "g") g += moles[k]!;
   return g;
 }
+
+/** Running sums over the reactant streams. */
+interface StreamSums {
+  H: number;
+  nRT: number;
+  extrapolated: boolean;
+}
+
+function addStream(fn: string, what: string, acc: StreamSums, members: readonly Member[], factor: number, T: number, extrapolate: boolean): void {
+  const opts = extrapolate ? EXTRAPOLATE : STRICT;
+  for (let i = 0; i < members.length; i++) {
+    const m = members[i]!;
+    const n = m.n * factor;
+    if (T < m.species.range[0] || T > m.species.range[1]) {
+      if (!extrapolate) {
+        throw new RxthermError(
+          "OUT_OF_RANGE",
+          `${fn} needs ${m.key} at the ${what} temperature ${T} K, outside its data range [${m.species.range[0]}, ${m.species.range[1]}] K (pass { extrapolate: true } to extend it)`,
+          { species: m.key, T, range: [m.species.range[0], m.species.range[1]], stream: what },
+        );
+      }
+      acc.extrapolated = true;
+    }
+    acc.H += n * m.species.enthalpy(T, opts);
+    if (m.species.phase === "g") acc.nRT += n * R * T;
+  }
+}
+
+const EXTRAPOLATE = Object.freeze({ extrapolate: true });
+const STRICT = Object.freeze({ extrapolate: false });
 
 interface CompleteSolution {
   T: number;
@@ -345,59 +369,156 @@ interface CompleteSolution {
  * even of CO for every carbon is outside this model (it would deposit carbon).
  */
 function solveComplete(s: FlameSetup, els: ReadonlyMap<string, number>, target: number, constantVolume: boolean, pt: FlamePoint): CompleteSolution {
-  const C = els.get("C") ?? 0;
-  const H = els.get("H") ?? 0;
-  const O = els.get("O") ?? 0;
-  const N = els.get("N") ?? 0;
-  const S = els.get("S") ?? 0;
-  const oFree = O - 2 * S; // sulphur always to SO2 (documented)
-  const lean = oFree >= 2 * C + H / 2;
-  if (!lean && oFree < C) {
-    throw new RxthermError(
-      "INVALID_ARGUMENT",
-      `${s.fn} in mode "complete" needs at least one O per C beyond the sulphur (it would otherwise deposit carbon); this mixture has ${oFree} O for ${C} C — use mode "equilibrium" with C(gr) among the products`,
-      { equivalenceRatio: pt.phi, oxygen: oFree, carbon: C },
-    );
+  const bal = new CompleteBalance(s, els, target, constantVolume, pt);
+  const guess = Number.isFinite(s.lastCompleteT) ? s.lastCompleteT : 2000;
+  const root = increasingNewton(s.fn, (T) => bal.evaluate(T), guess, bal.limits, s.lim.toleranceK, 200);
+  const T = root.x;
+  bal.evaluate(T);
+  const moles: Record<string, number> = {};
+  for (let k = 0; k < bal.keys.length; k++) moles[bal.keys[k]!] = (moles[bal.keys[k]!] ?? 0) + bal.amounts[k]!;
+  if (bal.rich) {
+    if (bal.C > 0) {
+      moles["CO2(g)"] = bal.split[0];
+      moles["CO(g)"] = bal.split[1];
+    }
+    if (bal.H > 0) {
+      moles["H2O(g)"] = bal.split[2];
+      moles["H2(g)"] = bal.split[3];
+    }
   }
-  const fixed: [string, number][] = [];
-  if (N > 0) fixed.push(["N2(g)", N / 2]);
-  if (S > 0) fixed.push(["SO2(g)", S]);
-  for (const g of NOBLE) {
-    const n = els.get(g) ?? 0;
-    if (n > 0) fixed.push([`${g}(g)`, n]);
+  return { T, moles, residual: root.value, scale: bal.scale, iterations: root.iterations, extrapolated: T < bal.range[0] || T > bal.range[1] };
+}
+
+/** The complete-combustion energy balance of one point (no closures on the hot path). */
+class CompleteBalance {
+  readonly keys: string[] = [];
+  readonly amounts: number[] = [];
+  readonly species: Species[] = [];
+  readonly rich: boolean;
+  readonly C: number;
+  readonly H: number;
+  readonly oFree: number;
+  readonly shift: (Species | null)[] = [null, null, null, null];
+  readonly range: [number, number];
+  readonly limits: [number, number];
+  /** CO2, CO, H2O, H2 (rich mixtures), mol. */
+  readonly split: [number, number, number, number] = [0, 0, 0, 0];
+  readonly opts: { extrapolate: boolean };
+  readonly out = { value: 0, slope: 0 };
+  scale = 0;
+
+  constructor(
+    s: FlameSetup,
+    els: ReadonlyMap<string, number>,
+    private readonly target: number,
+    private readonly constantVolume: boolean,
+    pt: FlamePoint,
+  ) {
+    const C = els.get("C") ?? 0;
+    const H = els.get("H") ?? 0;
+    const O = els.get("O") ?? 0;
+    const N = els.get("N") ?? 0;
+    const S = els.get("S") ?? 0;
+    const oFree = O - 2 * S; // sulphur always to SO2 (documented)
+    this.C = C;
+    this.H = H;
+    this.oFree = oFree;
+    this.rich = oFree < 2 * C + H / 2;
+    if (this.rich && oFree < C) {
+      throw new RxthermError(
+        "INVALID_ARGUMENT",
+        `${s.fn} in mode "complete" needs at least one O per C beyond the sulphur (it would otherwise deposit carbon); this mixture has ${oFree} O for ${C} C — use mode "equilibrium" with C(gr) among the products`,
+        { equivalenceRatio: pt.phi, oxygen: oFree, carbon: C },
+      );
+    }
+    const add = (key: string, n: number): void => {
+      this.keys.push(key);
+      this.amounts.push(n);
+      this.species.push(cached(s, key));
+    };
+    if (N > 0) add("N2(g)", N / 2);
+    if (S > 0) add("SO2(g)", S);
+    for (const g of NOBLE) {
+      const n = els.get(g) ?? 0;
+      if (n > 0) add(`${g}(g)`, n);
+    }
+    if (!this.rich) {
+      if (C > 0) add("CO2(g)", C);
+      if (H > 0) add("H2O(g)", H / 2);
+      const o2 = (oFree - 2 * C - H / 2) / 2;
+      if (o2 > 0) add("O2(g)", o2);
+    } else {
+      if (C > 0) {
+        this.shift[0] = cached(s, "CO2(g)");
+        this.shift[1] = cached(s, "CO(g)");
+      }
+      if (H > 0) {
+        this.shift[2] = cached(s, "H2O(g)");
+        this.shift[3] = cached(s, "H2(g)");
+      }
+    }
+    let lo = -Infinity;
+    let hi = Infinity;
+    for (const sp of [...this.species, ...this.shift]) {
+      if (sp === null) continue;
+      lo = Math.max(lo, sp.range[0]);
+      hi = Math.min(hi, sp.range[1]);
+    }
+    this.range = [lo, hi];
+    this.limits = s.lim.extrapolate ? [Math.min(lo, 200), Math.max(hi, 6000)] : [lo, hi];
+    this.opts = s.lim.extrapolate ? EXTRAPOLATE : STRICT;
   }
-  if (lean) {
-    if (C > 0) fixed.push(["CO2(g)", C]);
-    if (H > 0) fixed.push(["H2O(g)", H / 2]);
-    const o2 = (oFree - 2 * C - H / 2) / 2;
-    if (o2 > 0) fixed.push(["O2(g)", o2]);
+
+  /** Energy of the products at T minus the target (J) and its slope (J/K, composition frozen). */
+  evaluate(T: number): { value: number; slope: number } {
+    let value = 0;
+    let slope = 0;
+    let sc = 0;
+    const gasTerm = this.constantVolume ? R : 0;
+    for (let k = 0; k < this.species.length; k++) {
+      const sp = this.species[k]!;
+      const n = this.amounts[k]!;
+      const h = sp.enthalpy(T, this.opts);
+      const g = sp.phase === "g" ? gasTerm : 0;
+      value += n * (h - g * T);
+      slope += n * (sp.cp(T, this.opts) - g);
+      sc += Math.abs(n * h);
+    }
+    if (this.rich) {
+      this.splitAt(T);
+      for (let k = 0; k < 4; k++) {
+        const sp = this.shift[k] ?? null;
+        const n = this.split[k]!;
+        if (sp === null || n === 0) continue;
+        const h = sp.enthalpy(T, this.opts);
+        value += n * (h - gasTerm * T);
+        slope += n * (sp.cp(T, this.opts) - gasTerm);
+        sc += Math.abs(n * h);
+      }
+    }
+    this.scale = sc;
+    this.out.value = value - this.target;
+    this.out.slope = slope;
+    return this.out;
   }
-  const fixedSpecies = fixed.map(([k]) => cached(s, k));
-  const shift = lean ? null : {
-    co2: C > 0 ? cached(s, "CO2(g)") : null,
-    co: C > 0 ? cached(s, "CO(g)") : null,
-    h2o: H > 0 ? cached(s, "H2O(g)") : null,
-    h2: H > 0 ? cached(s, "H2(g)") : null,
-  };
-  const all = [...fixedSpecies, ...(shift ? [shift.co2, shift.co, shift.h2o, shift.h2].filter((x): x is Species => x !== null) : [])];
-  let lo = -Infinity;
-  let hi = Infinity;
-  for (const sp of all) {
-    lo = Math.max(lo, sp.range[0]);
-    hi = Math.min(hi, sp.range[1]);
-  }
-  const limits: [number, number] = s.lim.extrapolate ? [Math.min(lo, 200), Math.max(hi, 6000)] : [lo, hi];
-  const opts = { extrapolate: s.lim.extrapolate };
-  // rich split at T: x = CO2; CO = C − x; H2O = oFree − C − x; H2 = H/2 − H2O
-  const split = (T: number): [number, number, number, number] => {
-    if (C === 0) return [0, 0, oFree, H / 2 - oFree];
-    if (H === 0) return [oFree - C, 2 * C - oFree, 0, 0];
-    const g = (sp: Species): number => sp.enthalpy(T, opts) - T * sp.entropy(T, STANDARD_PRESSURE_PA, opts);
-    const dG = g(shift!.co2!) + g(shift!.h2!) - g(shift!.co!) - g(shift!.h2o!);
+
+  /** Rich split at T: x = CO2; CO = C − x; H2O = O − C − x; H2 = H/2 − H2O. */
+  private splitAt(T: number): void {
+    const { C, H, oFree } = this;
+    const sp = this.split;
+    if (C === 0) {
+      sp[0] = 0; sp[1] = 0; sp[2] = oFree; sp[3] = H / 2 - oFree;
+      return;
+    }
+    if (H === 0) {
+      sp[0] = oFree - C; sp[1] = 2 * C - oFree; sp[2] = 0; sp[3] = 0;
+      return;
+    }
+    const dG = this.g(0, T) + this.g(3, T) - this.g(1, T) - this.g(2, T);
     const K = Math.exp(-dG / (R * T));
     const xLo = Math.max(0, oFree - C - H / 2);
     const xHi = Math.min(C, oFree - C);
-    // f(x) = x·H2 − K·CO·H2O is increasing in x; root by the stable quadratic formula, then guarded
+    // f(x) = x·H2 − K·CO·H2O is increasing in x: the stable quadratic root inside [xLo, xHi]
     const qa = 1 - K;
     const qb = H / 2 - oFree + C + K * oFree;
     const qc = -K * C * (oFree - C);
@@ -405,60 +526,18 @@ function solveComplete(s: FlameSetup, els: ReadonlyMap<string, number>, target: 
     if (Math.abs(qa) < 1e-12 * Math.max(Math.abs(qb), 1e-300)) x = -qc / qb;
     else {
       const disc = Math.sqrt(Math.max(qb * qb - 4 * qa * qc, 0));
-      const q = -0.5 * (qb + Math.sign(qb || 1) * disc);
+      const q = -0.5 * (qb + (qb >= 0 ? 1 : -1) * disc);
       const r1 = q / qa;
       const r2 = qc / q;
       x = r1 >= xLo - 1e-12 && r1 <= xHi + 1e-12 ? r1 : r2;
     }
     x = Math.min(Math.max(x, xLo), xHi);
     const h2o = oFree - C - x;
-    return [x, C - x, h2o, H / 2 - h2o];
-  };
-  let scale = 0;
-  const energy = (T: number): { value: number; slope: number } => {
-    let value = 0;
-    let slope = 0;
-    let sc = 0;
-    const add = (sp: Species, n: number): void => {
-      if (n === 0) return;
-      const h = sp.enthalpy(T, opts);
-      const gasTerm = constantVolume && sp.phase === "g" ? R : 0;
-      value += n * (h - gasTerm * T);
-      slope += n * (sp.cp(T, opts) - gasTerm);
-      sc += Math.abs(n * h);
-    };
-    for (let k = 0; k < fixed.length; k++) add(fixedSpecies[k]!, fixed[k]![1]);
-    if (shift) {
-      const [a, b, d, e] = split(T);
-      if (shift.co2) add(shift.co2, a);
-      if (shift.co) add(shift.co, b);
-      if (shift.h2o) add(shift.h2o, d);
-      if (shift.h2) add(shift.h2, e);
-    }
-    scale = sc;
-    return { value: value - target, slope };
-  };
-  let cachedT = Number.NaN;
-  let cachedE = { value: 0, slope: 0 };
-  const at = (T: number): { value: number; slope: number } => {
-    if (T !== cachedT) {
-      cachedE = energy(T);
-      cachedT = T;
-    }
-    return cachedE;
-  };
-  const guess = Number.isFinite(s.lastCompleteT) ? s.lastCompleteT : 2000;
-  const root = increasingNewton(s.fn, at, guess, limits, s.lim.toleranceK, 200);
-  const T = root.x;
-  const fin = at(T);
-  const moles: Record<string, number> = {};
-  for (const [k, n] of fixed) moles[k] = (moles[k] ?? 0) + n;
-  if (shift) {
-    const [a, b, d, e] = split(T);
-    if (shift.co2) moles["CO2(g)"] = a;
-    if (shift.co) moles["CO(g)"] = b;
-    if (shift.h2o) moles["H2O(g)"] = d;
-    if (shift.h2) moles["H2(g)"] = e;
+    sp[0] = x; sp[1] = C - x; sp[2] = h2o; sp[3] = H / 2 - h2o;
   }
-  return { T, moles, residual: fin.value, scale, iterations: root.iterations, extrapolated: T < lo || T > hi };
+
+  private g(k: number, T: number): number {
+    const sp = this.shift[k]!;
+    return sp.enthalpy(T, this.opts) - T * sp.entropy(T, STANDARD_PRESSURE_PA, this.opts);
+  }
 }

@@ -55,6 +55,19 @@ export interface GibbsState {
   pi: Float64Array;
   /** True once the state holds a converged solution (usable for warm starts). */
   warm: boolean;
+  /** Scratch arrays reused by every iteration (no allocation on the hot path). */
+  readonly work: GibbsWork;
+}
+
+/** Scratch arrays of one problem size. */
+export interface GibbsWork {
+  readonly M: Float64Array;
+  readonly r: Float64Array;
+  readonly mu: Float64Array;
+  readonly n: Float64Array;
+  readonly dln: Float64Array;
+  readonly dmu: Float64Array;
+  readonly cond: Int32Array;
 }
 
 /** Conditions of one solve. */
@@ -104,9 +117,23 @@ export function createGibbsState(p: GibbsProblem): GibbsState {
     lnN: 0,
     pi: new Float64Array(p.m),
     warm: false,
+    work: createWork(p),
   };
   coldStart(p, s);
   return s;
+}
+
+function createWork(p: GibbsProblem): GibbsWork {
+  const size = p.m + 1 + p.ns;
+  return {
+    M: new Float64Array(size * size),
+    r: new Float64Array(size),
+    mu: new Float64Array(p.ns),
+    n: new Float64Array(p.ns),
+    dln: new Float64Array(p.ns),
+    dmu: new Float64Array(p.ns),
+    cond: new Int32Array(p.ns),
+  };
 }
 
 /** Reset a state to the cold initial estimate: equal amounts of every gas species. */
@@ -170,9 +197,7 @@ export function elementResidual(p: GibbsProblem, s: GibbsState): number {
 export function solveGibbs(p: GibbsProblem, c: GibbsConditions, s: GibbsState, lim: GibbsLimits): GibbsOutcome {
   const { m, ns, a, gas, b } = p;
   const isP = c.kind === "P";
-  const mu = new Float64Array(ns);
-  const n = new Float64Array(ns);
-  const dln = new Float64Array(ns);
+  const { mu, n, dln, M, r, cond } = s.work;
   let bScale = 0;
   for (let i = 0; i < m; i++) bScale += b[i]!;
   let iterations = 0;
@@ -181,12 +206,11 @@ export function solveGibbs(p: GibbsProblem, c: GibbsConditions, s: GibbsState, l
   while (iterations < lim.maxIterations) {
     iterations++;
     // active condensed species, in order
-    const cond: number[] = [];
-    for (let j = 0; j < ns; j++) if (!gas[j] && s.active[j]) cond.push(j);
-    const nc = cond.length;
+    let nc = 0;
+    for (let j = 0; j < ns; j++) if (!gas[j] && s.active[j]) cond[nc++] = j;
     const size = m + (isP ? 1 : 0) + nc;
-    const M = new Float64Array(size * size);
-    const r = new Float64Array(size);
+    M.fill(0, 0, size * size);
+    r.fill(0, 0, size);
     let nGas = 0;
     let sumNmu = 0;
     for (let j = 0; j < ns; j++) {
@@ -340,14 +364,13 @@ export function equilibriumDerivatives(
 ): boolean {
   const { m, ns, a, gas } = p;
   const isP = c.kind === "P";
-  const cond: number[] = [];
-  for (let j = 0; j < ns; j++) if (!gas[j] && s.active[j]) cond.push(j);
-  const nc = cond.length;
+  const { M, r, cond, dmu } = s.work;
+  let nc = 0;
+  for (let j = 0; j < ns; j++) if (!gas[j] && s.active[j]) cond[nc++] = j;
   const size = m + (isP ? 1 : 0) + nc;
-  const M = new Float64Array(size * size);
-  const r = new Float64Array(size);
+  M.fill(0, 0, size * size);
+  r.fill(0, 0, size);
   // d mu0_j/dT = −h_j/(R T²); at fixed V the ln(RT/V) term adds 1/T for gases
-  const dmu = new Float64Array(ns);
   for (let j = 0; j < ns; j++) dmu[j] = -hRT[j]! / T + (gas[j] && !isP ? 1 / T : 0);
   let nGas = 0;
   let rhsN = 0;

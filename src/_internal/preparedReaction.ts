@@ -109,3 +109,15 @@ function gcd(a: bigint, b: bigint): bigint {
   while (b !== 0n) [a, b] = [b, a % b];
   return a < 0n ? -a : a;
 }
+
+const standardSums = new WeakMap<PreparedReaction, Decimal>();
+
+/** Exact Σ ν·ΔfH°(298.15 K) of a prepared reaction in J/mol, computed once and cached. */
+export function standardEnthalpyExact(p: PreparedReaction): Decimal {
+  let sum = standardSums.get(p);
+  if (sum === undefined) {
+    sum = exactWeightedSum(p.nuExact, p.species.map((s) => s.hf298Exact));
+    standardSums.set(p, sum);
+  }
+  return sum;
+}

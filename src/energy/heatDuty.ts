@@ -4,7 +4,7 @@ import type { Library, Species } from "../species/types.js";
 import type { Reaction } from "../reaction/types.js";
 import type { Stream } from "../extent/types.js";
 import { resolveSpeciesCached } from "../_internal/enthalpyLinks.js";
-import { prepareReaction, exactWeightedSum } from "../_internal/preparedReaction.js";
+import { prepareReaction, standardEnthalpyExact } from "../_internal/preparedReaction.js";
 
 /**
  * Streams and optional reactions of an energy balance, for {@link heatDuty}.
@@ -281,25 +281,27 @@ export function resolveStream(
 
 /** ELEMENT_IMBALANCE unless Σin = Σout for every element (1e-9 relative). */
 function checkElements(fn: string, net: Map<string, Entry>): void {
-  const inTotals = new Map<string, number>();
-  const outTotals = new Map<string, number>();
+  // element totals in scratch arrays indexed by a module-wide element slot (no per-call maps)
+  const used: number[] = [];
   for (const e of net.values()) {
-    const els = e.species.formula.elements;
-    for (const el in els) {
-      const c = els[el]!;
-      inTotals.set(el, (inTotals.get(el) ?? 0) + e.nIn * c);
-      outTotals.set(el, (outTotals.get(el) ?? 0) + e.nOut * c);
+    const v = elementVector(e.species);
+    for (let k = 0; k < v.slots.length; k++) {
+      const slot = v.slots[k]!;
+      if (!slotUsed[slot]) { slotUsed[slot] = 1; used.push(slot); scratchIn[slot] = 0; scratchOut[slot] = 0; }
+      scratchIn[slot] = scratchIn[slot]! + e.nIn * v.counts[k]!;
+      scratchOut[slot] = scratchOut[slot]! + e.nOut * v.counts[k]!;
     }
   }
   // 1e-9 relative per element, plus 1e-15 of the largest element flow so that round-off dust on a
   // trace element (1e-300 mol) does not count as an imbalance
   let largest = 0;
-  for (const v of inTotals.values()) largest = Math.max(largest, Math.abs(v));
-  for (const v of outTotals.values()) largest = Math.max(largest, Math.abs(v));
+  for (const slot of used) largest = Math.max(largest, Math.abs(scratchIn[slot]!), Math.abs(scratchOut[slot]!));
   let imbalance: Record<string, number> | null = null;
-  for (const [el, a] of inTotals) {
-    const b = outTotals.get(el) ?? 0;
-    if (Math.abs(b - a) > 1e-9 * Math.max(Math.abs(a), Math.abs(b)) + 1e-15 * largest) (imbalance ??= {})[el] = b - a;
+  for (const slot of used) {
+    const a = scratchIn[slot]!;
+    const b = scratchOut[slot]!;
+    slotUsed[slot] = 0;
+    if (Math.abs(b - a) > 1e-9 * Math.max(Math.abs(a), Math.abs(b)) + 1e-15 * largest) (imbalance ??= {})[slotSymbols[slot]!] = b - a;
   }
   if (imbalance) {
     throw new RxthermError(
@@ -308,6 +310,38 @@ function checkElements(fn: string, net: Map<string, Entry>): void {
       { imbalance },
     );
   }
+}
+
+const MAX_SLOTS = 256;
+const slotOf = new Map<string, number>();
+const slotSymbols: string[] = [];
+const scratchIn = new Float64Array(MAX_SLOTS);
+const scratchOut = new Float64Array(MAX_SLOTS);
+const slotUsed = new Uint8Array(MAX_SLOTS);
+const vectors = new WeakMap<Species, { slots: Int32Array; counts: Float64Array }>();
+
+/** The species' element counts as (slot, count) arrays, cached per Species object. */
+function elementVector(s: Species): { slots: Int32Array; counts: Float64Array } {
+  let v = vectors.get(s);
+  if (v === undefined) {
+    const els = Object.entries(s.formula.elements);
+    const slots = new Int32Array(els.length);
+    const counts = new Float64Array(els.length);
+    els.forEach(([el, c], k) => {
+      let slot = slotOf.get(el);
+      if (slot === undefined) {
+        slot = slotSymbols.length;
+        if (slot >= MAX_SLOTS) throw new RxthermError("INVALID_ARGUMENT", `heatDuty supports at most ${MAX_SLOTS} distinct element symbols`, { element: el });
+        slotOf.set(el, slot);
+        slotSymbols.push(el);
+      }
+      slots[k] = slot;
+      counts[k] = c;
+    });
+    v = { slots, counts };
+    vectors.set(s, v);
+  }
+  return v;
 }
 
 /** Σ ξⱼ·ΔH°rxn,ⱼ(298.15 K), after checking that the extents produce the net stream change. */
@@ -326,7 +360,7 @@ function heatFromReactions(
     const xi = extents[j];
     if (typeof xi !== "number" || !Number.isFinite(xi)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires finite extents, got ${String(xi)} at index ${j}`, { index: j, extent: xi });
     const p = prepareReaction(fn, r, library);
-    const dh = exactWeightedSum(p.nuExact, p.species.map((s) => s.hf298Exact)).toNumber();
+    const dh = standardEnthalpyExact(p).toNumber();
     heat += xi * dh;
     p.species.forEach((s, i) => change.set(s.key, (change.get(s.key) ?? 0) + xi * p.nu[i]!));
   });

@@ -4,7 +4,7 @@ import type { Library } from "../species/types.js";
 import type { Reaction } from "../reaction/types.js";
 import type Decimal from "decimal.js";
 import type { Rational } from "../numeric/rational.js";
-import { exactWeightedSum, prepareReaction, type PreparedReaction } from "../_internal/preparedReaction.js";
+import { prepareReaction, standardEnthalpyExact, type PreparedReaction } from "../_internal/preparedReaction.js";
 
 /**
  * Options of {@link reactionEnthalpy}.
@@ -120,7 +120,7 @@ export function reactionEnthalpy(reaction: Reaction | string, options: ReactionE
   let extrapolated = false;
   let exact: string | undefined;
   if (T === STANDARD_TEMPERATURE_K) {
-    const sum = exactWeightedSum(p.nuExact, p.species.map((s) => s.hf298Exact));
+    const sum = standardEnthalpyExact(p);
     const scaled = options.per === undefined ? sum : divideByCoefficient(sum, p.nuExact[indexOfSpecies(p, options.per)]!);
     exact = scaled.toString();
     value = zeroToPositive(scaled.toNumber());

@@ -9,6 +9,8 @@ import { ExactDecimal, exactWeightedSum } from "../_internal/preparedReaction.js
  * combustion in their standard states, and O2. Keys without a phase are accepted for the gases.
  *
  * @category Enthalpy
+ * @example
+ * COMBUSTION_REFERENCE_SPECIES.includes("H2O(l)") // => true
  */
 export const COMBUSTION_REFERENCE_SPECIES: readonly string[] = Object.freeze([
   "CO2(g)", "H2O(l)", "N2(g)", "O2(g)", "SO2(g)", "CO2", "N2", "O2", "SO2",

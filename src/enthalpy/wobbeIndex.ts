@@ -22,6 +22,9 @@ export interface WobbeIndexOptions {
  * sea-level mean molar mass 28.9644 kg/kmol).
  *
  * @category Enthalpy
+ * @example
+ * AIR_MOLAR_MASS_G_PER_MOL // => 28.9644
+ * @see U.S. Standard Atmosphere, 1976 (NOAA, NASA, USAF), Table 3 sea-level values.
  */
 export const AIR_MOLAR_MASS_G_PER_MOL = 28.9644;
 

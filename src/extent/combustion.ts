@@ -189,7 +189,7 @@ export interface CombustionResult {
  * r.air                 // => 9.5238… (mol air per mol CH4)
  * r.dry["CO2(g)"]       // => 0.11731… (11.7 % dry CO₂)
  * @category Combustion
- * @see Babcock & Wilcox, Steam: its Generation and Use, 41st ed., 2005, ch. 10 (combustion calculations by mole and mass)
+ * @see U.S. Standard Atmosphere, 1976 (air composition, {@link DRY_AIR}); complete-combustion stoichiometry by elements: common practice
  */
 export function combustion(input: CombustionInput): CombustionResult {
   const fn = "combustion";

@@ -47,7 +47,7 @@ export interface LimitingReactantResult {
  * r.excess    // => { CH4: 0, O2: 0.2 }   (20 % excess oxygen)
  * r.runOut    // => { CH4: 1, O2: 1.2 }
  * @category Stoichiometry
- * @see R. M. Felder, R. W. Rousseau, L. G. Bullard, Elementary Principles of Chemical Processes, 4th ed., Wiley 2015, §4.6 (limiting and excess reactants, fractional excess)
+ * @see IUPAC Compendium of Chemical Terminology (the Gold Book), entry "extent of reaction, ξ"; limiting reactant and fractional excess: common practice
  */
 export function limitingReactant(feed: Flows, reaction: Reaction | string): LimitingReactantResult {
   const fn = "limitingReactant";

@@ -84,7 +84,7 @@ export interface ReconcileExtentsResult {
  * r.residuals         // => { CO: 0, CO2: 0.2, H2: -0.2 }
  * r.closurePercent.C  // => 102   (C in 10, out 3 + 7.2)
  * @category Stoichiometry
- * @see D. M. Himmelblau, J. B. Riggs, Basic Principles and Calculations in Chemical Engineering, 8th ed., Prentice Hall 2012 (material balances with measurement errors, least squares)
+ * @see C. F. Gauss, Theoria combinationis observationum erroribus minimis obnoxiae (1821–1823): least squares through the normal equations; element-balance closure: common practice
  */
 export function reconcileExtents(input: ReconcileExtentsInput, options: ReconcileExtentsOptions = {}): ReconcileExtentsResult {
   const fn = "reconcileExtents";

@@ -126,7 +126,7 @@ export interface SolveExtentsResult {
  * r.extents // => [0.9]
  * r.outlet  // => { CH4: 0.1, O2: 0.6, N2: 9, CO2: 0.9, H2O: 1.8 }
  * @category Stoichiometry
- * @see R. M. Felder, R. W. Rousseau, L. G. Bullard, Elementary Principles of Chemical Processes, 4th ed., Wiley 2015, ch. 4 (extent of reaction, conversion, yield, selectivity)
+ * @see IUPAC Compendium of Chemical Terminology (the Gold Book), entry "extent of reaction, ξ"; conversion, yield and selectivity as defined above (common practice — definitions of yield and selectivity vary between sources, so check the one your plant uses)
  */
 export function solveExtents(input: SolveExtentsInput, options: SolveExtentsOptions = {}): SolveExtentsResult {
   const fn = "solveExtents";
@@ -389,6 +389,7 @@ function solveExactPath(sys: StoichSystem, rows: SpecRow[], fn: string): SolveEx
   }
   const xi = sol.x;
   const S = sys.species.length;
+  const feedQ = sys.feedQ;
   const change: Q[] = new Array<Q>(S);
   const outlet: number[] = new Array<number>(S);
   const extents = new Array<number>(R);
@@ -399,7 +400,7 @@ function solveExactPath(sys: StoichSystem, rows: SpecRow[], fn: string): SolveEx
       const c = (sys.nu[j] as Q[])[s] as Q;
       if (c.n !== 0n) d = qAdd(d, qMul(c, xi[j] as Q));
     }
-    const v = qAdd(sys.feedQ[s] as Q, d);
+    const v = qAdd(feedQ[s] as Q, d);
     if (v.n < 0n) throwNegative(sys, s, qToNumber(v), extents, fn);
     change[s] = d;
     outlet[s] = qToNumber(v);
@@ -449,6 +450,7 @@ function assemble(sys: StoichSystem, extents: number[], outlet: number[], change
   const S = sys.species.length;
   const R = sys.reactions.length;
   const exact = xi !== null;
+  const feedQ: Q[] | null = exact ? sys.feedQ : null;
   const outletFlows: Flows = {};
   const changeFlows: Flows = {};
   const conversion: Record<string, number> = {};
@@ -461,7 +463,7 @@ function assemble(sys: StoichSystem, extents: number[], outlet: number[], change
     const ch = change[s] as Q | number;
     changeFlows[key] = noNegZero(typeof ch === "number" ? ch : qToNumber(ch));
     if (sys.consumed[s] && sys.feed[s] !== 0) {
-      const fed: Q | number = exact ? (sys.feedQ[s] as Q) : (sys.feed[s] as number);
+      const fed: Q | number = feedQ !== null ? (feedQ[s] as Q) : (sys.feed[s] as number);
       conversion[key] = noNegZero(-ratioOf(ch, fed));
       for (let j = 0; j < R; j++) {
         if (((sys.nuF[j] as number[])[s] as number) < 0) {
@@ -480,7 +482,7 @@ function assemble(sys: StoichSystem, extents: number[], outlet: number[], change
     for (let a = 0; a < S; a++) {
       const r = ratios[a] ?? null;
       if (r === null || r === "inconsistent" || sys.feed[a] === 0) continue;
-      const ideal: Q | number = exact ? qMul(sys.feedQ[a] as Q, r) : (sys.feed[a] as number) * qToNumber(r);
+      const ideal: Q | number = feedQ !== null ? qMul(feedQ[a] as Q, r) : (sys.feed[a] as number) * qToNumber(r);
       (yields[sys.species[p] as string] ??= {})[sys.species[a] as string] = noNegZero(ratioOf(change[p] as Q | number, ideal));
     }
   }

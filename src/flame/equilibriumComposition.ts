@@ -114,7 +114,7 @@ export interface EquilibriumResult {
  *
  * Gases are ideal, the standard state is 1 bar (100 000 Pa) and condensed phases are pure with
  * no pressure effect. Species data come from the library; a temperature outside the common data
- * range of the gas products throws `OUT_OF_RANGE` unless `extrapolate` is set.
+ * range of the products (gases and condensed) throws `OUT_OF_RANGE` unless `extrapolate` is set.
  *
  * Failure is never silent: a solve that does not converge throws `NO_CONVERGENCE`
  * (`converged` in the result is therefore always true).

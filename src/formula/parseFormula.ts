@@ -1,6 +1,6 @@
 import Decimal from "decimal.js";
 import { RxthermError, type RxthermErrorCode } from "../errors.js";
-import { INDEX_SYMBOLS, symbolIndex } from "../_internal/elementIndex.js";
+import { ELEMENT_KEY_COUNT, INDEX_SYMBOLS, symbolIndex } from "../_internal/elementIndex.js";
 import type { Formula, Phase } from "./types.js";
 
 /**
@@ -55,8 +55,9 @@ export const FORMULA_LIMITS = {
  * - The texts `NaN` and `Infinity` (non-finite numbers printed as text) are refused.
  *
  * Method: one left-to-right scan over char codes with an explicit bracket stack; no regular expressions and no
- * backtracking. Cost is linear in the length (at most {@link FORMULA_LIMITS} `.maxNestingDepth` passes over the atoms
- * of a group when multiplying out); a text with a decimal count is scanned a second time in exact mode.
+ * backtracking. Groups are multiplied out afterwards: each group's cumulative multiplier is computed once from its
+ * parent's, and each atom is multiplied once by its group's, so the cost is linear in the length. Integer counts use
+ * plain numbers; a text with a decimal count is scanned a second time in exact decimal mode.
  *
  * @param text - the formula text
  * @returns the formula: `text` (trimmed), `elements` (symbol → atoms per formula unit, in order of first
@@ -116,6 +117,7 @@ export function parseFormula(text: string): Formula {
 
 /** Private exact constructor for decimal counts; never configured globally. */
 const ExactDecimal = /* @__PURE__ */ Decimal.clone({ precision: 1000, rounding: Decimal.ROUND_HALF_EVEN });
+const ONE = /* @__PURE__ */ new ExactDecimal(1);
 
 /** Phase of a suffix word, or null (a switch, so that words like "constructor" never match). */
 function phaseOf(word: string): Phase | null {
@@ -135,9 +137,19 @@ const SYMS: number[] = [];
 const COLS: number[] = [];
 const CNTS: number[] = [];
 const DCNTS: Decimal[] = [];
-const G_START: number[] = [];
-const G_CLOSE: number[] = [];
-const G_COL: number[] = [];
+const EGROUP: number[] = []; // entry → id of its innermost group (adduct parts are root groups)
+const G_START: number[] = []; // by depth: entry count when the bracket opened
+const G_CLOSE: number[] = []; // by depth: expected closing char code
+const G_COL: number[] = []; // by depth: column of the opening bracket
+const G_ID: number[] = []; // by depth: group id
+const GPARENT: number[] = []; // by group id: parent group id, −1 for an adduct part
+const GMUL: number[] = []; // by group id: multiplier (fast mode)
+const GDMUL: (Decimal | null)[] = []; // by group id: multiplier (exact mode), null for 1
+const GMCOL: number[] = []; // by group id: column of the multiplier, −1 when none is written
+const CUM: number[] = []; // by group id: product of the multipliers from the root (fast mode)
+const ACC: number[] = /* @__PURE__ */ new Array<number>(ELEMENT_KEY_COUNT).fill(0); // by element index: running total
+const ORDER: number[] = []; // element indexes in order of first appearance
+const DCUM: Decimal[] = []; // by group id: the same in exact mode
 
 // Results of readCount / readCharge (scratch, to avoid allocating tuples on the hot path).
 let countValue = 0;
@@ -154,9 +166,12 @@ function scan(s: string, start: number, end: number, exact: boolean): Formula | 
   let depth = 0;
   let groups = 0;
   let partStart = 0;
-  let partMul = 1;
-  let partMulExact: Decimal | null = null;
-  let partMulCol = -1;
+  let gCount = 1; // group 0 is the first adduct part
+  let cur = 0;
+  GPARENT[0] = -1;
+  GMUL[0] = 1;
+  GDMUL[0] = null;
+  GMCOL[0] = -1;
   let sawSeparator = false;
   let leadCol = -1;
   let lastElemCountEnd = -1;
@@ -170,16 +185,16 @@ function scan(s: string, start: number, end: number, exact: boolean): Formula | 
     if (q !== -1) {
       fail("INVALID_CHARGE", s, i + 1, "parseFormula reads e as the electron, whose charge is -1 (write e-)", {});
     }
-    return finish(s, start, end, -1, 0, exact, chargeNext, i + 1);
+    return finish(s, start, end, -1, 0, 0, exact, chargeNext, i + 1);
   }
 
   if (isDigit(c) || isSubDigit(c)) {
     leadCol = i;
     i = readCount(s, i, end, exact);
     if (i < 0) return null;
-    partMul = countValue;
-    partMulExact = countExact;
-    partMulCol = leadCol;
+    GMUL[0] = countValue;
+    GDMUL[0] = countExact;
+    GMCOL[0] = leadCol;
   }
 
   let tailAt = end;
@@ -215,6 +230,7 @@ function scan(s: string, start: number, end: number, exact: boolean): Formula | 
       }
       SYMS[n] = idx;
       COLS[n] = col;
+      EGROUP[n] = cur;
       if (exact) DCNTS[n] = dcnt ?? new ExactDecimal(cnt);
       else CNTS[n] = cnt;
       n++;
@@ -245,6 +261,12 @@ function scan(s: string, start: number, end: number, exact: boolean): Formula | 
       G_START[depth] = n;
       G_CLOSE[depth] = c === 40 ? 41 : c === 91 ? 93 : 125;
       G_COL[depth] = i;
+      G_ID[depth] = gCount;
+      GPARENT[gCount] = cur;
+      GMUL[gCount] = 1;
+      GDMUL[gCount] = null;
+      GMCOL[gCount] = -1;
+      cur = gCount++;
       depth++;
       i++;
       lastElemCountEnd = -1;
@@ -273,12 +295,14 @@ function scan(s: string, start: number, end: number, exact: boolean): Formula | 
       if (i < end) {
         const c3 = s.charCodeAt(i);
         if (isDigit(c3) || isSubDigit(c3)) {
-          const mcol = i;
+          GMCOL[cur] = i;
           i = readCount(s, i, end, exact);
           if (i < 0) return null;
-          multiplyRange(s, gs, n, exact, countValue, countExact, mcol);
+          GMUL[cur] = countValue;
+          GDMUL[cur] = countExact;
         }
       }
+      cur = GPARENT[cur] as number;
       continue;
     }
     if (isSeparator(c)) {
@@ -289,21 +313,22 @@ function scan(s: string, start: number, end: number, exact: boolean): Formula | 
       if (n === partStart) {
         fail("UNEXPECTED_CHARACTER", s, i, "parseFormula expected a formula before the adduct separator", {});
       }
-      if (partMul !== 1 || partMulExact !== null) multiplyRange(s, partStart, n, exact, partMul, partMulExact, partMulCol);
       sawSeparator = true;
       i++;
       while (i < end && isSpace(s.charCodeAt(i))) i++;
-      partMul = 1;
-      partMulExact = null;
-      partMulCol = -1;
+      cur = gCount++;
+      GPARENT[cur] = -1;
+      GMUL[cur] = 1;
+      GDMUL[cur] = null;
+      GMCOL[cur] = -1;
       if (i < end) {
         const c3 = s.charCodeAt(i);
         if (isDigit(c3) || isSubDigit(c3)) {
-          partMulCol = i;
+          GMCOL[cur] = i;
           i = readCount(s, i, end, exact);
           if (i < 0) return null;
-          partMul = countValue;
-          partMulExact = countExact;
+          GMUL[cur] = countValue;
+          GDMUL[cur] = countExact;
         }
       }
       partStart = n;
@@ -352,7 +377,6 @@ function scan(s: string, start: number, end: number, exact: boolean): Formula | 
     fail("UNEXPECTED_CHARACTER", s, leadCol,
       "parseFormula does not accept a leading count on a formula (write the coefficient in the equation: \"2 H2O\"); leading multipliers are for adduct parts such as 3CdSO4·8H2O", {});
   }
-  if (partMul !== 1 || partMulExact !== null) multiplyRange(s, partStart, n, exact, partMul, partMulExact, partMulCol);
 
   let charge = 0;
   i = tailAt;
@@ -378,12 +402,12 @@ function scan(s: string, start: number, end: number, exact: boolean): Formula | 
       i = chargeNext;
     }
   }
-  return finish(s, start, end, charge, n, exact, i, tailAt);
+  return finish(s, start, end, charge, n, gCount, exact, i, tailAt);
 }
 
 /** Parse the optional phase after position `i`, check the end, build the result. */
 function finish(
-  s: string, start: number, end: number, charge: number, n: number, exact: boolean, at: number,
+  s: string, start: number, end: number, charge: number, n: number, gCount: number, exact: boolean, at: number,
   chargeCol: number,
 ): Formula {
   let i = at;
@@ -411,26 +435,66 @@ function finish(
       phase !== null ? "parseFormula requires the phase suffix to end the formula"
         : "parseFormula requires a charge to end the formula (only a phase suffix may follow it)", {});
   }
+  // Multiply out: each group's cumulative multiplier is its own times its parent's (parents have smaller
+  // ids), then each atom is multiplied once by its group's — linear in atoms + groups.
   const elements: Record<string, number> = {};
   if (!exact) {
+    for (let g = 0; g < gCount; g++) {
+      const parent = GPARENT[g] as number;
+      const m = parent < 0 ? (GMUL[g] as number) : (GMUL[g] as number) * (CUM[parent] as number);
+      if (m > FORMULA_LIMITS.maxCount) tooLarge(s, GMCOL[g] as number, null, m);
+      CUM[g] = m;
+    }
+    // accumulate by element index, then create the keys once each, in order of first appearance
+    let distinct = 0;
     for (let k = 0; k < n; k++) {
-      const sym = INDEX_SYMBOLS[SYMS[k] as number] as string;
-      const prev = elements[sym];
-      const v = prev === undefined ? (CNTS[k] as number) : prev + (CNTS[k] as number);
-      if (v > FORMULA_LIMITS.maxCount) tooLarge(s, COLS[k] as number, sym, v);
-      elements[sym] = v;
+      const idx = SYMS[k] as number;
+      const g = EGROUP[k] as number;
+      const one = (CNTS[k] as number) * (CUM[g] as number);
+      if (one > FORMULA_LIMITS.maxCount) {
+        clearAccumulator(distinct);
+        tooLarge(s, multiplierColumn(g, COLS[k] as number), INDEX_SYMBOLS[idx] as string, one);
+      }
+      const prev = ACC[idx] as number;
+      if (prev === 0) ORDER[distinct++] = idx;
+      const v = prev + one;
+      if (v > FORMULA_LIMITS.maxCount) {
+        clearAccumulator(distinct);
+        tooLarge(s, COLS[k] as number, INDEX_SYMBOLS[idx] as string, v);
+      }
+      ACC[idx] = v;
+    }
+    for (let d = 0; d < distinct; d++) {
+      const idx = ORDER[d] as number;
+      elements[INDEX_SYMBOLS[idx] as string] = ACC[idx] as number;
+      ACC[idx] = 0;
     }
   } else {
+    for (let g = 0; g < gCount; g++) {
+      const parent = GPARENT[g] as number;
+      const own = GDMUL[g] ?? ONE;
+      const m = parent < 0 ? own : own.times(DCUM[parent] as Decimal);
+      if (m.gt(FORMULA_LIMITS.maxCount)) tooLarge(s, GMCOL[g] as number, null, m.toNumber());
+      if (m.lt(FORMULA_LIMITS.minCount)) tooSmall(s, GMCOL[g] as number, null, m.toNumber());
+      DCUM[g] = m;
+    }
     const sums = new Map<string, Decimal>();
     for (let k = 0; k < n; k++) {
       const sym = INDEX_SYMBOLS[SYMS[k] as number] as string;
+      const g = EGROUP[k] as number;
+      const one = (DCNTS[k] as Decimal).times(DCUM[g] as Decimal);
+      if (one.gt(FORMULA_LIMITS.maxCount)) tooLarge(s, multiplierColumn(g, COLS[k] as number), sym, one.toNumber());
+      if (one.lt(FORMULA_LIMITS.minCount)) tooSmall(s, multiplierColumn(g, COLS[k] as number), sym, one.toNumber());
       const prev = sums.get(sym);
-      const v = prev === undefined ? (DCNTS[k] as Decimal) : prev.plus(DCNTS[k] as Decimal);
+      const v = prev === undefined ? one : prev.plus(one);
       if (v.gt(FORMULA_LIMITS.maxCount)) tooLarge(s, COLS[k] as number, sym, v.toNumber());
       sums.set(sym, v);
     }
     for (const [sym, v] of sums) elements[sym] = Number(v.toString());
-    DCNTS.length = 0; // release Decimal objects
+    // release Decimal objects
+    DCNTS.length = 0;
+    DCUM.length = 0;
+    GDMUL.length = 0;
   }
   return {
     text: start === 0 && end === s.length ? s : s.slice(start, end),
@@ -440,25 +504,17 @@ function finish(
   };
 }
 
-/** Multiply entries [from, to) by a group or part multiplier, checking the limits. */
-function multiplyRange(
-  s: string, from: number, to: number, exact: boolean, m: number, mExact: Decimal | null, col: number,
-): void {
-  if (exact) {
-    const md = mExact ?? new ExactDecimal(m);
-    for (let k = from; k < to; k++) {
-      const v = (DCNTS[k] as Decimal).times(md);
-      if (v.gt(FORMULA_LIMITS.maxCount)) tooLarge(s, col, INDEX_SYMBOLS[SYMS[k] as number] as string, v.toNumber());
-      if (v.lt(FORMULA_LIMITS.minCount)) tooSmall(s, col, INDEX_SYMBOLS[SYMS[k] as number] as string, v.toNumber());
-      DCNTS[k] = v;
-    }
-  } else {
-    for (let k = from; k < to; k++) {
-      const v = (CNTS[k] as number) * m;
-      if (v > FORMULA_LIMITS.maxCount) tooLarge(s, col, INDEX_SYMBOLS[SYMS[k] as number] as string, v);
-      CNTS[k] = v;
-    }
+/** Zero the running totals of the first `distinct` elements (before throwing, so no state leaks into the next call). */
+function clearAccumulator(distinct: number): void {
+  for (let d = 0; d < distinct; d++) ACC[ORDER[d] as number] = 0;
+}
+
+/** Column of the innermost written multiplier around group `g` (for errors), or `fallback`. */
+function multiplierColumn(g: number, fallback: number): number {
+  for (let k = g; k >= 0; k = GPARENT[k] as number) {
+    if ((GMCOL[k] as number) >= 0) return GMCOL[k] as number;
   }
+  return fallback;
 }
 
 /**

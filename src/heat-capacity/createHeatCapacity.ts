@@ -130,8 +130,10 @@ export interface HeatCapacity {
  * @param ranges - one or more Cp ranges (K and the form of each)
  * @param options - label for messages and the boundary tolerance
  * @returns the model; its methods take temperatures in K and return J/(mol·K), J/mol
- * @throws RxthermError `INVALID_DATA` for malformed ranges or forms, with details
- *   `{ label, path, received }` (or `{ label, path, problem: "gap" | "overlap", boundary, ranges }`)
+ * @throws RxthermError `INVALID_DATA` for malformed ranges or forms (the first problem found), with details
+ *   `{ label, path, received, issues: [{ path, message }] }`, or for a gap or overlap
+ *   `{ label, path, problem: "gap" | "overlap", boundary, ranges, issues }`
+ * @throws RxthermError `INVALID_ARGUMENT` for a negative or non-finite `boundaryToleranceK`
  * @category Heat capacity
  * @example
  * // N2(g), Shomate coefficients of the NIST Chemistry WebBook, 100–500 K and 500–2000 K

@@ -41,11 +41,14 @@ export interface FitCpOptions {
    */
   matchAt?: { TK: number; HJPerMol?: number; SJPerMolK?: number };
   /**
-   * Bounds of the returned range, K.
-   * @defaultValue the lowest and highest T of the points
+   * Lower bound of the returned range, K.
+   * @defaultValue the lowest T of the points
    */
   TminK?: number;
-  /** @defaultValue the highest T of the points */
+  /**
+   * Upper bound of the returned range, K.
+   * @defaultValue the highest T of the points
+   */
   TmaxK?: number;
   /**
    * Polynomial only: the temperature variable, K or °C.
@@ -262,9 +265,9 @@ function buildForm(form: FitCpFormName, c: readonly number[], o: FitCpOptions): 
     }
     case "nasa7":
     case "nasa9": {
-      const nasa7 = form === "nasa7";
       const a = [...c];
-      const tmp: CpForm = { form, a: nasa7 ? [...a, 0, 0] : [...a, 0, 0] };
+      // constants 0 while the antiderivatives at the match temperature are evaluated
+      const tmp: CpForm = { form, a: [...a, 0, 0] };
       const target = matchTarget(o);
       let hc = 0, sc = 0;
       if (target !== null) {

@@ -97,7 +97,7 @@ const EXPANSION_FACTOR = 1.6;
  *   (details: `iterations`, `bracket`, `best`, `residual`)
  * @category Numeric
  * @example
- * findRoot((x) => x * x - 2, [0, 2]).root // => 1.4142135623730951 (√2, to within 1e-10)
+ * findRoot((x) => x * x - 2, [0, 2]).root // => 1.41421356237 (√2 to within the default toleranceX 1e-10)
  * @see R. P. Brent, Algorithms for Minimization without Derivatives, Prentice-Hall 1973, chapter 4.
  */
 export function findRoot(

@@ -122,7 +122,7 @@ export function balanceReaction(input: BalanceInput, options: BalanceReactionOpt
   let solution: Rational[];
   if (nullity === 1) {
     const v = orient(integerNullSpaceFromEchelon(ech.rows, ech.pivots, n)[0] as bigint[]);
-    checkSigns(v, entries, rows, rowNames, signs, nReactants);
+    checkSigns(v, entries, rows, rowNames, signs);
     if (fixed.size === 0) {
       solution = v.map((x) => rational(x));
     } else {
@@ -324,7 +324,6 @@ function checkSigns(
   rows: readonly bigint[][],
   rowNames: readonly string[],
   signs: readonly number[],
-  nReactants: number,
 ): void {
   const zero = entries.filter((_, j) => v[j] === 0n).map((e) => e.species);
   if (zero.length) {
@@ -348,7 +347,6 @@ function checkSigns(
   if (wrong.length) {
     const signed = v.map((x, j) => x * BigInt(signs[j] as number));
     const suggestion = equationText(reactionFromSigned(entries, signed));
-    void nReactants;
     throw new RxthermError(
       "WRONG_SIDE",
       `balanceReaction: ${wrong.join(", ")} would need a negative coefficient; ${wrong.length > 1 ? "they belong" : "it belongs"} on the other side: ${suggestion}`,

@@ -45,7 +45,7 @@ export interface BalanceCheck {
  * @returns `{ balanced, residuals, charge }` plus exact text of each residual and the list of
  *   unbalanced elements; residuals in atoms per reaction as written, charge in elementary charges
  * @throws RxthermError any code of {@link parseReaction} for a bad equation text
- * @throws RxthermError `INVALID_ARGUMENT` when `reaction` is neither text nor a reaction object
+ * @throws RxthermError `INVALID_ARGUMENT` when `reaction` is neither text nor a reaction object, or a term lacks its formula
  * @example
  * checkBalance("C3H8 + 5 O2 -> 3 CO2 + 4 H2O").balanced // => true
  * // the same coefficients written with butane as the fuel:
@@ -57,6 +57,13 @@ export function checkBalance(reaction: Reaction | string): BalanceCheck {
   const r = typeof reaction === "string" ? parseReaction(reaction) : reaction;
   if (r === null || typeof r !== "object" || !Array.isArray(r.reactants) || !Array.isArray(r.products)) {
     throw new RxthermError("INVALID_ARGUMENT", "checkBalance requires an equation text or a reaction { reactants, products }", {});
+  }
+  for (const t of [...r.reactants, ...r.products]) {
+    if (t === null || typeof t !== "object" || t.formula === null || typeof t.formula !== "object" || typeof t.formula.elements !== "object") {
+      throw new RxthermError("INVALID_ARGUMENT", "checkBalance requires every term to carry a parsed formula (build reactions with parseReaction or balanceReaction)", {
+        species: t && typeof t === "object" ? t.species : undefined,
+      });
+    }
   }
   const sums = new Map<string, Rational>();
   let charge: Rational = ZERO;

@@ -4,10 +4,22 @@ import { rationalFromDecimalString, rationalToNumber, type Rational } from "../n
 import { makeIntegerTerm, makeReaction, makeTerm } from "../_internal/reactionTerms.js";
 import type { Reaction, Term } from "./types.js";
 
-/** Longest equation text {@link parseReaction} accepts, in UTF-16 code units. @category Reaction */
+/**
+ * Longest equation text {@link parseReaction} accepts, in UTF-16 code units (`INPUT_TOO_LONG` above).
+ *
+ * @example
+ * MAX_REACTION_LENGTH // => 4096
+ * @category Reaction
+ */
 export const MAX_REACTION_LENGTH = 4096;
 
-/** Largest stoichiometric coefficient {@link parseReaction} accepts. @category Reaction */
+/**
+ * Largest stoichiometric coefficient {@link parseReaction} accepts (`COUNT_TOO_LARGE` above).
+ *
+ * @example
+ * MAX_REACTION_COEFFICIENT // => 1e9
+ * @category Reaction
+ */
 export const MAX_REACTION_COEFFICIENT = 1e9;
 
 /**
@@ -36,7 +48,7 @@ export const MAX_REACTION_COEFFICIENT = 1e9;
  *
  * @param text - the equation
  * @returns the reaction with exact coefficients (`Term.exact`, e.g. `"13/2"`) and their numbers
- * @throws RxthermError `EMPTY_INPUT` for empty or blank text
+ * @throws RxthermError `EMPTY_INPUT` for empty or blank text; `INVALID_ARGUMENT` when `text` is not a string
  * @throws RxthermError `INPUT_TOO_LONG` above {@link MAX_REACTION_LENGTH} characters (details: `length`, `limit`)
  * @throws RxthermError `INVALID_REACTION` with no separator, more than one, an empty side, an
  *   empty term or a coefficient without a species (details: `column`, `reason`)
@@ -53,7 +65,10 @@ export const MAX_REACTION_COEFFICIENT = 1e9;
  * @see IUPAC, Quantities, Units and Symbols in Physical Chemistry ("Green Book"), 3rd ed. (2007), §2.10.1 (chemical equations, stoichiometric numbers)
  */
 export function parseReaction(text: string): Reaction {
-  if (typeof text !== "string" || text.trim() === "") {
+  if (typeof text !== "string") {
+    throw new RxthermError("INVALID_ARGUMENT", `parseReaction requires a string, got ${typeof text}`, { type: typeof text });
+  }
+  if (text.trim() === "") {
     throw new RxthermError("EMPTY_INPUT", "parseReaction requires a non-empty equation", { column: 0 });
   }
   if (text.length > MAX_REACTION_LENGTH) {

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { test, fc } from "@fast-check/vitest";
 import { heatDuty } from "../../src/energy/heatDuty.js";
+import type { Stream } from "../../src/extent/types.js";
 import { solveExtents } from "../../src/extent/solveExtents.js";
 import { reactionEnthalpy } from "../../src/enthalpy/reactionEnthalpy.js";
 import { caught, janafRow } from "../enthalpy/_helpers.js";
@@ -24,6 +25,16 @@ describe("heatDuty", () => {
     expect(r.formation).toBe(0);
     expect(Math.abs(r.reaction)).toBeLessThan(1e-9);
     expect(r.reactionHeat).toBe(0);
+  });
+
+  test.prop([
+    fc.dictionary(fc.constantFrom("CH4(g)", "N2(g)", "H2O(g)", "CO2(g)", "O2(g)", "NH3(g)", "Ar(g)"), fc.double({ min: 0, max: 100, noNaN: true }), { minKeys: 1 }),
+    fc.double({ min: 300, max: 2500, noNaN: true }),
+  ])("heatDuty is zero for any stream passed through unchanged", (flows, T) => {
+    const r = heatDuty({ inlet: { T, flows }, outlet: { T, flows: { ...flows } } });
+    expect(r.duty).toBe(0);
+    expect(r.reactionHeat).toBe(0);
+    expect(r.latentHeat).toBe(0);
   });
 
   it("heatDuty separates the latent heat of water that evaporates", () => {
@@ -72,7 +83,7 @@ describe("heatDuty", () => {
         "H2O(g)": p.h2o + 2 * e0 + 2 * e1, "CO2(g)": p.co2 + e0, "CO(g)": e1,
       },
     };
-    const inlet = p.split
+    const inlet: Stream | Stream[] = p.split
       ? [{ T: p.tIn, flows: { "CH4(g)": feed["CH4(g)"] } }, { T: 300, flows: { "O2(g)": feed["O2(g)"], "N2(g)": feed["N2(g)"], "H2O(g)": feed["H2O(g)"], "CO2(g)": feed["CO2(g)"] } }]
       : { T: p.tIn, flows: feed };
     const outlet = { T: p.tOut, flows: ext.outlet };

@@ -105,6 +105,23 @@ describe("reactionEnthalpy", () => {
     },
   );
 
+  test.prop([fc.constantFrom(
+    "CH4(g) + 2 O2(g) -> CO2(g) + 2 H2O(l)",
+    "N2(g) + 3 H2(g) -> 2 NH3(g)",
+    "4 NH3(g) + 5 O2(g) -> 4 NO(g) + 6 H2O(g)",
+    "C3H8(g) + 5 O2(g) -> 3 CO2(g) + 4 H2O(g)",
+    "2 SO2(g) + O2(g) -> 2 SO3(g)",
+  ), fc.double({ min: -1e-6, max: 1e-6, noNaN: true })])(
+    "reactionEnthalpy: the exact decimal path at 298.15 K and the float Kirchhoff path next to it agree",
+    (text, dT) => {
+      fc.pre(dT !== 0);
+      const exact = reactionEnthalpy(text).value;
+      const float = reactionEnthalpy(text, { T: 298.15 + dT, extrapolate: true }).value;
+      // |ΔCp·dT| < 1e-3 J/mol for |dT| ≤ 1e-6 K; float round-off of Σν·H is ~1e-10 relative
+      expect(Math.abs(float - exact)).toBeLessThan(1e-3 + 1e-9 * Math.abs(exact));
+    },
+  );
+
   it("reactionEnthalpy does not mutate a frozen reaction and caches per reaction object", () => {
     const r = Object.freeze(parseReaction("CO(g) + 0.5 O2(g) -> CO2(g)"));
     const a = reactionEnthalpy(r, { T: 900 }).value;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { reactionEnthalpyFromCombustion } from "../../src/enthalpy/reactionEnthalpyFromCombustion.js";
+import { reactionEnthalpyFromCombustion, COMBUSTION_REFERENCE_SPECIES } from "../../src/enthalpy/reactionEnthalpyFromCombustion.js";
 import { reactionEnthalpy } from "../../src/enthalpy/reactionEnthalpy.js";
 import { heatingValue } from "../../src/enthalpy/heatingValue.js";
 import { caught } from "./_helpers.js";
@@ -31,5 +31,12 @@ describe("reactionEnthalpyFromCombustion", () => {
   it("reactionEnthalpyFromCombustion throws UNBALANCED_REACTION and rejects bad numbers", () => {
     expect(caught(() => reactionEnthalpyFromCombustion("C2H4(g) -> C2H6(g)", {})).code).toBe("UNBALANCED_REACTION");
     expect(caught(() => reactionEnthalpyFromCombustion("C2H4(g) + H2(g) -> C2H6(g)", { "C2H4(g)": "abc", "H2(g)": 1, "C2H6(g)": 1 })).code).toBe("INVALID_ARGUMENT");
+  });
+});
+
+describe("COMBUSTION_REFERENCE_SPECIES", () => {
+  it("holds the standard combustion products (the documented example)", () => {
+    expect(COMBUSTION_REFERENCE_SPECIES.includes("H2O(l)")).toBe(true);
+    expect(COMBUSTION_REFERENCE_SPECIES.includes("H2O(g)")).toBe(false); // common practice: ΔcH° refers to liquid water
   });
 });

@@ -25,3 +25,10 @@ describe("wobbeIndex", () => {
     expect(caught(() => wobbeIndex("CH3OH(l)")).code).toBe("INVALID_ARGUMENT");
   });
 });
+
+describe("AIR_MOLAR_MASS_G_PER_MOL", () => {
+  it("is the U.S. Standard Atmosphere 1976 sea-level value (the documented example)", () => {
+    // U.S. Standard Atmosphere 1976: M0 = 28.9644 kg/kmol (from memory)
+    expect(AIR_MOLAR_MASS_G_PER_MOL).toBe(28.9644);
+  });
+});

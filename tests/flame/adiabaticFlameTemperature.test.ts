@@ -187,6 +187,20 @@ describe("adiabaticFlameTemperature", () => {
     expect(codeOf(() => adiabaticFlameTemperature({ fuel: "CH4(g)", equivalenceRatio: 5, mode: "complete" })).code).toBe("INVALID_ARGUMENT");
   });
 
+  it("adiabaticFlameTemperature throws OUT_OF_RANGE for a reactant below its data range, naming the stream", () => {
+    const e = codeOf(() => adiabaticFlameTemperature({ fuel: "C3H8(g)", fuelT: 250 }));
+    expect(e).toMatchObject({ code: "OUT_OF_RANGE", details: { species: "C3H8(g)", T: 250, stream: "fuel" } });
+    const r = adiabaticFlameTemperature({ fuel: "C3H8(g)", fuelT: 250 }, { extrapolate: true });
+    expect(r.extrapolated).toBe(true);
+  });
+
+  it("adiabaticFlameTemperature throws ELEMENTS_NOT_COVERED when the gases cannot hold the carbon (no C(gr))", () => {
+    // acetylene at φ = 2.6: fewer O than C atoms, and the default products hold carbon only as CO/CO2
+    const e = codeOf(() => adiabaticFlameTemperature({ fuel: "C2H2(g)", equivalenceRatio: 2.6 }));
+    expect(e.code).toBe("ELEMENTS_NOT_COVERED");
+    expect(e.details.elementResidual).toBeGreaterThan(1e-3);
+  });
+
   it("adiabaticFlameTemperature throws ELEMENTS_NOT_COVERED for a product set without N", () => {
     const e = codeOf(() => adiabaticFlameTemperature({ fuel: "CH4(g)", products: ["CO2(g)", "H2O(g)", "O2(g)", "CO(g)", "H2(g)"] }));
     expect(e.code).toBe("ELEMENTS_NOT_COVERED");

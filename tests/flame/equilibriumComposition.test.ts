@@ -171,5 +171,8 @@ describe("equilibriumComposition", () => {
     expect(e.details.range).toEqual([298, 3500]);
     const r = equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET, T: 4000 }, { extrapolate: true });
     expect(r.extrapolated).toBe(true);
+    // a condensed product counts too: the built-in C(gr) data end at 1000 K
+    const g = codeOf(() => equilibriumComposition({ feed: { "CH4(g)": 1 }, species: ["CH4(g)", "H2(g)", "C(gr)"], T: 1100 }));
+    expect(g).toMatchObject({ code: "OUT_OF_RANGE", details: { species: "C(gr)" } });
   });
 });

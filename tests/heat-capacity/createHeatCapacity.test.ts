@@ -466,6 +466,7 @@ describe("createHeatCapacity", () => {
         const e = errorOf(() => createHeatCapacity(input as CpRange[], { label: "X" }));
         expect(e.code).toBe(code);
         expect(e.details["path"]).toEqual(path);
+        expect(e.details["issues"]).toEqual([{ path, message: expect.any(String) }]);
         expect(e.details["label"]).toBe("X");
         expect(e.message).toMatch(/^\[rxtherm\] createHeatCapacity/);
       });

@@ -88,6 +88,11 @@ describe("nullSpace / integerNullSpace", () => {
     const v = ns[0] as bigint[];
     for (const row of a) expect(row.reduce((s, x, j) => s + x * (v[j] as bigint), 0n)).toBe(0n);
   });
+  test.prop([arbSmallMatrix])("differential: the float64 fast path and the BigInt path (forced by scaling a row by 10^20) agree", (a) => {
+    const scaled = a.map((row, i) => row.map((v) => (i === 0 ? BigInt(v) * 10n ** 20n : BigInt(v))));
+    expect(integerNullSpace(scaled)).toEqual(integerNullSpace(a));
+    expect(reducedRowEchelon(scaled).rref).toEqual(reducedRowEchelon(a).rref.map((row) => row));
+  });
   test.prop([arbSmallMatrix])("every basis vector satisfies A·x = 0 exactly and the integer basis is coprime", (a) => {
     for (const x of nullSpace(a)) expect(apply(a, x).every((v) => v.num === 0n)).toBe(true);
     for (const v of integerNullSpace(a)) {

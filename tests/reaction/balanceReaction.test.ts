@@ -91,6 +91,12 @@ describe("balanceReaction", () => {
     for (const [k, v] of Object.entries(res)) expect(v, k).toBe(0);
   });
 
+  it("10-species ionic form of the hexacyanoferrate(II)/permanganate reaction keeps the 10 : 122 (= 5 : 61) ratio of the molecular equation (from memory, see KNOWN)", () => {
+    const r = balanceReaction("K4Fe(CN)6 + MnO4- + H2SO4 -> K+ + Fe3+ + Mn2+ + NO3- + CO2 + H2O + HSO4-");
+    expect(formatReaction(r)).toBe("5 K4Fe(CN)6 + 61 MnO4- + 188 H2SO4 -> 20 K+ + 5 Fe3+ + 61 Mn2+ + 30 NO3- + 30 CO2 + 94 H2O + 188 HSO4-");
+    for (const [k, v] of Object.entries(independentResiduals(pairs(r)))) expect(v, k).toBe(0);
+  });
+
   it("documented examples: octane, per-mole normalisation and an ionic equation", () => {
     expect(formatReaction(balanceReaction("C8H18 + O2 -> CO2 + H2O"))).toBe("2 C8H18 + 25 O2 -> 16 CO2 + 18 H2O");
     const per = balanceReaction("C8H18 + O2 -> CO2 + H2O", { per: "C8H18" });
@@ -105,6 +111,13 @@ describe("balanceReaction", () => {
     const r = balanceReaction("7 CH4(g) + 3 O2(g) -> 9 CO2(g) + H2O(l)");
     expect(formatReaction(r)).toBe("CH4(g) + 2 O2(g) -> CO2(g) + 2 H2O(l)"); // methane combustion, common practice
     expect(r.products[1]?.formula.phase).toBe("l");
+  });
+
+  it("stays exact when the numbers outgrow float64 (BigInt path)", () => {
+    // CnH(2n+2) + (3n+1)/2 O2 -> n CO2 + (n+1) H2O, alkane combustion — common practice; n = 4·10^8
+    const r = balanceReaction("C400000000H800000002 + O2 -> CO2 + H2O");
+    expect([...r.reactants, ...r.products].map((t) => t.exact)).toEqual(["2", "1200000001", "800000000", "800000002"]);
+    expect(checkBalance(r).balanced).toBe(true);
   });
 
   it("accepts { reactants, products } species lists", () => {

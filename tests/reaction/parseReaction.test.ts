@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { test, fc } from "@fast-check/vitest";
-import { MAX_REACTION_LENGTH, parseReaction } from "../../src/reaction/parseReaction.js";
+import { MAX_REACTION_COEFFICIENT, MAX_REACTION_LENGTH, parseReaction } from "../../src/reaction/parseReaction.js";
 import { formatReaction } from "../../src/reaction/formatReaction.js";
 import { RxthermError } from "../../src/errors.js";
 import { errorOf } from "./helpers.js";
@@ -17,6 +17,10 @@ describe("parseReaction", () => {
     // permanganate half-reaction, CRC Handbook Electrochemical Series — from memory
     expect(parseReaction("MnO4- + 8 H+ + 5 e- -> Mn2+ + 4 H2O").reactants.map((t) => t.species)).toEqual(["MnO4-", "H+", "e-"]);
     expect(parseReaction("C2H6 + 7/2 O2 = 2 CO2 + 3 H2O").reactants[1]?.exact).toBe("7/2");
+  });
+  it("documented limits", () => {
+    expect(MAX_REACTION_LENGTH).toBe(4096);
+    expect(MAX_REACTION_COEFFICIENT).toBe(1e9);
   });
   it("accepts every separator: ->, →, =, <=>, ⇌", () => {
     for (const arrow of ["->", "→", "=", "<=>", "⇌"]) {
@@ -60,6 +64,7 @@ describe("parseReaction", () => {
   describe("errors", () => {
     it("EMPTY_INPUT and INPUT_TOO_LONG", () => {
       expect(errorOf(() => parseReaction("   ")).code).toBe("EMPTY_INPUT");
+      expect(errorOf(() => parseReaction(7 as never)).details).toEqual({ type: "number" });
       const e = errorOf(() => parseReaction(`${"H2 + ".repeat(1000)}O2 -> H2O`));
       expect(e.code).toBe("INPUT_TOO_LONG");
       expect(e.details).toEqual({ length: 5009, limit: MAX_REACTION_LENGTH });
