@@ -1,11 +1,12 @@
 import { RxthermError } from "../errors.js";
+import { GAS_CONSTANT_J_PER_MOL_K } from "../units.js";
 import type { Library, Species } from "../species/types.js";
 import type { Reaction } from "../reaction/types.js";
 import type { ExtentSpec, Flows, Stream } from "../extent/types.js";
 import { solveExtents } from "../extent/solveExtents.js";
 import { findRoot } from "../numeric/roots.js";
 import { resolveSpeciesCached } from "../_internal/enthalpyLinks.js";
-import { resolveStream } from "./heatDuty.js";
+import { resolveStream } from "../_internal/energyStreams.js";
 
 /**
  * Input of {@link adiabaticReactionTemperature} and {@link adiabaticTemperatureRise}.
@@ -40,6 +41,13 @@ export interface AdiabaticReactionOptions {
   limitsK?: readonly [number, number];
   /** Extend Cp forms beyond their data range instead of throwing `OUT_OF_RANGE`. @defaultValue false */
   extrapolate?: boolean;
+  /**
+   * `"constant-pressure"` (flow reactor or open/vented batch): the enthalpy H is conserved.
+   * `"constant-volume"` (rigid closed vessel): the internal energy U = H − n_gas·R·T is conserved,
+   * which gives a higher temperature when gases are present.
+   * @defaultValue "constant-pressure"
+   */
+  vessel?: "constant-pressure" | "constant-volume";
 }
 
 /**
@@ -56,10 +64,12 @@ export interface AdiabaticReactionResult {
   readonly extents: number[];
   /** Root-finder iterations. */
   readonly iterations: number;
-  /** Enthalpy balance residual Σout n·H(T) − Σin n·H(T_in) at the solution, W or J. */
+  /** Balance residual at the solution, W or J: Σout n·H(T) − Σin n·H(T_in) (or the same in U for a rigid vessel). */
   readonly residual: number;
   /** Inlet enthalpy Σin n·H°(T_in) including formation enthalpies, W or J. */
   readonly inletEnthalpy: number;
+  /** The balance used: `"constant-pressure"` (H conserved) or `"constant-volume"` (U conserved). */
+  readonly vessel: "constant-pressure" | "constant-volume";
 }
 
 /**
@@ -117,7 +127,8 @@ export interface AdiabaticTemperatureRiseResult extends AdiabaticReactionResult 
  * temperature (for several inlet streams at different temperatures, their adiabatic mixing
  * temperature without reaction). The full Cp(T) of every outlet species is integrated; no heat
  * goes to the vessel wall (a thermal-inertia φ-factor of 1), no boiling or pressure relief is
- * modelled, and only the given reactions occur (decomposition of products is not included).
+ * modelled, and only the given reactions occur (decomposition of products is not included). For a
+ * closed rigid vessel pass `vessel: "constant-volume"` (internal energy conserved).
  *
  * **Process-safety caution:** a screening estimate, no substitute for calorimetry (e.g. adiabatic
  * or reaction calorimetry) of the real mixture, for the vessel's relief design or for a hazard
@@ -147,6 +158,9 @@ function solveAdiabatic(fn: string, input: AdiabaticReactionInput, options: Adia
   const extrapolate = options.extrapolate === true;
   const ro = extrapolate ? EXTRAPOLATE : undefined;
   const toleranceK = options.toleranceK ?? 1e-9;
+  const vessel = options.vessel ?? "constant-pressure";
+  if (vessel !== "constant-pressure" && vessel !== "constant-volume") throw new RxthermError("INVALID_ARGUMENT", `${fn} option vessel must be "constant-pressure" or "constant-volume", got ${String(vessel)}`, { vessel });
+  const rigid = vessel === "constant-volume";
   if (!(toleranceK > 0) || !Number.isFinite(toleranceK)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires toleranceK > 0, got ${String(toleranceK)}`, { toleranceK });
   const inlets: readonly Stream[] = input.inlet === undefined || input.inlet === null
     ? []
@@ -154,11 +168,14 @@ function solveAdiabatic(fn: string, input: AdiabaticReactionInput, options: Adia
   if (inlets.length === 0) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires at least one inlet stream`, {});
   const resolved = inlets.map((s, i) => resolveStream(fn, s, `inlet[${i}]`, library, null, -1, null));
   let hIn = 0;
+  let uIn = 0; // Σ n·(H − R·T) over the gases, Σ n·H over condensed phases
   let nTotal = 0;
   let weightedT = 0;
   for (const r of resolved) {
     for (let i = 0; i < r.species.length; i++) {
-      hIn += r.flows[i]! * r.species[i]!.enthalpy(r.T, ro);
+      const h = r.flows[i]! * r.species[i]!.enthalpy(r.T, ro);
+      hIn += h;
+      uIn += r.species[i]!.phase === "g" ? h - r.flows[i]! * GAS_CONSTANT_J_PER_MOL_K * r.T : h;
       nTotal += r.flows[i]!;
       weightedT += r.flows[i]! * r.T;
     }
@@ -176,15 +193,19 @@ function solveAdiabatic(fn: string, input: AdiabaticReactionInput, options: Adia
     outFlows.push(n);
   }
   const limits = options.limitsK ?? defaultLimits(outSpecies, extrapolate);
+  let outGas = 0;
+  for (let i = 0; i < outSpecies.length; i++) if (outSpecies[i]!.phase === "g") outGas += outFlows[i]!;
+  const rOutGas = rigid ? GAS_CONSTANT_J_PER_MOL_K * outGas : 0;
+  const target = rigid ? uIn : hIn;
   const balance = (T: number): number => {
     let h = 0;
     for (let i = 0; i < outSpecies.length; i++) h += outFlows[i]! * outSpecies[i]!.enthalpy(T, ro);
-    return h - hIn;
+    return h - rOutGas * T - target;
   };
   const slope = (T: number): number => {
     let c = 0;
     for (let i = 0; i < outSpecies.length; i++) c += outFlows[i]! * outSpecies[i]!.cp(T, ro);
-    return c;
+    return c - rOutGas;
   };
   const start = clamp(nTotal > 0 ? weightedT / nTotal : resolved[0]!.T, limits);
   const width = Math.max(1, Math.min(100, (limits[1] - limits[0]) / 10));
@@ -200,7 +221,7 @@ function solveAdiabatic(fn: string, input: AdiabaticReactionInput, options: Adia
   const P = inlets[0]!.P;
   const outlet: Stream = P === undefined ? { T: root.root, flows: outletFlows } : { T: root.root, flows: outletFlows, P };
   const result: AdiabaticReactionResult = {
-    T: root.root, outlet, extents: [...ext.extents], iterations: root.iterations, residual: root.residual, inletEnthalpy: hIn,
+    T: root.root, outlet, extents: [...ext.extents], iterations: root.iterations, residual: root.residual, inletEnthalpy: hIn, vessel,
   };
   // starting temperature: the batch T, or the adiabatic mixing temperature of the inlet streams
   let startT = resolved[0]!.T;
@@ -210,8 +231,11 @@ function solveAdiabatic(fn: string, input: AdiabaticReactionInput, options: Adia
     const mixLimits = options.limitsK ?? defaultLimits(mixSpecies, extrapolate);
     const mix = findRoot((T) => {
       let h = 0;
-      for (let i = 0; i < mixSpecies.length; i++) h += mixFlows[i]! * mixSpecies[i]!.enthalpy(T, ro);
-      return h - hIn;
+      for (let i = 0; i < mixSpecies.length; i++) {
+        const s = mixSpecies[i]!;
+        h += mixFlows[i]! * (s.enthalpy(T, ro) - (rigid && s.phase === "g" ? GAS_CONSTANT_J_PER_MOL_K * T : 0));
+      }
+      return h - target;
     }, [Math.min(...resolved.map((r) => r.T)), Math.max(...resolved.map((r) => r.T))], { toleranceX: toleranceK, limits: mixLimits });
     startT = mix.root;
   }

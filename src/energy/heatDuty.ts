@@ -1,9 +1,9 @@
 import { RxthermError } from "../errors.js";
-import { STANDARD_TEMPERATURE_K } from "../units.js";
+import { GAS_CONSTANT_J_PER_MOL_K } from "../units.js";
 import type { Library, Species } from "../species/types.js";
 import type { Reaction } from "../reaction/types.js";
 import type { Stream } from "../extent/types.js";
-import { resolveSpeciesCached } from "../_internal/enthalpyLinks.js";
+import { resolveStream, type Entry, type ResolvedStream } from "../_internal/energyStreams.js";
 import { prepareReaction, standardEnthalpyExact } from "../_internal/preparedReaction.js";
 
 /**
@@ -49,6 +49,13 @@ export interface HeatDutyOptions {
   warnings?: boolean;
   /** Extend Cp forms beyond their data range instead of throwing `OUT_OF_RANGE`. @defaultValue false */
   extrapolate?: boolean;
+  /**
+   * For a closed batch: `"constant-pressure"` gives Q = ΔH; `"constant-volume"` (a rigid vessel) gives
+   * Q = ΔU = ΔH − Δ(PV), with PV = n·R·T for the gases and the PV of condensed phases neglected.
+   * Open steady-flow units always use ΔH (leave the default).
+   * @defaultValue "constant-pressure"
+   */
+  vessel?: "constant-pressure" | "constant-volume";
 }
 
 /**
@@ -107,6 +114,8 @@ export interface HeatDutyResult {
   readonly streams: { readonly inlet: readonly StreamHeat[]; readonly outlet: readonly StreamHeat[] };
   /** Species that change phase between inlet and outlet. */
   readonly phaseChanges: readonly PhaseChange[];
+  /** Δ(PV) = R·(Σout n_gas·T − Σin n_gas·T) subtracted for `vessel: "constant-volume"`, else 0; J. */
+  readonly pvTerm: number;
   /** Sanity warnings (only with `warnings: true`). */
   readonly warnings: readonly string[];
 }
@@ -125,7 +134,8 @@ export interface HeatDutyResult {
  * path-independent ΔH). The breakdown separates the latent heat at 298.15 K of any species that
  * changes phase between inlet and outlet (same formula, different phase key, e.g. H2O(l) → H2O(g)).
  * Ideal gases and ideal mixtures (no heats of mixing); pressure effects on H neglected. For a
- * closed vessel at constant volume the heat is ΔU = ΔH − Δ(PV), not computed here.
+ * rigid closed vessel pass `vessel: "constant-volume"`: the heat is then ΔU = ΔH − Δ(PV) with
+ * PV = n·R·T for the gases (`pvTerm`).
  *
  * Before anything is computed the element balance is checked: streams whose elements do not balance
  * to 1e-9 relative (plus 1e-15 of the largest element flow, so round-off dust on a trace element is
@@ -154,6 +164,8 @@ export function heatDuty(input: HeatDutyInput, options: HeatDutyOptions = {}): H
   const extrapolate = options.extrapolate === true;
   const ro = extrapolate ? EXTRAPOLATE : undefined;
   const method = options.method ?? "formation";
+  const vessel = options.vessel ?? "constant-pressure";
+  if (vessel !== "constant-pressure" && vessel !== "constant-volume") throw new RxthermError("INVALID_ARGUMENT", `${fn} option vessel must be "constant-pressure" or "constant-volume", got ${String(vessel)}`, { vessel });
   if (method !== "formation" && method !== "reaction") throw new RxthermError("INVALID_ARGUMENT", `${fn} option method must be "formation" or "reaction", got ${String(method)}`, { method });
   const inlets = asStreams(fn, input.inlet, "inlet");
   const outlets = asStreams(fn, input.outlet, "outlet");
@@ -192,8 +204,18 @@ export function heatDuty(input: HeatDutyInput, options: HeatDutyOptions = {}): H
   let hIn = 0, hOut = 0, sIn = 0, sOut = 0;
   for (const s of inHeat) { hIn += s.enthalpy; sIn += s.sensible; }
   for (const s of outHeat) { hOut += s.enthalpy; sOut += s.sensible; }
-  const formation = clean(hOut - hIn);
-  const reaction = clean(heat298 + sOut - sIn);
+  // rigid closed vessel: Q = ΔU = ΔH − Δ(PV), PV = nRT for the gases
+  let pvTerm = 0;
+  if (vessel === "constant-volume") {
+    const gasNT = (rs: readonly ResolvedStream[]): number => {
+      let sum = 0;
+      for (const r of rs) for (let i = 0; i < r.species.length; i++) if (r.species[i]!.phase === "g") sum += r.flows[i]! * r.T;
+      return sum;
+    };
+    pvTerm = GAS_CONSTANT_J_PER_MOL_K * (gasNT(outResolved) - gasNT(inResolved));
+  }
+  const formation = clean(hOut - hIn - pvTerm);
+  const reaction = clean(heat298 + sOut - sIn - pvTerm);
 
   // ── latent heat of phase changes ──
   const phaseChanges = findPhaseChanges(net);
@@ -211,24 +233,12 @@ export function heatDuty(input: HeatDutyInput, options: HeatDutyOptions = {}): H
     sensibleOut: clean(sOut),
     streams: { inlet: inHeat, outlet: outHeat },
     phaseChanges,
+    pvTerm: clean(pvTerm),
     warnings,
   };
 }
 
 const EXTRAPOLATE = Object.freeze({ extrapolate: true });
-
-interface Entry {
-  readonly species: Species;
-  nIn: number;
-  nOut: number;
-  delta: number;
-}
-
-interface ResolvedStream {
-  readonly T: number;
-  readonly species: Species[];
-  readonly flows: number[];
-}
 
 function clean(x: number): number {
   return x === 0 ? 0 : x;
@@ -237,46 +247,6 @@ function clean(x: number): number {
 function asStreams(fn: string, s: Stream | readonly Stream[] | undefined, label: string): readonly Stream[] {
   if (s === undefined || s === null) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${label} stream(s)`, { [label]: s });
   return Array.isArray(s) ? (s as readonly Stream[]) : [s as Stream];
-}
-
-/** Validate a stream, resolve its species, and add it to the net change (sign −1 inlet, +1 outlet). */
-export function resolveStream(
-  fn: string, s: Stream, label: string, library: Library | undefined,
-  net: Map<string, Entry> | null, sign: number, warnings: string[] | null,
-): ResolvedStream {
-  if (s === null || typeof s !== "object" || s.flows === null || typeof s.flows !== "object") {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${label} to be a stream { T, flows }`, { stream: label });
-  }
-  const T = s.T;
-  if (typeof T !== "number" || !Number.isFinite(T) || T <= 0) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${label}.T to be an absolute temperature above 0 K, got ${String(T)}`, { stream: label, T });
-  }
-  const species: Species[] = [];
-  const flows: number[] = [];
-  let total = 0;
-  for (const key in s.flows) {
-    const n = s.flows[key];
-    if (typeof n !== "number" || !Number.isFinite(n)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires finite flows, got ${String(n)} for ${key} in ${label}`, { stream: label, species: key, flow: n });
-    if (n < 0) throw new RxthermError("NEGATIVE_FLOW", `${fn} requires non-negative flows, got ${n} for ${key} in ${label}`, { stream: label, species: key, flow: n });
-    if (n === 0) continue;
-    const sp = resolveSpeciesCached(fn, key, library);
-    species.push(sp);
-    flows.push(n);
-    total += n;
-    if (net) {
-      const e = net.get(sp.key);
-      if (e) {
-        if (sign < 0) e.nIn += n; else e.nOut += n;
-        e.delta += sign * n;
-      } else net.set(sp.key, { species: sp, nIn: sign < 0 ? n : 0, nOut: sign > 0 ? n : 0, delta: sign * n });
-    }
-  }
-  if (warnings) {
-    if (T < 200) warnings.push(`${label}.T = ${T} K is below 200 K: was it given in °C instead of K?`);
-    if (T > 4000) warnings.push(`${label}.T = ${T} K is above 4000 K: check the temperature unit`);
-    if (total > 1e6) warnings.push(`${label} total flow ${total} is above 10^6: was it given in kmol or lbmol instead of mol?`);
-  }
-  return { T, species, flows };
 }
 
 /** ELEMENT_IMBALANCE unless Σin = Σout for every element (1e-9 relative). */

@@ -55,6 +55,8 @@ const tabulatedSchema = z.strictObject({
  * Zod schema of one Cp form (discriminated by `form`).
  *
  * @category Species data
+ * @example
+ * cpFormSchema.safeParse({ form: "constant", cpJPerMolK: 29.1 }).success // => true
  */
 export const cpFormSchema = z.discriminatedUnion("form", [
   shomateSchema, polynomialSchema, nasa7Schema, nasa9Schema, constantSchema, tabulatedSchema,
@@ -65,6 +67,8 @@ export const cpFormSchema = z.discriminatedUnion("form", [
  * overriding the species' `heatCapacity.source` for this range.
  *
  * @category Species data
+ * @example
+ * cpRangeSchema.safeParse({ TminK: 0, TmaxK: 400, cp: { form: "constant", cpJPerMolK: 29 } }).success // => false (TminK > 0 required)
  */
 export const cpRangeSchema = z.strictObject({
   TminK: positiveK,
@@ -79,6 +83,8 @@ export const cpRangeSchema = z.strictObject({
  * H steps up by `dHKJPerMol` (kJ/mol) at `TK` (K), S by ΔH/T.
  *
  * @category Species data
+ * @example
+ * transitionSchema.safeParse({ TK: 847, dHKJPerMol: 0.7291, source: "nist-webbook" }).success // => true
  */
 export const transitionSchema = z.strictObject({
   TK: positiveK,
@@ -91,6 +97,8 @@ export const transitionSchema = z.strictObject({
  * Zod schema of one species entry of a data file.
  *
  * @category Species data
+ * @example
+ * speciesEntrySchema.safeParse({ key: "N2(g)" }).success // => false (the values and their sources are missing)
  */
 export const speciesEntrySchema = z.strictObject({
   key: z.string().min(1).max(64).describe("formula with phase, e.g. CO2(g); isomers may carry a prefix, e.g. n-C4H10(g)"),
@@ -121,6 +129,8 @@ export const speciesEntrySchema = z.strictObject({
  * field names carry (a file written in other units is rejected, not converted).
  *
  * @category Species data
+ * @example
+ * unitsBlockSchema.safeParse({ hf298: "kcal/mol" }).success // => false
  */
 export const unitsBlockSchema = z.strictObject({
   hf298: z.literal("kJ/mol").optional(),

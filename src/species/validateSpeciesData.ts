@@ -31,16 +31,41 @@ export interface ValidateSpeciesDataOptions {
   allowBuiltInSources?: boolean;
 }
 
-/** Largest |ΔfH°| in kJ/mol accepted; larger values are taken for J/mol written in a kJ/mol field. */
+/**
+ * Largest |ΔfH°| in kJ/mol that {@link validateSpeciesData} accepts; larger values are taken for J/mol
+ * written in the kJ/mol field.
+ * @category Species data
+ * @example
+ * MAX_ABS_HF298_KJ_PER_MOL // => 20000
+ */
 export const MAX_ABS_HF298_KJ_PER_MOL = 20000;
-/** Largest Cp in J/(mol·K) accepted; larger values are taken for wrong units (e.g. J/(kg·K)). */
+/**
+ * Largest Cp in J/(mol·K) that {@link validateSpeciesData} accepts; larger values are taken for wrong
+ * units (e.g. J/(kg·K)).
+ * @category Species data
+ * @example
+ * MAX_CP_J_PER_MOL_K // => 3000
+ */
 export const MAX_CP_J_PER_MOL_K = 3000;
-/** Largest S°298 in J/(mol·K) accepted. */
+/**
+ * Largest S°298 in J/(mol·K) that {@link validateSpeciesData} accepts.
+ * @category Species data
+ * @example
+ * MAX_S298_J_PER_MOL_K // => 5000
+ */
 export const MAX_S298_J_PER_MOL_K = 5000;
-/** Highest lowest-range temperature accepted, K: data must reach 298.15 K or start by 300 K (NASA convention). */
+/**
+ * Highest lowest-range temperature in K that {@link validateSpeciesData} accepts: Cp data must reach
+ * 298.15 K or start by 300 K (the NASA-polynomial convention; such data are read down to 298.15 K).
+ * @category Species data
+ * @example
+ * MAX_LOWEST_TMIN_K // => 300
+ */
 export const MAX_LOWEST_TMIN_K = 300;
 /** Number of Cp samples per range in the positivity check (plus both ends). */
 const CP_SAMPLES = 200;
+/** Deepest nesting walked; a species file needs about 8 levels. */
+const MAX_DEPTH = 32;
 /** Names that must never be used as object keys (prototype pollution). */
 const UNSAFE_KEYS = new Set(["__proto__", "constructor", "prototype"]);
 
@@ -146,6 +171,10 @@ function lower(message: string): string {
 /** Walk every own key of every object and array; report the unsafe ones. */
 function findUnsafeKeys(value: unknown, path: (string | number)[], issues: SpeciesDataIssue[], seen: Set<object>): void {
   if (typeof value !== "object" || value === null) return;
+  if (path.length > MAX_DEPTH) {
+    issues.push({ path: path.slice(0, 8), message: `the data are nested deeper than ${MAX_DEPTH} levels` });
+    return;
+  }
   if (seen.has(value)) {
     issues.push({ path, message: "the data contain a cycle (not JSON)" });
     return;

@@ -74,3 +74,16 @@ describe("adiabaticTemperatureRise", () => {
     expect(Math.abs(r.deltaT)).toBeLessThan(1e-6); // no reaction: outlet is the adiabatic mix
   });
 });
+
+describe("adiabaticReactionTemperature in a rigid vessel", () => {
+  it("constant volume conserves U = H − n_gas·R·T and runs hotter than constant pressure", () => {
+    const p = adiabaticReactionTemperature(METHANE_AIR);
+    const v = adiabaticReactionTemperature(METHANE_AIR, { vessel: "constant-volume" });
+    expect(v.vessel).toBe("constant-volume");
+    expect(v.T).toBeGreaterThan(p.T);
+    // check U conservation directly: Δ(H − n_gas·R·T) over the reaction is zero (gas count is unchanged here)
+    const q = heatDuty({ inlet: METHANE_AIR.inlet, outlet: v.outlet }, { vessel: "constant-volume" });
+    expect(Math.abs(q.duty)).toBeLessThan(1e-6 * Math.abs(v.inletEnthalpy) + 1e-6);
+    expect(caught(() => adiabaticReactionTemperature(METHANE_AIR, { vessel: "sealed" as never })).code).toBe("INVALID_ARGUMENT");
+  });
+});

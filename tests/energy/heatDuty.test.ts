@@ -37,6 +37,17 @@ describe("heatDuty", () => {
     expect(r.latentHeat).toBe(0);
   });
 
+  it("heatDuty in a rigid vessel (constant volume) subtracts Δ(PV) = R·Δ(n_gas·T)", () => {
+    const input = { inlet: { T: 298.15, flows: { "N2(g)": 1, "H2O(l)": 1 } }, outlet: { T: 350, flows: { "N2(g)": 1, "H2O(l)": 1 } } };
+    const p = heatDuty(input);
+    const v = heatDuty(input, { vessel: "constant-volume" });
+    // common practice: for an ideal gas Cv = Cp − R, so Q_v = Q_p − n·R·ΔT (liquid PV neglected)
+    expect(v.pvTerm).toBeCloseTo(8.314462618 * (350 - 298.15), 9);
+    expect(v.duty).toBeCloseTo(p.duty - 8.314462618 * (350 - 298.15), 6);
+    expect(v.reaction).toBeCloseTo(v.formation, 6);
+    expect(caught(() => heatDuty(input, { vessel: "open" as never })).code).toBe("INVALID_ARGUMENT");
+  });
+
   it("heatDuty separates the latent heat of water that evaporates", () => {
     const r = heatDuty({ inlet: { T: 298.15, flows: { "H2O(l)": 2 } }, outlet: { T: 298.15, flows: { "H2O(g)": 2 } } });
     // CODATA Key Values 1989 (from memory): ΔvapH°(298.15 K) = 44.004 kJ/mol

@@ -63,6 +63,13 @@ describe("adiabaticFlameTemperature", () => {
     expect(adiabaticFlameTemperature({ fuel: "CH4(g)", mode: "complete" }).T).toBeCloseTo(2326.6, 1); // @example
   });
 
+  it("adiabaticFlameTemperature gives the README example values (10 % excess air, 200 °C air)", () => {
+    const eq = adiabaticFlameTemperature({ fuel: "CH4(g)", excessAir: 0.1, oxidizerT: 473.15 });
+    expect(eq.T).toBeCloseTo(2231.3, 1);
+    expect(eq.products["NO(g)"]).toBeCloseTo(3.92e-3, 5);
+    expect(adiabaticFlameTemperature({ fuel: "CH4(g)", excessAir: 0.1, oxidizerT: 473.15, mode: "complete" }).T).toBeCloseTo(2302.4, 1);
+  });
+
   // Published equilibrium flame temperatures, fuel + stoichiometric air (O2 + 3.76 N2) from 298.15 K
   // at 1 atm: CH4 2226 K, C3H8 2267 K, H2 2383 K (from memory: widely tabulated in combustion
   // textbooks). Our air is 21/79 (3.762 N2 per O2) and our data NIST-JANAF/WebBook Shomate fits

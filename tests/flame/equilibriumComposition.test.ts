@@ -68,6 +68,11 @@ describe("equilibriumComposition", () => {
     expect(r.excluded).toEqual(["Ar(g)"]);
   });
 
+  it("equilibriumComposition gives the README example value (water–gas shift, 700 K, 20 bar)", () => {
+    const r = equilibriumComposition({ feed: { "CO(g)": 1, "H2O(g)": 2 }, species: ["CO(g)", "H2O(g)", "CO2(g)", "H2(g)"], T: 700, P: 2e6 });
+    expect(r.moles["CO(g)"]).toBeCloseTo(0.0823, 4);
+  });
+
   it("equilibriumComposition({ H }) returns the T whose equilibrium enthalpy is H", () => {
     const feed = { "CO(g)": 1, "H2O(g)": 1.5, "N2(g)": 0.2 };
     const set = ["CO(g)", "CO2(g)", "H2(g)", "H2O(g)", "N2(g)", "CH4(g)"];

@@ -20,6 +20,11 @@ describe("flameTemperatureSweep", () => {
     expect(s.T.map((t) => Math.round(t))).toEqual([1995, 2225, 2136]); // @example
   });
 
+  it("flameTemperatureSweep gives the README and docs/flame.md example values (propane)", () => {
+    const s = flameTemperatureSweep({ fuel: "C3H8(g)" }, { parameter: "equivalenceRatio", values: [0.8, 0.9, 1.0, 1.1, 1.2] });
+    expect(s.T.map((t) => Math.round(t))).toEqual([2041, 2179, 2266, 2265, 2200]);
+  });
+
   it("flameTemperatureSweep(φ) peaks slightly rich of stoichiometric (equilibrium)", () => {
     // the maximum equilibrium flame temperature of hydrocarbon–air lies at φ ≈ 1.03–1.1
     // (common practice: dissociation shifts the peak to the rich side)

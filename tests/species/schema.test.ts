@@ -52,3 +52,22 @@ describe("speciesDataJsonSchema", () => {
     for (const f of ["shomate", "polynomial", "nasa7", "nasa9", "constant", "tabulated"]) expect(text).toContain(`"const":"${f}"`);
   });
 });
+
+describe("schema parts (the @examples)", async () => {
+  const m = await import("../../src/species/schema.js");
+  it("cpFormSchema, cpRangeSchema, transitionSchema, speciesEntrySchema, unitsBlockSchema", () => {
+    expect(m.cpFormSchema.safeParse({ form: "constant", cpJPerMolK: 29.1 }).success).toBe(true);
+    expect(m.cpRangeSchema.safeParse({ TminK: 0, TmaxK: 400, cp: { form: "constant", cpJPerMolK: 29 } }).success).toBe(false);
+    expect(m.transitionSchema.safeParse({ TK: 847, dHKJPerMol: 0.7291, source: "nist-webbook" }).success).toBe(true);
+    expect(m.speciesEntrySchema.safeParse({ key: "N2(g)" }).success).toBe(false);
+    expect(m.unitsBlockSchema.safeParse({ hf298: "kcal/mol" }).success).toBe(false);
+    expect(m.unitsBlockSchema.safeParse({ hf298: "kJ/mol", s298: "J/(mol K)" }).success).toBe(true);
+  });
+});
+
+describe("validation limits (the @examples)", async () => {
+  const v = await import("../../src/species/validateSpeciesData.js");
+  it("MAX_ABS_HF298_KJ_PER_MOL, MAX_CP_J_PER_MOL_K, MAX_S298_J_PER_MOL_K, MAX_LOWEST_TMIN_K", () => {
+    expect([v.MAX_ABS_HF298_KJ_PER_MOL, v.MAX_CP_J_PER_MOL_K, v.MAX_S298_J_PER_MOL_K, v.MAX_LOWEST_TMIN_K]).toEqual([20000, 3000, 5000, 300]);
+  });
+});

@@ -138,6 +138,13 @@ describe("validateSpeciesData", () => {
     }
   });
 
+  it("rejects absurdly deep nesting with INVALID_DATA instead of overflowing the stack", () => {
+    let deep: unknown = 1;
+    for (let i = 0; i < 100000; i++) deep = { a: deep };
+    const issues = issuesOf({ sources: {}, species: [], description: deep });
+    expect(issues[0]!.message).toMatch(/nested deeper than 32/);
+  });
+
   it("rejects non-objects", () => {
     for (const bad of [null, 42, "x", [], { species: [] }]) expect(issuesOf(bad).length).toBeGreaterThan(0);
   });
