@@ -120,7 +120,7 @@ export { reactionEnthalpyFromCombustion, COMBUSTION_REFERENCE_SPECIES } from "./
 export type { CombustionEnthalpyResult } from "./enthalpy/reactionEnthalpyFromCombustion.js";
 export { formationEnthalpyFromCombustion } from "./enthalpy/formationEnthalpyFromCombustion.js";
 export type { FormationEnthalpyFromCombustionOptions } from "./enthalpy/formationEnthalpyFromCombustion.js";
-export { heatingValue } from "./enthalpy/heatingValue.js";
+export { heatingValue, NORMAL_MOLAR_VOLUME_M3_PER_MOL } from "./enthalpy/heatingValue.js";
 export type { HeatingValueOptions } from "./enthalpy/heatingValue.js";
 export { wobbeIndex, AIR_MOLAR_MASS_G_PER_MOL } from "./enthalpy/wobbeIndex.js";
 export type { WobbeIndexOptions } from "./enthalpy/wobbeIndex.js";

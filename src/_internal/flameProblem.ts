@@ -229,7 +229,8 @@ export function solveFlamePoint(s: FlameSetup, pt: FlamePoint): FlamePointResult
   let complete: CompleteSolution | null = null;
   let canComplete = true;
   for (const el of els.keys()) if (!COMPLETE_ELEMENTS.has(el)) canComplete = false;
-  if (s.mode === "complete" || canComplete) {
+  // in mode "equilibrium" the complete-combustion T only seeds a cold start
+  if (s.mode === "complete" || (canComplete && !Number.isFinite(s.lastT))) {
     try {
       complete = solveComplete(s, els, target, s.constantVolume, pt);
       completeT = complete.T;

@@ -30,8 +30,16 @@ export interface HeatingValueOptions {
 
 /** Normal conditions for Nm³: 0 °C and 1 atm. */
 const NORMAL_T_K = 273.15;
-/** Ideal-gas molar volume at normal conditions, m³/mol (R·T/P). */
-export const NORMAL_MOLAR_VOLUME_M3 = (GAS_CONSTANT_J_PER_MOL_K * NORMAL_T_K) / ATMOSPHERE_PA;
+/**
+ * Ideal-gas molar volume at the normal conditions of `per: "Nm3"` (0 °C = 273.15 K, 101.325 kPa),
+ * R·T/P in m³/mol.
+ *
+ * @category Enthalpy
+ * @example
+ * NORMAL_MOLAR_VOLUME_M3_PER_MOL // => 0.0224139695 (m³/mol, rounded)
+ * @see CODATA 2018 recommended values (molar volume of an ideal gas at 273.15 K, 101.325 kPa).
+ */
+export const NORMAL_MOLAR_VOLUME_M3_PER_MOL = (GAS_CONSTANT_J_PER_MOL_K * NORMAL_T_K) / ATMOSPHERE_PA;
 
 /**
  * Heating value (heat of complete combustion, sign made positive) of a fuel species or mixture at 25 °C.
@@ -72,7 +80,7 @@ export function heatingValue(fuel: string | Flows, options: HeatingValueOptions 
     if (per === "kg") meanMolarMass += x * molarMass(s.formula);
   }
   if (per === "kg") return perMol / (meanMolarMass / 1000);
-  if (per === "Nm3") return perMol / NORMAL_MOLAR_VOLUME_M3;
+  if (per === "Nm3") return perMol / NORMAL_MOLAR_VOLUME_M3_PER_MOL;
   return perMol === 0 ? 0 : perMol;
 }
 

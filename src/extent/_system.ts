@@ -356,11 +356,10 @@ function matchByPhase(key: string, candidates: readonly string[], fn: string): s
 }
 
 /** Index of a species named in a spec or measurement: exact key, else a unique phase-less match. */
-export function resolveSpecies(sys: StoichSystem, key: string, fn: string, role: string): number | undefined {
+export function resolveSpecies(sys: StoichSystem, key: string, fn: string): number | undefined {
   const direct = sys.index.get(key);
   if (direct !== undefined) return direct;
   const hit = matchByPhase(key, sys.species, fn);
   if (hit !== undefined) return sys.index.get(hit);
-  void role;
   return undefined;
 }

@@ -1,13 +1,12 @@
 import { RxthermError } from "../errors.js";
-import { molarMass } from "../formula/molarMass.js";
 import type { Formula } from "../formula/types.js";
-import { formulaOf, validateFlows } from "./_system.js";
+import { formulaOf, molarMassOf, validateFlows } from "./_system.js";
 import type { Flows } from "./types.js";
 import { waterSaturationPressure } from "./waterSaturationPressure.js";
 
 /**
  * Dry air by mole fraction, the default oxidizer of {@link combustion}: O₂ 0.209476 and Ar
- * 0.00934 from the U.S. Standard Atmosphere 1976 (table 3), CO₂ 0.000412 (≈ 412 ppm, the
+ * 0.00934 from the U.S. Standard Atmosphere 1976 (table 3; values written from memory of that table), CO₂ 0.000412 (≈ 412 ppm, the
  * global mean of about 2020; NOAA Global Monitoring Laboratory — value from memory), and N₂ the
  * balance 0.780772 (the 1976 table's 0.78084 less the CO₂ update; Ne, He, Kr and the other
  * trace gases, about 24 ppm, are lumped into it). Sums to exactly 1. Molar mass 28.966 g/mol.
@@ -245,7 +244,7 @@ export function combustion(input: CombustionInput): CombustionResult {
     if (k !== "H2O(g)") dry[k] = dryFlueGasTotal > 0 ? v / dryFlueGasTotal : 0;
   }
   const airMassKg = massKg(airFlows, fn);
-  const dryOxidizerMolarMass = sum(Object.entries(oxidizer).map(([k, y]) => y * molarMass(formulaOf(k, fn, "oxidizer"))));
+  const dryOxidizerMolarMass = sum(Object.entries(oxidizer).map(([k, y]) => y * molarMassOf(k, fn, "oxidizer")));
   return {
     theoreticalO2,
     theoreticalAir,
@@ -297,7 +296,7 @@ function fuelElements(fuelIn: CombustionInput["fuel"], fn: string): FuelElements
     if (f.charge !== 0) {
       throw new RxthermError("INVALID_ARGUMENT", `${fn}: fuel species ${key} is charged`, { species: key, charge: f.charge });
     }
-    massG += n * molarMass(f);
+    massG += n * molarMassOf(key, fn, "fuel");
     const els = Object.entries(f.elements);
     if (els.length === 1 && NOBLE.has((els[0] as [string, number])[0])) {
       const el = (els[0] as [string, number])[0];
@@ -352,11 +351,11 @@ function ultimateElements(fuel: UltimateFuel, fn: string): FuelElements {
   const grams = massKg * 1000;
   const atoms: Record<string, number> = {};
   for (const el of ["C", "H", "O", "N", "S"] as const) {
-    atoms[el] = (grams * (w[el] as number)) / molarMass(formulaOf(el, fn, "ultimate"));
+    atoms[el] = (grams * (w[el] as number)) / molarMassOf(el, fn, "ultimate");
   }
   return {
     atoms,
-    moistureMol: (grams * (w.moisture as number)) / molarMass(formulaOf("H2O", fn, "ultimate")),
+    moistureMol: (grams * (w.moisture as number)) / molarMassOf("H2O", fn, "ultimate"),
     noble: {},
     massKg,
     ashKg: massKg * (w.ash as number),
@@ -472,7 +471,7 @@ function humidityFraction(h: AirHumidity | undefined, fn: string): number {
 }
 
 function massKg(flows: Flows, fn: string): number {
-  return sum(Object.entries(flows).map(([k, n]) => n * molarMass(formulaOf(k, fn, "flows")))) / 1000;
+  return sum(Object.entries(flows).map(([k, n]) => n * molarMassOf(k, fn, "flows"))) / 1000;
 }
 
 function sum(values: readonly number[]): number {

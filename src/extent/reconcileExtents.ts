@@ -100,7 +100,7 @@ export function reconcileExtents(input: ReconcileExtentsInput, options: Reconcil
   const weightQ: Q[] = [];
   const seen = new Set<number>();
   for (const [key, value] of Object.entries(input.measured)) {
-    const s = resolveSpecies(sys, key, fn, "measured");
+    const s = resolveSpecies(sys, key, fn);
     if (s === undefined) {
       throw new RxthermError("INVALID_ARGUMENT", `${fn}: measured species ${key} is in neither the feed nor any reaction`, { species: key });
     }

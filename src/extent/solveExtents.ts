@@ -6,7 +6,6 @@ import {
   qAdd,
   qDiv,
   qFromNumber,
-  qIsZero,
   qMul,
   qNeg,
   qSign,
@@ -199,7 +198,7 @@ function specSpecies(sys: StoichSystem, s: Record<string, unknown>, field: strin
   if (typeof key !== "string") {
     throw new RxthermError("INVALID_ARGUMENT", `${fn}: spec ${k} needs a species key in ${field}`, { spec: k, field });
   }
-  const i = resolveSpecies(sys, key, fn, "spec");
+  const i = resolveSpecies(sys, key, fn);
   if (i === undefined || !sys.reacting[i]) {
     throw new RxthermError(
       "INVALID_ARGUMENT",

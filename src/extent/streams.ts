@@ -4,8 +4,7 @@
  * @module
  */
 import { RxthermError } from "../errors.js";
-import { molarMass } from "../formula/molarMass.js";
-import { formulaOf, validateFlows } from "./_system.js";
+import { molarMassOf, validateFlows } from "./_system.js";
 import type { Flows } from "./types.js";
 
 /**
@@ -42,7 +41,7 @@ export function massToMolarFlows(massFlows: Flows, options: MassFlowOptions = {}
   const factor = unitFactor(options, fn);
   validateFlows(massFlows, fn, "mass");
   const out: Flows = {};
-  for (const [key, m] of Object.entries(massFlows)) out[key] = (m * factor) / molarMass(formulaOf(key, fn, "mass"));
+  for (const [key, m] of Object.entries(massFlows)) out[key] = (m * factor) / molarMassOf(key, fn, "mass");
   return out;
 }
 
@@ -66,7 +65,7 @@ export function molarToMassFlows(flows: Flows, options: MassFlowOptions = {}): F
   const factor = unitFactor(options, fn);
   validateFlows(flows, fn, "flows");
   const out: Flows = {};
-  for (const [key, n] of Object.entries(flows)) out[key] = (n * molarMass(formulaOf(key, fn, "flows"))) / factor;
+  for (const [key, n] of Object.entries(flows)) out[key] = (n * molarMassOf(key, fn, "flows")) / factor;
   return out;
 }
 
@@ -110,7 +109,7 @@ export function moleFractions(flows: Flows): Record<string, number> {
 export function massFractions(flows: Flows): Record<string, number> {
   const fn = "massFractions";
   validateFlows(flows, fn, "flows");
-  const masses = Object.entries(flows).map(([key, n]) => [key, n * molarMass(formulaOf(key, fn, "flows"))] as const);
+  const masses = Object.entries(flows).map(([key, n]) => [key, n * molarMassOf(key, fn, "flows")] as const);
   const total = compensatedSum(masses.map(([, m]) => m));
   if (!(total > 0)) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a stream with a positive total flow`, { total });
@@ -153,7 +152,7 @@ export function totalMassFlow(flows: Flows, options: MassFlowOptions = {}): numb
   const fn = "totalMassFlow";
   const factor = unitFactor(options, fn);
   validateFlows(flows, fn, "flows");
-  return compensatedSum(Object.entries(flows).map(([key, n]) => n * molarMass(formulaOf(key, fn, "flows")))) / factor;
+  return compensatedSum(Object.entries(flows).map(([key, n]) => n * molarMassOf(key, fn, "flows"))) / factor;
 }
 
 function unitFactor(options: MassFlowOptions, fn: string): number {

@@ -82,7 +82,7 @@ const UNSAFE_KEYS = new Set(["__proto__", "constructor", "prototype"]);
  * on every value that resolves to the file's `sources` (or the built-in registry). Within a file,
  * a key may have one default entry and any number of `alternative` entries, each with its own
  * `dataset` (an alternative for a key the file does not otherwise hold is still accepted: it becomes the
- * default when the base library lacks the key). No object anywhere may have the key `__proto__`, `constructor` or `prototype`.
+ * default when the base library lacks the key). No object anywhere may have the key `__proto__`, `constructor` or `prototype`, and nothing may be nested deeper than 32 levels.
  *
  * Every problem is collected before anything is returned; the input is never modified.
  *

@@ -16,8 +16,9 @@ describe("nonNegativeLeastSquares", () => {
     expect(residual).toBeGreaterThan(0.05);
     for (const v of x) expect(v).toBeGreaterThanOrEqual(0);
   });
-  test.prop([fc.array(fc.double({ min: 0, max: 5, noNaN: true }).map((v) => (v < 1e-6 ? 0 : v)), { minLength: 4, maxLength: 4 })])(
-    "nonNegativeLeastSquares recovers any b built from non-negative amounts (residual < 1e-9)",
+  const amount = fc.oneof(fc.constant(0), fc.double({ min: 1e-9, max: 5, noNaN: true }), fc.double({ min: 1e-3, max: 1e3, noNaN: true }));
+  test.prop([fc.array(amount, { minLength: 4, maxLength: 4 })], { numRuns: 300 })(
+    "nonNegativeLeastSquares recovers any b built from non-negative amounts (residual below the 1e-6 the engine uses)",
     (n) => {
       // rows C, H, O; columns CH4, CO2, H2O, O2
       const a = new Float64Array([1, 1, 0, 0, 4, 0, 2, 0, 0, 2, 1, 2]);
@@ -25,7 +26,7 @@ describe("nonNegativeLeastSquares", () => {
       for (let i = 0; i < 3; i++) for (let j = 0; j < 4; j++) b[i] = b[i]! + a[i * 4 + j]! * n[j]!;
       if (b.every((v) => v === 0)) return;
       const { residual } = nonNegativeLeastSquares(a, 3, 4, b);
-      expect(residual).toBeLessThan(1e-9 * Math.max(1, ...b));
+      expect(residual).toBeLessThan(1e-6);
     },
   );
 });

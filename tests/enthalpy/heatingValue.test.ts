@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { test, fc } from "@fast-check/vitest";
-import { heatingValue } from "../../src/enthalpy/heatingValue.js";
+import { heatingValue, NORMAL_MOLAR_VOLUME_M3_PER_MOL } from "../../src/enthalpy/heatingValue.js";
 import { reactionEnthalpy } from "../../src/enthalpy/reactionEnthalpy.js";
 import { caught } from "./_helpers.js";
 
@@ -31,6 +31,12 @@ describe("heatingValue", () => {
     expect(heatingValue("CH4(g)", { per: "kg" }) / 1e6).toBeCloseTo(55.5, 1);
     expect(heatingValue("CH4(g)", { basis: "lower", per: "kg" }) / 1e6).toBeCloseTo(50.0, 1);
     expect(Math.abs(heatingValue("CH4(g)", { per: "Nm3" }) / 1e6 - 39.8)).toBeLessThan(0.15);
+  });
+
+  it("heatingValue per Nm³ uses the ideal-gas molar volume at 0 °C and 101.325 kPa", () => {
+    // CODATA 2018: molar volume of an ideal gas at 273.15 K, 101.325 kPa = 22.413 969 54 L/mol (from memory)
+    expect(NORMAL_MOLAR_VOLUME_M3_PER_MOL * 1000).toBeCloseTo(22.41396954, 7);
+    expect(heatingValue("H2(g)", { per: "Nm3" })).toBeCloseTo(heatingValue("H2(g)") / NORMAL_MOLAR_VOLUME_M3_PER_MOL, 6);
   });
 
   it("heatingValue: HHV − LHV is the latent heat of the water formed", () => {

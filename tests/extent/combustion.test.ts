@@ -38,7 +38,7 @@ describe("combustion", () => {
   });
 
   it("the default DRY_AIR sums to 1 and holds the U.S. Standard Atmosphere 1976 O2 and Ar fractions", () => {
-    // U.S. Standard Atmosphere 1976, table 3: O2 0.209476, Ar 0.00934 (mole fractions of dry air)
+    // U.S. Standard Atmosphere 1976, table 3: O2 0.209476, Ar 0.00934 (mole fractions of dry air) — from memory
     expect(DRY_AIR["O2(g)"]).toBe(0.209476);
     expect(DRY_AIR["Ar(g)"]).toBe(0.00934);
     const sum = Object.values(DRY_AIR).reduce((a, b) => a + b, 0);
@@ -140,6 +140,12 @@ describe("combustion", () => {
     for (const el of Object.keys(tin)) expect(tout[el] ?? 0).toBeCloseTo(tin[el] as number, 9);
     expect(Object.values(r.wet).reduce((a, b) => a + b, 0)).toBeCloseTo(1, 12);
     expect(Object.values(r.dry).reduce((a, b) => a + b, 0)).toBeCloseTo(1, 12);
+  });
+
+  it("does not mutate frozen inputs", () => {
+    const input = Object.freeze({ fuel: Object.freeze({ "CH4(g)": 1 }), oxidizer: AIR_21_79, excessAir: 0.1 });
+    expect(combustion(input).excessAir).toBe(0.1);
+    expect(Object.isFrozen(DRY_AIR)).toBe(true);
   });
 
   describe("errors", () => {

@@ -153,6 +153,19 @@ describe("solveExtents", () => {
       expect(c.code).toBe("CONFLICTING_SPECS");
       expect(c.details.specs).toEqual([0, 1]);
     });
+    it("the float path defers singular and infeasible cases to the exact path (same codes)", () => {
+      const reactions = ["CO + H2O -> CO2 + H2", "CH4 + H2O -> CO + 3 H2"];
+      const feed2 = { CH4: 10, H2O: 30, CO: 0, CO2: 0, H2: 0 };
+      const s = caught(() => solveExtents({ feed: feed2, reactions, specs: [{ of: "CH4", conversion: 0.5 }, { of: "CH4", outlet: 5 }] }, { arithmetic: "float" }));
+      expect(s.code).toBe("SINGULAR_SPECS");
+      const n = caught(() => solveExtents({ feed: { CH4: 1, O2: 1.5 }, reactions: rx, specs: [{ of: "CH4", conversion: 1 }] }, { arithmetic: "float" }));
+      expect(n.code).toBe("NEGATIVE_FLOW");
+      expect(n.details.species).toBe("O2");
+      // conversion 1 of the limiting reactant: exactly 0 left, never a tiny negative
+      const ok = solveExtents({ feed: { CH4: 0.3, O2: 0.6 }, reactions: rx, specs: [{ of: "CH4", conversion: 1 }] }, { arithmetic: "float" });
+      expect(ok.outlet.CH4).toBe(0);
+      expect(ok.outlet.O2).toBe(0);
+    });
     it("SPEC_COUNT_MISMATCH says how many specs are extra", () => {
       const e = caught(() => solveExtents({ feed, reactions: rx, specs: [{ of: "CH4", conversion: 0.5 }, { reaction: 0, extent: 0.1 }] }));
       expect(e.code).toBe("SPEC_COUNT_MISMATCH");
