@@ -12,7 +12,18 @@ import { parseFormula } from "../formula/parseFormula.js";
 import type { Formula } from "../formula/types.js";
 import { parseReaction } from "../reaction/parseReaction.js";
 import type { Reaction } from "../reaction/types.js";
-import { type Q, Q0, qAdd, qDiv, qFromNumber, qFromText, qIsZero, qMul, qNeg, qSub, qToNumber } from "./_rational.js";
+import {
+  type Rational,
+  rationalAdd,
+  rationalDiv,
+  rationalFromDecimalString,
+  rationalFromNumber,
+  rationalIsZero,
+  rationalMul,
+  rationalNeg,
+  rationalSub,
+  rationalToNumber,
+} from "../numeric/rational.js";
 import type { Flows } from "./types.js";
 
 /** A reaction with exact net coefficients (products +, reactants −), checked for balance. */
@@ -22,7 +33,7 @@ export interface PreparedReaction {
   /** Species keys as written, each once. */
   readonly species: readonly string[];
   /** Net exact coefficient of each species (products positive, reactants negative). */
-  readonly nu: readonly Q[];
+  readonly nu: readonly Rational[];
   /** The parsed formula of each species. */
   readonly formulas: readonly Formula[];
 }
@@ -124,53 +135,68 @@ export function prepareReaction(reaction: Reaction | string, index: number, fn: 
 
 function prepareObject(reaction: Reaction, index: number, fn: string): PreparedReaction {
   const species: string[] = [];
-  const nu: Q[] = [];
+  const nu: Rational[] = [];
   const formulas: Formula[] = [];
   const pos = new Map<string, number>();
-  const add = (key: string, formula: Formula, coef: Q): void => {
+  const add = (key: string, formula: Formula, coef: Rational): void => {
     const at = pos.get(key);
     if (at === undefined) {
       pos.set(key, species.length);
       species.push(key);
       nu.push(coef);
       formulas.push(formula);
-    } else nu[at] = qAdd(nu[at] as Q, coef);
+    } else nu[at] = rationalAdd(nu[at] as Rational, coef);
   };
-  const coefOf = (t: Reaction["reactants"][number]): Q => {
-    const fromText = typeof t.exact === "string" ? qFromText(t.exact) : null;
-    return fromText ?? qFromNumber(t.coefficient);
+  const coefOf = (t: Reaction["reactants"][number]): Rational => {
+    const fromText = typeof t.exact === "string" ? exactFromText(t.exact) : null;
+    return fromText ?? rationalFromNumber(t.coefficient);
   };
-  for (const t of reaction.reactants) {
-    const c = coefOf(t);
-    add(t.species, t.formula, { n: -c.n, d: c.d });
-  }
+  for (const t of reaction.reactants) add(t.species, t.formula, rationalNeg(coefOf(t)));
   for (const t of reaction.products) add(t.species, t.formula, coefOf(t));
   // exact element and charge balance
-  const residual = new Map<string, Q>();
-  let charge: Q = Q0;
+  const residual = new Map<string, Rational>();
+  let charge: Rational = ZERO;
   species.forEach((_, i) => {
     const f = formulas[i] as Formula;
-    const c = nu[i] as Q;
+    const c = nu[i] as Rational;
     for (const [el, count] of Object.entries(f.elements)) {
-      residual.set(el, qAdd(residual.get(el) ?? Q0, qMul(c, qFromNumber(count))));
+      residual.set(el, rationalAdd(residual.get(el) ?? ZERO, rationalMul(c, rationalFromNumber(count))));
     }
-    if (f.charge !== 0) charge = qAdd(charge, qMul(c, qFromNumber(f.charge)));
+    if (f.charge !== 0) charge = rationalAdd(charge, rationalMul(c, rationalFromNumber(f.charge)));
   });
   const label = reactionLabel(reaction);
   const residuals: Record<string, number> = {};
-  for (const [el, r] of residual) if (!qIsZero(r)) residuals[el] = qToNumber(r);
-  if (Object.keys(residuals).length > 0 || !qIsZero(charge)) {
+  for (const [el, r] of residual) if (!rationalIsZero(r)) residuals[el] = rationalToNumber(r);
+  if (Object.keys(residuals).length > 0 || !rationalIsZero(charge)) {
     const parts = Object.entries(residuals).map(([el, r]) => `${el} ${r > 0 ? "+" : ""}${r}`);
-    if (!qIsZero(charge)) parts.push(`charge ${qToNumber(charge)}`);
+    if (!rationalIsZero(charge)) parts.push(`charge ${rationalToNumber(charge)}`);
     throw new RxthermError("UNBALANCED_REACTION", `${fn} requires balanced reactions; reaction ${index} (${label}) leaves ${parts.join(", ")} (products − reactants)`, {
       reaction: index,
       label,
       residuals,
-      charge: qToNumber(charge),
+      charge: rationalToNumber(charge),
     });
   }
   return { label, species, nu, formulas };
 }
+
+/** Exact value of a coefficient text ("13/2", "2", "0.947", or a fraction of decimals); null if it is none. */
+function exactFromText(text: string): Rational | null {
+  try {
+    return rationalFromDecimalString(text);
+  } catch {
+    const slash = text.indexOf("/");
+    if (slash < 0) return null;
+    try {
+      const den = rationalFromDecimalString(text.slice(slash + 1));
+      return rationalIsZero(den) ? null : rationalDiv(rationalFromDecimalString(text.slice(0, slash)), den);
+    } catch {
+      return null;
+    }
+  }
+}
+
+const ZERO: Rational = rationalFromNumber(0);
 
 function reactionLabel(r: Reaction): string {
   const side = (ts: Reaction["reactants"]): string =>
@@ -188,7 +214,7 @@ export interface StoichStructure {
   /** Formula of each species. */
   readonly formulas: Formula[];
   /** nu[j][s]: net exact coefficient of species s in reaction j. */
-  readonly nu: Q[][];
+  readonly nu: Rational[][];
   /** The same as numbers. */
   readonly nuF: number[][];
   readonly reactions: PreparedReaction[];
@@ -199,7 +225,7 @@ export interface StoichStructure {
   /** True for species made (ν > 0) in at least one reaction. */
   readonly produced: boolean[];
   /** yieldRatio[p][a]: ν_P/|ν_A| agreed by the reactions making p from a; null if none, "inconsistent" if they differ. */
-  readonly yieldRatio: (Q | null | "inconsistent")[][];
+  readonly yieldRatio: (Rational | null | "inconsistent")[][];
   /** proportional[a][b]: true when two species' coefficient columns are proportional. */
   readonly proportional: boolean[][];
 }
@@ -209,7 +235,7 @@ export interface StoichSystem extends StoichStructure {
   /** Feed of each species (0 when not fed), as numbers. */
   readonly feed: number[];
   /** The same, exact (computed on first use). */
-  readonly feedQ: Q[];
+  readonly feedQ: Rational[];
 }
 
 const STRUCTURE_CACHE_LIMIT = 256;
@@ -238,7 +264,7 @@ export function buildSystem(feed: Flows, reactions: readonly (Reaction | string)
   const feedF: number[] = new Array<number>(st.species.length).fill(0);
   for (let i = 0; i < st.feedCount; i++) feedF[i] = feed[feedKeys[i] as string] as number;
   // the per-call system inherits the memoised structure (no copying) and adds the feed
-  const sys = Object.create(st) as { feed: number[]; exactFeed: Q[] | null };
+  const sys = Object.create(st) as { feed: number[]; exactFeed: Rational[] | null };
   sys.feed = feedF;
   sys.exactFeed = null;
   return sys as unknown as StoichSystem;
@@ -269,30 +295,30 @@ function buildStructure(feedKeys: readonly string[], prepared: PreparedReaction[
     });
   }
   const n = species.length;
-  const nu: Q[][] = [];
+  const nu: Rational[][] = [];
   const nuF: number[][] = [];
   const reacting: boolean[] = new Array<boolean>(n).fill(false);
   const consumed: boolean[] = new Array<boolean>(n).fill(false);
   const produced: boolean[] = new Array<boolean>(n).fill(false);
   for (const r of prepared) {
-    const row: Q[] = new Array<Q>(n).fill(Q0);
+    const row: Rational[] = new Array<Rational>(n).fill(ZERO);
     r.species.forEach((key, k) => {
       const s = index.get(key) ?? (alias.get(key) as number);
-      row[s] = qAdd(row[s] as Q, r.nu[k] as Q);
+      row[s] = rationalAdd(row[s] as Rational, r.nu[k] as Rational);
     });
     row.forEach((c, s) => {
-      if (!qIsZero(c)) reacting[s] = true;
-      if (c.n < 0n) consumed[s] = true;
-      if (c.n > 0n) produced[s] = true;
+      if (!rationalIsZero(c)) reacting[s] = true;
+      if (c.num < 0n) consumed[s] = true;
+      if (c.num > 0n) produced[s] = true;
     });
     nu.push(row);
-    nuF.push(row.map(qToNumber));
+    nuF.push(row.map(rationalToNumber));
   }
   for (const [key, s] of alias) index.set(key, s);
-  const yieldRatio: (Q | null | "inconsistent")[][] = [];
+  const yieldRatio: (Rational | null | "inconsistent")[][] = [];
   const proportional: boolean[][] = [];
   for (let p = 0; p < n; p++) {
-    const yr: (Q | null | "inconsistent")[] = [];
+    const yr: (Rational | null | "inconsistent")[] = [];
     const pr: boolean[] = [];
     for (let a = 0; a < n; a++) {
       yr.push(produced[p] && consumed[a] && a !== p ? ratioOf(nu, p, a) : null);
@@ -304,38 +330,38 @@ function buildStructure(feedKeys: readonly string[], prepared: PreparedReaction[
   const structure = { species, index, feedCount, formulas, nu, nuF, reactions: prepared, reacting, consumed, produced, yieldRatio, proportional };
   // exact feed, computed on first use by each per-call system that inherits this structure
   Object.defineProperty(structure, "feedQ", {
-    get(this: { feed: number[]; exactFeed: Q[] | null }): Q[] {
-      this.exactFeed ??= this.feed.map((v, i) => (i < feedCount ? qFromNumber(v) : Q0));
+    get(this: { feed: number[]; exactFeed: Rational[] | null }): Rational[] {
+      this.exactFeed ??= this.feed.map((v, i) => (i < feedCount ? rationalFromNumber(v) : ZERO));
       return this.exactFeed;
     },
   });
   return structure;
 }
 
-function ratioOf(nu: Q[][], p: number, a: number): Q | null | "inconsistent" {
-  let ratio: Q | null = null;
+function ratioOf(nu: Rational[][], p: number, a: number): Rational | null | "inconsistent" {
+  let ratio: Rational | null = null;
   for (const row of nu) {
-    const np = row[p] as Q;
-    const na = row[a] as Q;
-    if (np.n > 0n && na.n < 0n) {
-      const r = qDiv(np, qNeg(na));
+    const np = row[p] as Rational;
+    const na = row[a] as Rational;
+    if (np.num > 0n && na.num < 0n) {
+      const r = rationalDiv(np, rationalNeg(na));
       if (ratio === null) ratio = r;
-      else if (!qIsZero(qSub(ratio, r))) return "inconsistent";
+      else if (!rationalIsZero(rationalSub(ratio, r))) return "inconsistent";
     }
   }
   return ratio;
 }
 
-function columnsProportional(nu: Q[][], a: number, b: number): boolean {
-  let k: Q | null = null;
+function columnsProportional(nu: Rational[][], a: number, b: number): boolean {
+  let k: Rational | null = null;
   for (const row of nu) {
-    const ca = row[a] as Q;
-    const cb = row[b] as Q;
-    if (qIsZero(ca) !== qIsZero(cb)) return false;
-    if (qIsZero(cb)) continue;
-    const r = qDiv(ca, cb);
+    const ca = row[a] as Rational;
+    const cb = row[b] as Rational;
+    if (rationalIsZero(ca) !== rationalIsZero(cb)) return false;
+    if (rationalIsZero(cb)) continue;
+    const r = rationalDiv(ca, cb);
     if (k === null) k = r;
-    else if (!qIsZero(qSub(k, r))) return false;
+    else if (!rationalIsZero(rationalSub(k, r))) return false;
   }
   return true;
 }

@@ -1,6 +1,16 @@
 import { RxthermError } from "../errors.js";
 import type { Reaction } from "../reaction/types.js";
-import { type Q, qAdd, qCmp, qDiv, qIsZero, qMul, qNeg, qSign, qSub, qToNumber } from "./_rational.js";
+import {
+  type Rational,
+  rationalAdd,
+  rationalCompare,
+  rationalDiv,
+  rationalIsZero,
+  rationalMul,
+  rationalNeg,
+  rationalSub,
+  rationalToNumber,
+} from "../numeric/rational.js";
 import { buildSystem } from "./_system.js";
 import type { Flows } from "./types.js";
 
@@ -52,42 +62,42 @@ export interface LimitingReactantResult {
 export function limitingReactant(feed: Flows, reaction: Reaction | string): LimitingReactantResult {
   const fn = "limitingReactant";
   const sys = buildSystem(feed, [reaction], fn);
-  const row = sys.nu[0] as Q[];
+  const row = sys.nu[0] as Rational[];
   const reactants: number[] = [];
   row.forEach((c, s) => {
-    if (qSign(c) < 0) reactants.push(s);
+    if (c.num < 0n) reactants.push(s);
   });
   // equation order: the reaction's own species order
   const order = (sys.reactions[0]?.species ?? []).map((k) => sys.index.get(k) as number);
   reactants.sort((a, b) => order.indexOf(a) - order.indexOf(b));
-  const missing = reactants.filter((s) => qIsZero(sys.feedQ[s] as Q)).map((s) => sys.species[s] as string);
+  const missing = reactants.filter((s) => rationalIsZero(sys.feedQ[s] as Rational)).map((s) => sys.species[s] as string);
   if (missing.length > 0) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn}: reactant(s) ${missing.join(", ")} not in the feed, so the reaction cannot proceed`, {
       missing,
     });
   }
-  const runOutQ = new Map<number, Q>();
-  for (const s of reactants) runOutQ.set(s, qDiv(sys.feedQ[s] as Q, qNeg(row[s] as Q)));
-  let best: Q | null = null;
-  for (const v of runOutQ.values()) if (best === null || qCmp(v, best) < 0) best = v;
-  const maxQ = best as Q;
-  const limiting = reactants.filter((s) => qCmp(runOutQ.get(s) as Q, maxQ) === 0).map((s) => sys.species[s] as string);
+  const runOutQ = new Map<number, Rational>();
+  for (const s of reactants) runOutQ.set(s, rationalDiv(sys.feedQ[s] as Rational, rationalNeg(row[s] as Rational)));
+  let best: Rational | null = null;
+  for (const v of runOutQ.values()) if (best === null || rationalCompare(v, best) < 0) best = v;
+  const maxQ = best as Rational;
+  const limiting = reactants.filter((s) => rationalCompare(runOutQ.get(s) as Rational, maxQ) === 0).map((s) => sys.species[s] as string);
   const excess: Record<string, number> = {};
   const runOut: Record<string, number> = {};
   for (const s of reactants) {
     const key = sys.species[s] as string;
-    const required = qMul(qNeg(row[s] as Q), maxQ);
-    excess[key] = qToNumber(qDiv(qSub(sys.feedQ[s] as Q, required), required));
-    runOut[key] = qToNumber(runOutQ.get(s) as Q);
+    const required = rationalMul(rationalNeg(row[s] as Rational), maxQ);
+    excess[key] = rationalToNumber(rationalDiv(rationalSub(sys.feedQ[s] as Rational, required), required));
+    runOut[key] = rationalToNumber(runOutQ.get(s) as Rational);
   }
   const outletAtMaxExtent: Flows = {};
   sys.species.forEach((key, s) => {
-    outletAtMaxExtent[key] = qToNumber(qAdd(sys.feedQ[s] as Q, qMul(row[s] as Q, maxQ)));
+    outletAtMaxExtent[key] = rationalToNumber(rationalAdd(sys.feedQ[s] as Rational, rationalMul(row[s] as Rational, maxQ)));
   });
   return {
     species: limiting[0] as string,
     limiting,
-    maxExtent: qToNumber(maxQ),
+    maxExtent: rationalToNumber(maxQ),
     excess,
     runOut,
     outletAtMaxExtent,

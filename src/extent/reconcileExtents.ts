@@ -1,6 +1,16 @@
 import { RxthermError } from "../errors.js";
 import type { Reaction } from "../reaction/types.js";
-import { type Q, Q0, qAdd, qDiv, qFromNumber, qIsZero, qMul, qSub, qToNumber, solveExact } from "./_rational.js";
+import {
+  type Rational,
+  rationalAdd,
+  rationalDiv,
+  rationalFromNumber,
+  rationalIsZero,
+  rationalMul,
+  rationalSub,
+  rationalToNumber,
+} from "../numeric/rational.js";
+import { solveLinearSystem } from "../numeric/linearAlgebra.js";
 import { buildSystem, resolveSpecies, validateFlows } from "./_system.js";
 import type { Flows } from "./types.js";
 
@@ -96,8 +106,8 @@ export function reconcileExtents(input: ReconcileExtentsInput, options: Reconcil
   const weights = options.weights ?? {};
   const R = sys.reactions.length;
   const measuredIdx: number[] = [];
-  const measuredQ: Q[] = [];
-  const weightQ: Q[] = [];
+  const measuredQ: Rational[] = [];
+  const weightQ: Rational[] = [];
   const seen = new Set<number>();
   for (const [key, value] of Object.entries(input.measured)) {
     const s = resolveSpecies(sys, key, fn);
@@ -113,8 +123,8 @@ export function reconcileExtents(input: ReconcileExtentsInput, options: Reconcil
       throw new RxthermError("INVALID_ARGUMENT", `${fn} requires weights > 0, got ${String(w)} for ${key}`, { species: key, weight: w });
     }
     measuredIdx.push(s);
-    measuredQ.push(qFromNumber(value));
-    weightQ.push(qFromNumber(w));
+    measuredQ.push(rationalFromNumber(value));
+    weightQ.push(rationalFromNumber(w));
   }
   const informative = measuredIdx.filter((s) => sys.reacting[s]).length;
   if (informative < R) {
@@ -125,73 +135,75 @@ export function reconcileExtents(input: ReconcileExtentsInput, options: Reconcil
     );
   }
   // normal equations
-  const A: Q[][] = Array.from({ length: R }, () => new Array<Q>(R).fill(Q0));
-  const b: Q[] = new Array<Q>(R).fill(Q0);
+  const A: Rational[][] = Array.from({ length: R }, () => new Array<Rational>(R).fill(ZERO));
+  const b: Rational[] = new Array<Rational>(R).fill(ZERO);
   measuredIdx.forEach((s, k) => {
-    const w = weightQ[k] as Q;
-    const target = qSub(measuredQ[k] as Q, sys.feedQ[s] as Q);
+    const w = weightQ[k] as Rational;
+    const target = rationalSub(measuredQ[k] as Rational, sys.feedQ[s] as Rational);
     for (let i = 0; i < R; i++) {
-      const ni = (sys.nu[i] as Q[])[s] as Q;
-      if (qIsZero(ni)) continue;
-      const wni = qMul(w, ni);
-      b[i] = qAdd(b[i] as Q, qMul(wni, target));
-      const Ai = A[i] as Q[];
+      const ni = (sys.nu[i] as Rational[])[s] as Rational;
+      if (rationalIsZero(ni)) continue;
+      const wni = rationalMul(w, ni);
+      b[i] = rationalAdd(b[i] as Rational, rationalMul(wni, target));
+      const Ai = A[i] as Rational[];
       for (let j = 0; j < R; j++) {
-        const nj = (sys.nu[j] as Q[])[s] as Q;
-        if (!qIsZero(nj)) Ai[j] = qAdd(Ai[j] as Q, qMul(wni, nj));
+        const nj = (sys.nu[j] as Rational[])[s] as Rational;
+        if (!rationalIsZero(nj)) Ai[j] = rationalAdd(Ai[j] as Rational, rationalMul(wni, nj));
       }
     }
   });
-  const sol = solveExact(A, b);
-  if (sol.x === null) {
+  const sol = solveLinearSystem(A, b);
+  if (sol.kind !== "unique") {
     throw new RxthermError(
       "SINGULAR_SPECS",
       `${fn}: the measured species (${measuredIdx.map((s) => sys.species[s]).join(", ")}) cannot separate the ${R} extents (rank ${sol.rank})`,
       { rank: sol.rank, measured: measuredIdx.map((s) => sys.species[s]) },
     );
   }
-  const xi = sol.x;
-  const outQ: Q[] = sys.species.map((_, s) => {
-    let v = sys.feedQ[s] as Q;
+  const xi = sol.solution;
+  const outQ: Rational[] = sys.species.map((_, s) => {
+    let v = sys.feedQ[s] as Rational;
     for (let j = 0; j < R; j++) {
-      const c = (sys.nu[j] as Q[])[s] as Q;
-      if (!qIsZero(c)) v = qAdd(v, qMul(c, xi[j] as Q));
+      const c = (sys.nu[j] as Rational[])[s] as Rational;
+      if (!rationalIsZero(c)) v = rationalAdd(v, rationalMul(c, xi[j] as Rational));
     }
     return v;
   });
   const outlet: Flows = {};
-  sys.species.forEach((key, s) => (outlet[key] = qToNumber(outQ[s] as Q)));
+  sys.species.forEach((key, s) => (outlet[key] = rationalToNumber(outQ[s] as Rational)));
   const residuals: Flows = {};
-  let ss: Q = Q0;
+  let ss: Rational = ZERO;
   measuredIdx.forEach((s, k) => {
-    const r = qSub(measuredQ[k] as Q, outQ[s] as Q);
-    residuals[sys.species[s] as string] = qToNumber(r);
-    ss = qAdd(ss, qMul(weightQ[k] as Q, qMul(r, r)));
+    const r = rationalSub(measuredQ[k] as Rational, outQ[s] as Rational);
+    residuals[sys.species[s] as string] = rationalToNumber(r);
+    ss = rationalAdd(ss, rationalMul(weightQ[k] as Rational, rationalMul(r, r)));
   });
   // closure: measured values where measured, reconciled flows elsewhere
-  const outForClosure: Q[] = outQ.slice();
-  measuredIdx.forEach((s, k) => (outForClosure[s] = measuredQ[k] as Q));
-  const elIn = new Map<string, Q>();
-  const elOut = new Map<string, Q>();
+  const outForClosure: Rational[] = outQ.slice();
+  measuredIdx.forEach((s, k) => (outForClosure[s] = measuredQ[k] as Rational));
+  const elIn = new Map<string, Rational>();
+  const elOut = new Map<string, Rational>();
   sys.species.forEach((_, s) => {
     for (const [el, count] of Object.entries(sys.formulas[s]?.elements ?? {})) {
-      const c = qFromNumber(count);
-      elIn.set(el, qAdd(elIn.get(el) ?? Q0, qMul(c, sys.feedQ[s] as Q)));
-      elOut.set(el, qAdd(elOut.get(el) ?? Q0, qMul(c, outForClosure[s] as Q)));
+      const c = rationalFromNumber(count);
+      elIn.set(el, rationalAdd(elIn.get(el) ?? ZERO, rationalMul(c, sys.feedQ[s] as Rational)));
+      elOut.set(el, rationalAdd(elOut.get(el) ?? ZERO, rationalMul(c, outForClosure[s] as Rational)));
     }
   });
   const closurePercent: Record<string, number> = {};
   for (const [el, vin] of elIn) {
-    if (qIsZero(vin)) continue;
-    closurePercent[el] = qToNumber(qMul(qDiv(elOut.get(el) ?? Q0, vin), { n: 100n, d: 1n }));
+    if (rationalIsZero(vin)) continue;
+    closurePercent[el] = rationalToNumber(rationalMul(rationalDiv(elOut.get(el) ?? ZERO, vin), rationalFromNumber(100)));
   }
   const unmeasured = sys.species.filter((_, s) => !seen.has(s));
   return {
-    extents: xi.map(qToNumber),
+    extents: xi.map(rationalToNumber),
     outlet,
     residuals,
-    sumOfSquares: qToNumber(ss),
+    sumOfSquares: rationalToNumber(ss),
     closurePercent,
     unmeasured,
   };
 }
+
+const ZERO: Rational = rationalFromNumber(0);

@@ -1,19 +1,16 @@
 import { RxthermError } from "../errors.js";
 import type { Reaction } from "../reaction/types.js";
+import { matrixRank, nullSpace, solveLinearSystem } from "../numeric/linearAlgebra.js";
 import {
-  type Q,
-  Q0,
-  qAdd,
-  qDiv,
-  qFromNumber,
-  qMul,
-  qNeg,
-  qSign,
-  qSub,
-  qToNumber,
-  rankExact,
-  solveExact,
-} from "./_rational.js";
+  type Rational,
+  rationalAdd,
+  rationalDiv,
+  rationalFromNumber,
+  rationalMul,
+  rationalNeg,
+  rationalSub,
+  rationalToNumber,
+} from "../numeric/rational.js";
 import { type StoichSystem, buildSystem, resolveSpecies } from "./_system.js";
 import type { ExtentSpec, Flows } from "./types.js";
 
@@ -143,7 +140,7 @@ export function solveExtents(input: SolveExtentsInput, options: SolveExtentsOpti
   }
   const R = sys.reactions.length;
   if (specs.length !== R) {
-    const rank = rankExact(sys.nu);
+    const rank = matrixRank(sys.nu);
     const missing = Math.max(0, R - specs.length);
     const extra = Math.max(0, specs.length - R);
     const dep = rank < R ? `; note the ${R} reactions are dependent (only ${rank} independent)` : "";
@@ -172,7 +169,7 @@ interface SpecRow {
   i: number;
   j: number;
   value: number;
-  ratio: Q | null;
+  ratio: Rational | null;
 }
 
 function specNumber(s: Record<string, unknown>, field: string, k: number, fn: string): number {
@@ -216,10 +213,10 @@ function columnF(sys: StoichSystem, i: number): number[] {
   return out;
 }
 
-function columnQ(sys: StoichSystem, i: number): Q[] {
+function columnQ(sys: StoichSystem, i: number): Rational[] {
   const R = sys.nu.length;
-  const out = new Array<Q>(R);
-  for (let j = 0; j < R; j++) out[j] = (sys.nu[j] as Q[])[i] as Q;
+  const out = new Array<Rational>(R);
+  for (let j = 0; j < R; j++) out[j] = (sys.nu[j] as Rational[])[i] as Rational;
   return out;
 }
 
@@ -289,7 +286,7 @@ function specRow(sys: StoichSystem, spec: ExtentSpec, k: number, fn: string): Sp
     if (Y < 0) {
       throw new RxthermError("INVALID_ARGUMENT", `${fn}: spec ${k} gives a negative yield ${Y}`, { spec: k, species: pk, yield: Y });
     }
-    const ratio = (sys.yieldRatio[p] as (Q | null | "inconsistent")[])[b] ?? null;
+    const ratio = (sys.yieldRatio[p] as (Rational | null | "inconsistent")[])[b] ?? null;
     if (ratio === null || ratio === "inconsistent") {
       throw new RxthermError(
         "INVALID_ARGUMENT",
@@ -302,7 +299,7 @@ function specRow(sys: StoichSystem, spec: ExtentSpec, k: number, fn: string): Sp
     if (sys.feed[b] === 0) {
       throw new RxthermError("INVALID_ARGUMENT", `${fn}: spec ${k} takes the yield on ${bk}, which is not fed`, { spec: k, basis: bk });
     }
-    const bF = Y * (sys.feed[b] as number) * qToNumber(ratio);
+    const bF = Y * (sys.feed[b] as number) * rationalToNumber(ratio);
     return { aF: columnF(sys, p), bF, text: `yield of ${pk} on ${bk} = ${Y}`, kind: "yield", i: p, j: b, value: Y, ratio };
   }
   if ("selectivity" in s) {
@@ -326,85 +323,99 @@ function specRow(sys: StoichSystem, spec: ExtentSpec, k: number, fn: string): Sp
 }
 
 /** The exact form of a spec row. */
-function exactRow(sys: StoichSystem, r: SpecRow): { a: Q[]; b: Q } {
+function exactRow(sys: StoichSystem, r: SpecRow): { a: Rational[]; b: Rational } {
   const R = sys.reactions.length;
   switch (r.kind) {
     case "conversion":
-      return { a: columnQ(sys, r.i), b: qNeg(qMul(qFromNumber(r.value), sys.feedQ[r.i] as Q)) };
+      return { a: columnQ(sys, r.i), b: rationalNeg(rationalMul(rationalFromNumber(r.value), sys.feedQ[r.i] as Rational)) };
     case "conversionInReaction": {
-      const a = new Array<Q>(R).fill(Q0);
-      a[r.j] = qNeg((sys.nu[r.j] as Q[])[r.i] as Q);
-      return { a, b: qMul(qFromNumber(r.value), sys.feedQ[r.i] as Q) };
+      const a = new Array<Rational>(R).fill(ZERO);
+      a[r.j] = rationalNeg((sys.nu[r.j] as Rational[])[r.i] as Rational);
+      return { a, b: rationalMul(rationalFromNumber(r.value), sys.feedQ[r.i] as Rational) };
     }
     case "outlet":
-      return { a: columnQ(sys, r.i), b: qSub(qFromNumber(r.value), sys.feedQ[r.i] as Q) };
+      return { a: columnQ(sys, r.i), b: rationalSub(rationalFromNumber(r.value), sys.feedQ[r.i] as Rational) };
     case "extent": {
-      const a = new Array<Q>(R).fill(Q0);
-      a[r.j] = { n: 1n, d: 1n };
-      return { a, b: qFromNumber(r.value) };
+      const a = new Array<Rational>(R).fill(ZERO);
+      a[r.j] = ONE;
+      return { a, b: rationalFromNumber(r.value) };
     }
     case "yield":
-      return { a: columnQ(sys, r.i), b: qMul(qMul(qFromNumber(r.value), sys.feedQ[r.j] as Q), r.ratio as Q) };
+      return { a: columnQ(sys, r.i), b: rationalMul(rationalMul(rationalFromNumber(r.value), sys.feedQ[r.j] as Rational), r.ratio as Rational) };
     case "selectivity": {
-      const Sq = qFromNumber(r.value);
-      const a = new Array<Q>(R);
-      for (let j = 0; j < R; j++) a[j] = qSub((sys.nu[j] as Q[])[r.i] as Q, qMul(Sq, (sys.nu[j] as Q[])[r.j] as Q));
-      return { a, b: Q0 };
+      const Sq = rationalFromNumber(r.value);
+      const a = new Array<Rational>(R);
+      for (let j = 0; j < R; j++) a[j] = rationalSub((sys.nu[j] as Rational[])[r.i] as Rational, rationalMul(Sq, (sys.nu[j] as Rational[])[r.j] as Rational));
+      return { a, b: ZERO };
     }
   }
 }
 
 function solveExactPath(sys: StoichSystem, rows: SpecRow[], fn: string): SolveExtentsResult {
   const R = sys.reactions.length;
-  const A: Q[][] = [];
-  const b: Q[] = [];
+  const A: Rational[][] = [];
+  const b: Rational[] = [];
   for (const r of rows) {
     const e = exactRow(sys, r);
     A.push(e.a);
     b.push(e.b);
   }
-  let sol = solveExact(A, b);
-  if (sol.x === null) {
-    // redo with row tracking to name the specs involved
-    sol = solveExact(A, b, true);
-    const conflicting = sol.dependentRows.filter((d) => d.conflicting);
-    const chosen = conflicting.length > 0 ? conflicting : sol.dependentRows;
-    const involved = [...new Set(chosen.flatMap((d) => [...d.combination, d.row]))].sort((x, y) => x - y);
-    const descriptions = involved.map((i) => `spec ${i} (${(rows[i] as SpecRow).text})`);
-    const rxRank = rankExact(sys.nu);
-    const dep = rxRank < R ? `; the reactions are dependent (${rxRank} independent of ${R}), so species specs cannot separate their extents — give per-reaction specs` : "";
-    if (conflicting.length > 0) {
-      throw new RxthermError("CONFLICTING_SPECS", `${fn}: ${descriptions.join(", ")} contradict each other${dep}`, {
-        specs: involved,
-        descriptions,
-        rank: sol.rank,
-      });
-    }
-    throw new RxthermError("SINGULAR_SPECS", `${fn}: ${descriptions.join(", ")} do not fix the extents independently (rank ${sol.rank} of ${R})${dep}`, {
-      specs: involved,
-      descriptions,
-      rank: sol.rank,
-    });
-  }
-  const xi = sol.x;
+  const sol = solveLinearSystem(A, b);
+  if (sol.kind !== "unique") throwSingular(sys, rows, A, b, sol.rank, fn);
+  const xi = sol.solution;
   const S = sys.species.length;
   const feedQ = sys.feedQ;
-  const change: Q[] = new Array<Q>(S);
+  const change: Rational[] = new Array<Rational>(S);
   const outlet: number[] = new Array<number>(S);
   const extents = new Array<number>(R);
-  for (let j = 0; j < R; j++) extents[j] = qToNumber(xi[j] as Q);
+  for (let j = 0; j < R; j++) extents[j] = rationalToNumber(xi[j] as Rational);
   for (let s = 0; s < S; s++) {
-    let d: Q = Q0;
+    let d: Rational = ZERO;
     for (let j = 0; j < R; j++) {
-      const c = (sys.nu[j] as Q[])[s] as Q;
-      if (c.n !== 0n) d = qAdd(d, qMul(c, xi[j] as Q));
+      const c = (sys.nu[j] as Rational[])[s] as Rational;
+      if (c.num !== 0n) d = rationalAdd(d, rationalMul(c, xi[j] as Rational));
     }
-    const v = qAdd(feedQ[s] as Q, d);
-    if (v.n < 0n) throwNegative(sys, s, qToNumber(v), extents, fn);
+    const v = rationalAdd(feedQ[s] as Rational, d);
+    if (v.num < 0n) throwNegative(sys, s, rationalToNumber(v), extents, fn);
     change[s] = d;
-    outlet[s] = qToNumber(v);
+    outlet[s] = rationalToNumber(v);
   }
   return assemble(sys, extents, outlet, change, xi);
+}
+
+/**
+ * Name the specs behind a singular system: every y with yᵀA = 0 (a basis of the left null space)
+ * is a combination of spec rows that cancels; it is a conflict when yᵀb ≠ 0.
+ */
+function throwSingular(sys: StoichSystem, rows: SpecRow[], A: Rational[][], b: Rational[], rank: number, fn: string): never {
+  const R = sys.reactions.length;
+  const transposed: Rational[][] = [];
+  for (let j = 0; j < R; j++) transposed.push(A.map((row) => row[j] as Rational));
+  const combos = nullSpace(transposed).map((y) => {
+    let rhs = ZERO;
+    y.forEach((c, i) => {
+      if (!rationalIsZero(c)) rhs = rationalAdd(rhs, rationalMul(c, b[i] as Rational));
+    });
+    return { rows: y.flatMap((c, i) => (rationalIsZero(c) ? [] : [i])), conflicting: !rationalIsZero(rhs) };
+  });
+  const conflicting = combos.filter((c) => c.conflicting);
+  const chosen = conflicting.length > 0 ? conflicting : combos;
+  const involved = [...new Set(chosen.flatMap((c) => c.rows))].sort((x, y) => x - y);
+  const descriptions = involved.map((i) => `spec ${i} (${(rows[i] as SpecRow).text})`);
+  const rxRank = matrixRank(sys.nu);
+  const dep = rxRank < R ? `; the reactions are dependent (${rxRank} independent of ${R}), so species specs cannot separate their extents — give per-reaction specs` : "";
+  if (conflicting.length > 0) {
+    throw new RxthermError("CONFLICTING_SPECS", `${fn}: ${descriptions.join(", ")} contradict each other${dep}`, {
+      specs: involved,
+      descriptions,
+      rank,
+    });
+  }
+  throw new RxthermError("SINGULAR_SPECS", `${fn}: ${descriptions.join(", ")} do not fix the extents independently (rank ${rank} of ${R})${dep}`, {
+    specs: involved,
+    descriptions,
+    rank,
+  });
 }
 
 function throwNegative(sys: StoichSystem, s: number, value: number, extents: number[], fn: string): never {
@@ -414,11 +425,11 @@ function throwNegative(sys: StoichSystem, s: number, value: number, extents: num
   if (sys.reactions.length === 1) {
     let hi = Infinity;
     let lo = -Infinity;
-    const row = sys.nu[0] as Q[];
+    const row = sys.nu[0] as Rational[];
     row.forEach((c, i) => {
-      const f = sys.feedQ[i] as Q;
-      if (qSign(c) < 0) hi = Math.min(hi, qToNumber(qDiv(f, qNeg(c))));
-      else if (qSign(c) > 0) lo = Math.max(lo, -qToNumber(qDiv(f, c)));
+      const f = sys.feedQ[i] as Rational;
+      if (c.num < 0n) hi = Math.min(hi, rationalToNumber(rationalDiv(f, rationalNeg(c))));
+      else if (c.num > 0n) lo = Math.max(lo, -rationalToNumber(rationalDiv(f, c)));
     });
     if (lo === 0) lo = 0; // never -0
     details.feasibleExtentRange = [lo, hi];
@@ -428,13 +439,13 @@ function throwNegative(sys: StoichSystem, s: number, value: number, extents: num
 }
 
 /** a/b as a number; exact when both are rationals. */
-function ratioOf(a: Q | number, b: Q | number): number {
+function ratioOf(a: Rational | number, b: Rational | number): number {
   if (typeof a === "number" || typeof b === "number") {
-    const an = typeof a === "number" ? a : qToNumber(a);
-    const bn = typeof b === "number" ? b : qToNumber(b);
+    const an = typeof a === "number" ? a : rationalToNumber(a);
+    const bn = typeof b === "number" ? b : rationalToNumber(b);
     return an / bn;
   }
-  return qToNumber(qDiv(a, b));
+  return rationalToNumber(rationalDiv(a, b));
 }
 
 function noNegZero(v: number): number {
@@ -445,11 +456,11 @@ function noNegZero(v: number): number {
  * Build the result. `change[s]` is out − in of each species and `xi` the extents, both exact
  * (rationals) or float (numbers, with xi null and the extents in `extents`).
  */
-function assemble(sys: StoichSystem, extents: number[], outlet: number[], change: (Q | number)[], xi: Q[] | null): SolveExtentsResult {
+function assemble(sys: StoichSystem, extents: number[], outlet: number[], change: (Rational | number)[], xi: Rational[] | null): SolveExtentsResult {
   const S = sys.species.length;
   const R = sys.reactions.length;
   const exact = xi !== null;
-  const feedQ: Q[] | null = exact ? sys.feedQ : null;
+  const feedQ: Rational[] | null = exact ? sys.feedQ : null;
   const outletFlows: Flows = {};
   const changeFlows: Flows = {};
   const conversion: Record<string, number> = {};
@@ -459,15 +470,15 @@ function assemble(sys: StoichSystem, extents: number[], outlet: number[], change
     const key = sys.species[s] as string;
     outletFlows[key] = noNegZero(outlet[s] as number);
     if (!sys.reacting[s]) continue;
-    const ch = change[s] as Q | number;
-    changeFlows[key] = noNegZero(typeof ch === "number" ? ch : qToNumber(ch));
+    const ch = change[s] as Rational | number;
+    changeFlows[key] = noNegZero(typeof ch === "number" ? ch : rationalToNumber(ch));
     if (sys.consumed[s] && sys.feed[s] !== 0) {
-      const fed: Q | number = feedQ !== null ? (feedQ[s] as Q) : (sys.feed[s] as number);
+      const fed: Rational | number = feedQ !== null ? (feedQ[s] as Rational) : (sys.feed[s] as number);
       conversion[key] = noNegZero(-ratioOf(ch, fed));
       for (let j = 0; j < R; j++) {
         if (((sys.nuF[j] as number[])[s] as number) < 0) {
-          const used: Q | number = exact
-            ? qMul((sys.nu[j] as Q[])[s] as Q, xi[j] as Q)
+          const used: Rational | number = exact
+            ? rationalMul((sys.nu[j] as Rational[])[s] as Rational, xi[j] as Rational)
             : ((sys.nuF[j] as number[])[s] as number) * (extents[j] as number);
           (conversionByReaction[j] as Record<string, number>)[key] = noNegZero(-ratioOf(used, fed));
         }
@@ -477,12 +488,12 @@ function assemble(sys: StoichSystem, extents: number[], outlet: number[], change
   const yields: Record<string, Record<string, number>> = {};
   for (let p = 0; p < S; p++) {
     if (!sys.produced[p]) continue;
-    const ratios = sys.yieldRatio[p] as (Q | null | "inconsistent")[];
+    const ratios = sys.yieldRatio[p] as (Rational | null | "inconsistent")[];
     for (let a = 0; a < S; a++) {
       const r = ratios[a] ?? null;
       if (r === null || r === "inconsistent" || sys.feed[a] === 0) continue;
-      const ideal: Q | number = feedQ !== null ? qMul(feedQ[a] as Q, r) : (sys.feed[a] as number) * qToNumber(r);
-      (yields[sys.species[p] as string] ??= {})[sys.species[a] as string] = noNegZero(ratioOf(change[p] as Q | number, ideal));
+      const ideal: Rational | number = feedQ !== null ? rationalMul(feedQ[a] as Rational, r) : (sys.feed[a] as number) * rationalToNumber(r);
+      (yields[sys.species[p] as string] ??= {})[sys.species[a] as string] = noNegZero(ratioOf(change[p] as Rational | number, ideal));
     }
   }
   const selectivity: Record<string, Record<string, number>> = {};
@@ -491,9 +502,9 @@ function assemble(sys: StoichSystem, extents: number[], outlet: number[], change
       if (!sys.produced[d]) continue;
       for (let u = 0; u < S; u++) {
         if (u === d || !sys.produced[u] || (sys.proportional[d] as boolean[])[u]) continue;
-        const cu = change[u] as Q | number;
-        if ((typeof cu === "number" ? cu : qSign(cu)) <= 0) continue;
-        (selectivity[sys.species[d] as string] ??= {})[sys.species[u] as string] = noNegZero(ratioOf(change[d] as Q | number, cu));
+        const cu = change[u] as Rational | number;
+        if ((typeof cu === "number" ? cu : Number(cu.num)) <= 0) continue;
+        (selectivity[sys.species[d] as string] ??= {})[sys.species[u] as string] = noNegZero(ratioOf(change[d] as Rational | number, cu));
       }
     }
   }
@@ -549,3 +560,6 @@ function solveFloat(sys: StoichSystem, rows: SpecRow[]): SolveExtentsResult | nu
   }
   return assemble(sys, x, out, change, null);
 }
+
+const ZERO: Rational = rationalFromNumber(0);
+const ONE: Rational = rationalFromNumber(1);

@@ -11,7 +11,7 @@ import { prepareFlameInput, toFlameResult } from "../_internal/flameInput.js";
 export interface AdiabaticFlameInput {
   /** Fuel: a species key (1 mol) or species key → mol (a fuel mixture, possibly with inerts). */
   fuel: string | Flows;
-  /** `"air"` (21 % O2 and 79 % N2 by mole, the `AIR_21_79` of `combustion`), `"oxygen"` (pure O2) or species key → mol per unit of oxidizer. @defaultValue "air" */
+  /** `"air"` ({@link AIR_21_79}: 21 % O2 and 79 % N2 by mole), `"oxygen"` (pure O2) or species key → mol per unit of oxidizer. @defaultValue "air" */
   oxidizer?: "air" | "oxygen" | Flows;
   /** Equivalence ratio φ = (fuel/oxidizer) / (fuel/oxidizer)stoichiometric, > 0. Not with `excessAir`. @defaultValue 1 */
   equivalenceRatio?: number;

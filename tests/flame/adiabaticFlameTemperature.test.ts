@@ -6,6 +6,7 @@ import { DEFAULT_FLAME_PRODUCTS } from "../../src/flame/flameDefaults.js";
 import { species } from "../../src/species/species.js";
 import { RxthermError } from "../../src/errors.js";
 import { GAS_CONSTANT_J_PER_MOL_K } from "../../src/units.js";
+import { caught } from "../_helpers/caught.js";
 
 // Rows copied from NIST-JANAF Thermochemical Tables, 4th ed. (Chase 1998); see the fixture's description.
 interface Row { T: number; Cp: number | null; H_minus_H298: number | null; dfH: number | null }
@@ -14,16 +15,6 @@ const janaf = JSON.parse(readFileSync(new URL("../fixtures/flame-janaf.json", im
 };
 const row = (sp: string, T: number): Row => janaf.species[sp]!.rows.find((r) => r.T === T)!;
 const dH = (sp: string, T: number): number => row(sp, T).H_minus_H298! * 1000; // J/mol
-
-function codeOf(f: () => unknown): { code: string; details: Record<string, unknown> } {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof RxthermError) return { code: e.code, details: e.details as Record<string, unknown> };
-    throw e;
-  }
-  throw new Error("expected an RxthermError");
-}
 
 /**
  * Hand solution of H2 + (1/φ)/2 (O2 + 3.7619 N2) → H2O + excess O2 + N2 from JANAF rows: the sensible
@@ -178,24 +169,24 @@ describe("adiabaticFlameTemperature", () => {
   });
 
   it("adiabaticFlameTemperature rejects bad input with a code", () => {
-    expect(codeOf(() => adiabaticFlameTemperature({ fuel: "N2(g)" }))).toMatchObject({ code: "NOTHING_TO_BURN", details: { theoreticalO2: 0 } });
-    expect(codeOf(() => adiabaticFlameTemperature({ fuel: "CO2(g)" })).code).toBe("NOTHING_TO_BURN");
-    expect(codeOf(() => adiabaticFlameTemperature({ fuel: {} })).code).toBe("NOTHING_TO_BURN");
-    expect(codeOf(() => adiabaticFlameTemperature({ fuel: "CH4(g)", oxidizer: { "N2(g)": 1 } })).code).toBe("NO_OXIDIZER");
-    expect(codeOf(() => adiabaticFlameTemperature({ fuel: "CH4(g)", equivalenceRatio: 0 }))).toMatchObject({ code: "INVALID_ARGUMENT", details: { equivalenceRatio: 0 } });
-    expect(codeOf(() => adiabaticFlameTemperature({ fuel: "CH4(g)", equivalenceRatio: -1 })).code).toBe("INVALID_ARGUMENT");
-    expect(codeOf(() => adiabaticFlameTemperature({ fuel: "CH4(g)", excessAir: -1 })).code).toBe("INVALID_ARGUMENT");
-    expect(codeOf(() => adiabaticFlameTemperature({ fuel: "CH4(g)", excessAir: 0.1, equivalenceRatio: 0.9 })).code).toBe("INVALID_ARGUMENT");
-    expect(codeOf(() => adiabaticFlameTemperature({ fuel: "CH4(g)", T: 0 })).code).toBe("INVALID_ARGUMENT");
-    expect(codeOf(() => adiabaticFlameTemperature({ fuel: "CH4(g)", P: -1 })).code).toBe("INVALID_ARGUMENT");
-    expect(codeOf(() => adiabaticFlameTemperature({ fuel: "CH4(g)", mode: "fast" as never })).code).toBe("INVALID_ARGUMENT");
-    expect(codeOf(() => adiabaticFlameTemperature({ fuel: { "CH4(g)": -1 } })).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => adiabaticFlameTemperature({ fuel: "N2(g)" }))).toMatchObject({ code: "NOTHING_TO_BURN", details: { theoreticalO2: 0 } });
+    expect(caught(() => adiabaticFlameTemperature({ fuel: "CO2(g)" })).code).toBe("NOTHING_TO_BURN");
+    expect(caught(() => adiabaticFlameTemperature({ fuel: {} })).code).toBe("NOTHING_TO_BURN");
+    expect(caught(() => adiabaticFlameTemperature({ fuel: "CH4(g)", oxidizer: { "N2(g)": 1 } })).code).toBe("NO_OXIDIZER");
+    expect(caught(() => adiabaticFlameTemperature({ fuel: "CH4(g)", equivalenceRatio: 0 }))).toMatchObject({ code: "INVALID_ARGUMENT", details: { equivalenceRatio: 0 } });
+    expect(caught(() => adiabaticFlameTemperature({ fuel: "CH4(g)", equivalenceRatio: -1 })).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => adiabaticFlameTemperature({ fuel: "CH4(g)", excessAir: -1 })).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => adiabaticFlameTemperature({ fuel: "CH4(g)", excessAir: 0.1, equivalenceRatio: 0.9 })).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => adiabaticFlameTemperature({ fuel: "CH4(g)", T: 0 })).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => adiabaticFlameTemperature({ fuel: "CH4(g)", P: -1 })).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => adiabaticFlameTemperature({ fuel: "CH4(g)", mode: "fast" as never })).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => adiabaticFlameTemperature({ fuel: { "CH4(g)": -1 } })).code).toBe("INVALID_ARGUMENT");
     // complete combustion cannot hold fewer O than C atoms (it would deposit carbon)
-    expect(codeOf(() => adiabaticFlameTemperature({ fuel: "CH4(g)", equivalenceRatio: 5, mode: "complete" })).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => adiabaticFlameTemperature({ fuel: "CH4(g)", equivalenceRatio: 5, mode: "complete" })).code).toBe("INVALID_ARGUMENT");
   });
 
   it("adiabaticFlameTemperature throws OUT_OF_RANGE for a reactant below its data range, naming the stream", () => {
-    const e = codeOf(() => adiabaticFlameTemperature({ fuel: "C3H8(g)", fuelT: 250 }));
+    const e = caught(() => adiabaticFlameTemperature({ fuel: "C3H8(g)", fuelT: 250 }));
     expect(e).toMatchObject({ code: "OUT_OF_RANGE", details: { species: "C3H8(g)", T: 250, stream: "fuel" } });
     const r = adiabaticFlameTemperature({ fuel: "C3H8(g)", fuelT: 250 }, { extrapolate: true });
     expect(r.extrapolated).toBe(true);
@@ -203,13 +194,13 @@ describe("adiabaticFlameTemperature", () => {
 
   it("adiabaticFlameTemperature throws ELEMENTS_NOT_COVERED when the gases cannot hold the carbon (no C(gr))", () => {
     // acetylene at φ = 2.6: fewer O than C atoms, and the default products hold carbon only as CO/CO2
-    const e = codeOf(() => adiabaticFlameTemperature({ fuel: "C2H2(g)", equivalenceRatio: 2.6 }));
+    const e = caught(() => adiabaticFlameTemperature({ fuel: "C2H2(g)", equivalenceRatio: 2.6 }));
     expect(e.code).toBe("ELEMENTS_NOT_COVERED");
     expect(e.details.elementResidual).toBeGreaterThan(1e-3);
   });
 
   it("adiabaticFlameTemperature throws ELEMENTS_NOT_COVERED for a product set without N", () => {
-    const e = codeOf(() => adiabaticFlameTemperature({ fuel: "CH4(g)", products: ["CO2(g)", "H2O(g)", "O2(g)", "CO(g)", "H2(g)"] }));
+    const e = caught(() => adiabaticFlameTemperature({ fuel: "CH4(g)", products: ["CO2(g)", "H2O(g)", "O2(g)", "CO(g)", "H2(g)"] }));
     expect(e.code).toBe("ELEMENTS_NOT_COVERED");
     expect(e.details.elements).toEqual(["N"]);
   });
@@ -217,7 +208,7 @@ describe("adiabaticFlameTemperature", () => {
   it("adiabaticFlameTemperature throws NO_BRACKET above the product data range, and extrapolates only on request", () => {
     // CH4–O2 in a closed vessel: the explosion temperature passes 3500 K, the upper limit of the O(g) data
     const input = { fuel: "CH4(g)", oxidizer: "oxygen", process: "constant-volume" } as const;
-    const e = codeOf(() => adiabaticFlameTemperature(input));
+    const e = caught(() => adiabaticFlameTemperature(input));
     expect(e.code).toBe("NO_BRACKET");
     expect(e.details.rangeK).toEqual([298, 3500]);
     const r = adiabaticFlameTemperature(input, { extrapolate: true });

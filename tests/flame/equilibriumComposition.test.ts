@@ -5,6 +5,7 @@ import { equilibriumComposition } from "../../src/flame/equilibriumComposition.j
 import { species } from "../../src/species/species.js";
 import { RxthermError } from "../../src/errors.js";
 import { GAS_CONSTANT_J_PER_MOL_K } from "../../src/units.js";
+import { caught } from "../_helpers/caught.js";
 
 const R = GAS_CONSTANT_J_PER_MOL_K;
 // Rows copied from NIST-JANAF Thermochemical Tables, 4th ed. (Chase 1998); see the fixture's description.
@@ -13,16 +14,6 @@ const janaf = JSON.parse(readFileSync(new URL("../fixtures/flame-janaf.json", im
 };
 const WATER_SET = ["H2O(g)", "H2(g)", "O2(g)", "OH(g)", "H(g)", "O(g)"];
 const FLAME_SET = ["CO2(g)", "CO(g)", "H2O(g)", "H2(g)", "O2(g)", "OH(g)", "H(g)", "O(g)", "N2(g)", "NO(g)", "N(g)", "Ar(g)"];
-
-function codeOf(f: () => unknown): { code: string; details: Record<string, unknown> } {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof RxthermError) return { code: e.code, details: e.details as Record<string, unknown> };
-    throw e;
-  }
-  throw new Error("expected an RxthermError");
-}
 
 /** Total Gibbs energy of an ideal-gas mixture, J: Σ n (g°(T) + RT ln(x P/P°)). */
 function mixtureGibbs(moles: Record<string, number>, T: number, P: number): number {
@@ -142,42 +133,42 @@ describe("equilibriumComposition", () => {
   });
 
   it("equilibriumComposition rejects bad input with a code", () => {
-    expect(codeOf(() => equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET })).code).toBe("INVALID_ARGUMENT");
-    expect(codeOf(() => equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET, T: 2000, H: 0 })).code).toBe("INVALID_ARGUMENT");
-    expect(codeOf(() => equilibriumComposition({ species: WATER_SET, T: 2000 })).code).toBe("INVALID_ARGUMENT");
-    expect(codeOf(() => equilibriumComposition({ feed: { "H2O(g)": -1 }, species: WATER_SET, T: 2000 })).details).toMatchObject({ species: "H2O(g)", amount: -1 });
-    expect(codeOf(() => equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET, T: -5 })).code).toBe("INVALID_ARGUMENT");
-    expect(codeOf(() => equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET, T: 2000, P: 0 })).code).toBe("INVALID_ARGUMENT");
-    expect(codeOf(() => equilibriumComposition({ feed: { "H2O(g)": 1 }, species: [], T: 2000 })).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET })).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET, T: 2000, H: 0 })).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => equilibriumComposition({ species: WATER_SET, T: 2000 })).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => equilibriumComposition({ feed: { "H2O(g)": -1 }, species: WATER_SET, T: 2000 })).details).toMatchObject({ species: "H2O(g)", amount: -1 });
+    expect(caught(() => equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET, T: -5 })).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET, T: 2000, P: 0 })).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => equilibriumComposition({ feed: { "H2O(g)": 1 }, species: [], T: 2000 })).code).toBe("INVALID_ARGUMENT");
   });
 
   it("equilibriumComposition throws ELEMENTS_NOT_COVERED when no product holds a feed element", () => {
-    const e = codeOf(() => equilibriumComposition({ feed: { "CH4(g)": 1, "O2(g)": 2, "N2(g)": 1 }, species: ["CO2(g)", "H2O(g)", "O2(g)"], T: 2000 }));
+    const e = caught(() => equilibriumComposition({ feed: { "CH4(g)": 1, "O2(g)": 2, "N2(g)": 1 }, species: ["CO2(g)", "H2O(g)", "O2(g)"], T: 2000 }));
     expect(e.code).toBe("ELEMENTS_NOT_COVERED");
     expect(e.details.elements).toEqual(["N"]);
   });
 
   it("equilibriumComposition throws ELEMENTS_NOT_COVERED when the products cannot hold the element ratio", () => {
     // CO2 alone holds C:O = 1:2 only; the feed has 1:3
-    const e = codeOf(() => equilibriumComposition({ elements: { C: 1, O: 3 }, species: ["CO2(g)"], T: 1500 }));
+    const e = caught(() => equilibriumComposition({ elements: { C: 1, O: 3 }, species: ["CO2(g)"], T: 1500 }));
     expect(e.code).toBe("ELEMENTS_NOT_COVERED");
     expect(e.details.elementResidual).toBeGreaterThan(0.1);
   });
 
   it("equilibriumComposition throws NO_CONVERGENCE when the iteration limit is too small", () => {
-    const e = codeOf(() => equilibriumComposition({ feed: { "CH4(g)": 1, "O2(g)": 2, "N2(g)": 7.52 }, species: FLAME_SET, T: 2200 }, { maxIterations: 2 }));
+    const e = caught(() => equilibriumComposition({ feed: { "CH4(g)": 1, "O2(g)": 2, "N2(g)": 7.52 }, species: FLAME_SET, T: 2200 }, { maxIterations: 2 }));
     expect(e.code).toBe("NO_CONVERGENCE");
     expect(e.details).toMatchObject({ T: 2200 });
   });
 
   it("equilibriumComposition throws OUT_OF_RANGE beyond the data range unless asked to extrapolate", () => {
-    const e = codeOf(() => equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET, T: 4000 }));
+    const e = caught(() => equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET, T: 4000 }));
     expect(e.code).toBe("OUT_OF_RANGE");
     expect(e.details.range).toEqual([298, 3500]);
     const r = equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET, T: 4000 }, { extrapolate: true });
     expect(r.extrapolated).toBe(true);
     // a condensed product counts too: the built-in C(gr) data end at 1000 K
-    const g = codeOf(() => equilibriumComposition({ feed: { "CH4(g)": 1 }, species: ["CH4(g)", "H2(g)", "C(gr)"], T: 1100 }));
+    const g = caught(() => equilibriumComposition({ feed: { "CH4(g)": 1 }, species: ["CH4(g)", "H2(g)", "C(gr)"], T: 1100 }));
     expect(g).toMatchObject({ code: "OUT_OF_RANGE", details: { species: "C(gr)" } });
   });
 });

@@ -3,16 +3,7 @@ import { test, fc } from "@fast-check/vitest";
 import { flameTemperatureSweep } from "../../src/flame/flameTemperatureSweep.js";
 import { adiabaticFlameTemperature } from "../../src/flame/adiabaticFlameTemperature.js";
 import { RxthermError } from "../../src/errors.js";
-
-function codeOf(f: () => unknown): { code: string; details: Record<string, unknown> } {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof RxthermError) return { code: e.code, details: e.details as Record<string, unknown> };
-    throw e;
-  }
-  throw new Error("expected an RxthermError");
-}
+import { caught } from "../_helpers/caught.js";
 
 describe("flameTemperatureSweep", () => {
   it("flameTemperatureSweep gives the documented example values", () => {
@@ -78,10 +69,10 @@ describe("flameTemperatureSweep", () => {
   );
 
   it("flameTemperatureSweep rejects bad sweeps and names the failing point", () => {
-    expect(codeOf(() => flameTemperatureSweep({ fuel: "CH4(g)" }, { parameter: "equivalenceRatio", values: [] })).code).toBe("INVALID_ARGUMENT");
-    expect(codeOf(() => flameTemperatureSweep({ fuel: "CH4(g)" }, { parameter: "colour" as never, values: [1] })).code).toBe("INVALID_ARGUMENT");
-    const e = codeOf(() => flameTemperatureSweep({ fuel: "CH4(g)" }, { parameter: "equivalenceRatio", values: [1, 0.8, -2] }));
+    expect(caught(() => flameTemperatureSweep({ fuel: "CH4(g)" }, { parameter: "equivalenceRatio", values: [] })).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => flameTemperatureSweep({ fuel: "CH4(g)" }, { parameter: "colour" as never, values: [1] })).code).toBe("INVALID_ARGUMENT");
+    const e = caught(() => flameTemperatureSweep({ fuel: "CH4(g)" }, { parameter: "equivalenceRatio", values: [1, 0.8, -2] }));
     expect(e).toMatchObject({ code: "INVALID_ARGUMENT", details: { index: 2, value: -2 } });
-    expect(codeOf(() => flameTemperatureSweep({ fuel: "N2(g)" }, { parameter: "T", values: [300] })).code).toBe("NOTHING_TO_BURN");
+    expect(caught(() => flameTemperatureSweep({ fuel: "N2(g)" }, { parameter: "T", values: [300] })).code).toBe("NOTHING_TO_BURN");
   });
 });

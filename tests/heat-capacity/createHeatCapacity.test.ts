@@ -5,16 +5,7 @@ import type { CpRange } from "../../src/heat-capacity/types.js";
 import { RxthermError } from "../../src/errors.js";
 import { GAS_CONSTANT_J_PER_MOL_K } from "../../src/units.js";
 import { janafRows, nasa7Ranges, shomateRanges, shomateStandard } from "./fixtures.js";
-
-function errorOf(f: () => unknown): RxthermError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof RxthermError) return e;
-    throw e;
-  }
-  throw new Error("expected an RxthermError");
-}
+import { caught } from "../_helpers/caught.js";
 
 /** The task's acceptance criterion for integrated H against JANAF: within 0.3 % or 0.1 kJ/mol. */
 function expectH(actualJ: number, janafKJ: number): void {
@@ -328,12 +319,12 @@ describe("createHeatCapacity", () => {
 
   describe("range policy", () => {
     it("throws OUT_OF_RANGE with label, T and range outside the data", () => {
-      const e = errorOf(() => N2.cp(50));
+      const e = caught(() => N2.cp(50));
       expect(e.code).toBe("OUT_OF_RANGE");
       expect(e.details).toEqual({ label: "N2(g)", T: 50, range: [100, 6000] });
-      expect(errorOf(() => N2.deltaH(300, 7000)).details).toMatchObject({ T: 7000, range: [100, 6000] });
-      expect(errorOf(() => N2.deltaS(7000, 300)).code).toBe("OUT_OF_RANGE");
-      expect(errorOf(() => N2.absoluteEnthalpy(7000)).code).toBe("OUT_OF_RANGE");
+      expect(caught(() => N2.deltaH(300, 7000)).details).toMatchObject({ T: 7000, range: [100, 6000] });
+      expect(caught(() => N2.deltaS(7000, 300)).code).toBe("OUT_OF_RANGE");
+      expect(caught(() => N2.absoluteEnthalpy(7000)).code).toBe("OUT_OF_RANGE");
     });
 
     it("extends the nearest range's form when asked, and the detailed variants say so", () => {
@@ -351,13 +342,13 @@ describe("createHeatCapacity", () => {
 
     it("rejects T ≤ 0, NaN and infinities with INVALID_ARGUMENT even when extrapolating", () => {
       for (const bad of [0, -5, NaN, Infinity, -Infinity]) {
-        const e = errorOf(() => N2.cp(bad, { extrapolate: true }));
+        const e = caught(() => N2.cp(bad, { extrapolate: true }));
         expect(e.code).toBe("INVALID_ARGUMENT");
         expect(e.details).toMatchObject({ label: "N2(g)" });
-        expect(errorOf(() => N2.deltaH(300, bad)).code).toBe("INVALID_ARGUMENT");
-        expect(errorOf(() => N2.sensibleEnthalpy(bad, { extrapolate: true })).code).toBe("INVALID_ARGUMENT");
+        expect(caught(() => N2.deltaH(300, bad)).code).toBe("INVALID_ARGUMENT");
+        expect(caught(() => N2.sensibleEnthalpy(bad, { extrapolate: true })).code).toBe("INVALID_ARGUMENT");
       }
-      expect(errorOf(() => N2.cp("300" as unknown as number)).code).toBe("INVALID_ARGUMENT");
+      expect(caught(() => N2.cp("300" as unknown as number)).code).toBe("INVALID_ARGUMENT");
     });
 
     it("uses the lower range's form exactly at a shared boundary", () => {
@@ -370,18 +361,18 @@ describe("createHeatCapacity", () => {
   describe("batch APIs", () => {
     it("check every temperature before writing anything", () => {
       const out = new Float64Array(3).fill(7);
-      const e = errorOf(() => N2.deltaHBatch(300, Float64Array.from([400, 500, 9000]), out));
+      const e = caught(() => N2.deltaHBatch(300, Float64Array.from([400, 500, 9000]), out));
       expect(e.code).toBe("OUT_OF_RANGE");
       expect(e.details).toMatchObject({ T: 9000, index: 2 });
       expect(Array.from(out)).toEqual([7, 7, 7]);
-      expect(errorOf(() => N2.cpBatch(Float64Array.from([400, NaN]))).details).toMatchObject({ index: 1 });
+      expect(caught(() => N2.cpBatch(Float64Array.from([400, NaN]))).details).toMatchObject({ index: 1 });
     });
 
     it("reject an out array that is too short, and non-Float64Array input", () => {
-      const e = errorOf(() => N2.cpBatch(Float64Array.from([400, 500]), new Float64Array(1)));
+      const e = caught(() => N2.cpBatch(Float64Array.from([400, 500]), new Float64Array(1)));
       expect(e.code).toBe("INVALID_ARGUMENT");
       expect(e.details).toMatchObject({ length: 2, outLength: 1 });
-      expect(errorOf(() => N2.cpBatch([400] as unknown as Float64Array)).code).toBe("INVALID_ARGUMENT");
+      expect(caught(() => N2.cpBatch([400] as unknown as Float64Array)).code).toBe("INVALID_ARGUMENT");
     });
 
     it("write into the given out array and extrapolate when asked", () => {
@@ -406,13 +397,13 @@ describe("createHeatCapacity", () => {
     it("absolute H and S throw MISSING_DATA where the form carries no constant", () => {
       const c = createHeatCapacity([{ TminK: 200, TmaxK: 1000, cp: { form: "constant", cpJPerMolK: 29.1 } }], { label: "demo" });
       expect(c.hasAbsoluteConstants).toBe(false);
-      const e = errorOf(() => c.absoluteEnthalpy(300));
+      const e = caught(() => c.absoluteEnthalpy(300));
       expect(e.code).toBe("MISSING_DATA");
       expect(e.details).toEqual({ label: "demo", T: 300, rangeIndex: 0, form: "constant" });
-      expect(errorOf(() => c.absoluteEntropy(300)).code).toBe("MISSING_DATA");
+      expect(caught(() => c.absoluteEntropy(300)).code).toBe("MISSING_DATA");
       expect(N2.hasAbsoluteConstants).toBe(true);
       const noFG = createHeatCapacity([{ TminK: 100, TmaxK: 500, cp: { form: "shomate", A: 28.98641, B: 1.853978, C: -9.647459, D: 16.63537, E: 0.000117 } }]);
-      expect(errorOf(() => noFG.absoluteEntropy(300)).code).toBe("MISSING_DATA");
+      expect(caught(() => noFG.absoluteEntropy(300)).code).toBe("MISSING_DATA");
     });
 
     it("exposes range bounds and sorted frozen copies of the ranges", () => {
@@ -463,7 +454,7 @@ describe("createHeatCapacity", () => {
     ];
     for (const [name, input, code, path] of cases) {
       it(`rejects ${name}`, () => {
-        const e = errorOf(() => createHeatCapacity(input as CpRange[], { label: "X" }));
+        const e = caught(() => createHeatCapacity(input as CpRange[], { label: "X" }));
         expect(e.code).toBe(code);
         expect(e.details["path"]).toEqual(path);
         expect(e.details["issues"]).toEqual([{ path, message: expect.any(String) }]);
@@ -473,12 +464,12 @@ describe("createHeatCapacity", () => {
     }
 
     it("rejects gaps and overlaps beyond the boundary tolerance, naming both ranges", () => {
-      const gap = errorOf(() => createHeatCapacity([{ TminK: 300, TmaxK: 500, cp: ok }, { TminK: 501, TmaxK: 900, cp: ok }]));
+      const gap = caught(() => createHeatCapacity([{ TminK: 300, TmaxK: 500, cp: ok }, { TminK: 501, TmaxK: 900, cp: ok }]));
       expect(gap.code).toBe("INVALID_DATA");
       expect(gap.details).toMatchObject({ problem: "gap", boundary: [500, 501], ranges: [0, 1], path: ["ranges", 1, "TminK"] });
-      const over = errorOf(() => createHeatCapacity([{ TminK: 450, TmaxK: 900, cp: ok }, { TminK: 300, TmaxK: 500, cp: ok }]));
+      const over = caught(() => createHeatCapacity([{ TminK: 450, TmaxK: 900, cp: ok }, { TminK: 300, TmaxK: 500, cp: ok }]));
       expect(over.details).toMatchObject({ problem: "overlap", boundary: [500, 450], ranges: [1, 0] });
-      expect(errorOf(() => createHeatCapacity([{ TminK: 300, TmaxK: 500.01, cp: ok }, { TminK: 500, TmaxK: 900, cp: ok }])).code).toBe("INVALID_DATA");
+      expect(caught(() => createHeatCapacity([{ TminK: 300, TmaxK: 500.01, cp: ok }, { TminK: 500, TmaxK: 900, cp: ok }])).code).toBe("INVALID_DATA");
     });
 
     it("accepts a shared boundary within the tolerance (default 1e-6 K, adjustable)", () => {
@@ -486,7 +477,7 @@ describe("createHeatCapacity", () => {
       expect(m.deltaH(300, 900)).toBeCloseTo(30 * (200 + 4e-7) + 40 * (400 - 4e-7), 6);
       const loose = createHeatCapacity([{ TminK: 300, TmaxK: 500.01, cp: ok }, { TminK: 500, TmaxK: 900, cp: ok }], { boundaryToleranceK: 0.05 });
       expect(loose.deltaH(300, 900)).toBeCloseTo(30 * 600, 9);
-      expect(errorOf(() => createHeatCapacity([{ TminK: 300, TmaxK: 500, cp: ok }], { boundaryToleranceK: -1 })).code).toBe("INVALID_ARGUMENT");
+      expect(caught(() => createHeatCapacity([{ TminK: 300, TmaxK: 500, cp: ok }], { boundaryToleranceK: -1 })).code).toBe("INVALID_ARGUMENT");
     });
   });
 });
@@ -503,7 +494,7 @@ describe("README heat-capacity example", () => {
     expect(n2.deltaH(298.15, 1000)).toBeCloseTo(21462.0, 1);
     expect(n2.deltaS(298.15, 1000)).toBeCloseTo(36.560, 3);
     expect(n2.meanCp(300, 900)).toBeCloseTo(30.281, 3);
-    expect(errorOf(() => n2.cp(2500)).details).toEqual({ label: "N2(g)", T: 2500, range: [100, 2000] });
+    expect(caught(() => n2.cp(2500)).details).toEqual({ label: "N2(g)", T: 2500, range: [100, 2000] });
     const d = n2.deltaHDetailed(298.15, 2500, { extrapolate: true });
     expect(d.value).toBeCloseTo(74357.3, 1);
     expect(d.extrapolated).toBe(true);

@@ -6,16 +6,7 @@ import type { CpRange, Nasa7Form, ShomateForm } from "../../src/heat-capacity/ty
 import { RxthermError } from "../../src/errors.js";
 import { GAS_CONSTANT_J_PER_MOL_K as R } from "../../src/units.js";
 import { janafRows, nasa7Ranges, shomateRanges } from "./fixtures.js";
-
-function errorOf(f: () => unknown): RxthermError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof RxthermError) return e;
-    throw e;
-  }
-  throw new Error("expected an RxthermError");
-}
+import { caught } from "../_helpers/caught.js";
 
 const linspace = (a: number, b: number, n: number): number[] => Array.from({ length: n }, (_, i) => a + ((b - a) * i) / (n - 1));
 const sample = (range: CpRange, n: number): CpPoint[] => {
@@ -169,34 +160,34 @@ describe("fitCp", () => {
   describe("errors", () => {
     const pts = linspace(300, 1000, 8).map((T) => ({ T, cp: 29 + T / 100 }));
     it("too few points", () => {
-      const e = errorOf(() => fitCp(pts.slice(0, 4), "shomate"));
+      const e = caught(() => fitCp(pts.slice(0, 4), "shomate"));
       expect(e.code).toBe("INVALID_ARGUMENT");
       expect(e.details).toEqual({ form: "shomate", points: 4, coefficients: 5 });
     });
     it("too few distinct temperatures", () => {
       const same = Array.from({ length: 8 }, (_, i) => ({ T: i < 4 ? 400 : 600, cp: 30 }));
-      const e = errorOf(() => fitCp(same, "nasa7"));
+      const e = caught(() => fitCp(same, "nasa7"));
       expect(e.code).toBe("INVALID_ARGUMENT");
       expect(e.details).toEqual({ form: "nasa7", points: 8, coefficients: 5 });
     });
     it("a bad point", () => {
       for (const bad of [{ T: -1, cp: 30 }, { T: NaN, cp: 30 }, { T: 300, cp: Infinity }, null]) {
-        const e = errorOf(() => fitCp([...pts, bad as CpPoint], "constant"));
+        const e = caught(() => fitCp([...pts, bad as CpPoint], "constant"));
         expect(e.code).toBe("INVALID_ARGUMENT");
         expect(e.details).toEqual({ index: 8, point: bad });
       }
     });
     it("bad options", () => {
-      expect(errorOf(() => fitCp(pts, "polynomial", { match: { hf298: 0 } })).details).toEqual({ form: "polynomial" });
-      expect(errorOf(() => fitCp(pts, "constant", { matchAt: { TK: 300, HJPerMol: 0 } })).code).toBe("INVALID_ARGUMENT");
-      expect(errorOf(() => fitCp(pts, "shomate", { match: {}, matchAt: { TK: 300 } })).code).toBe("INVALID_ARGUMENT");
-      expect(errorOf(() => fitCp(pts, "polynomial", { degree: 4 as 3 })).details).toEqual({ degree: 4 });
-      expect(errorOf(() => fitCp(pts, "polynomial", { temperatureUnit: "C", inverseSquare: true })).code).toBe("INVALID_ARGUMENT");
-      expect(errorOf(() => fitCp(pts, "wavy" as "constant")).details).toEqual({ form: "wavy" });
-      expect(errorOf(() => fitCp(pts, "shomate", { match: { s298: NaN } })).code).toBe("INVALID_ARGUMENT");
-      expect(errorOf(() => fitCp(pts, "nasa9", { matchAt: { TK: -3 } })).details).toEqual({ TK: -3 });
-      expect(errorOf(() => fitCp(pts, "constant", { TminK: 900, TmaxK: 400 })).details).toEqual({ TminK: 900, TmaxK: 400 });
-      expect(errorOf(() => fitCp("x" as unknown as CpPoint[], "constant")).code).toBe("INVALID_ARGUMENT");
+      expect(caught(() => fitCp(pts, "polynomial", { match: { hf298: 0 } })).details).toEqual({ form: "polynomial" });
+      expect(caught(() => fitCp(pts, "constant", { matchAt: { TK: 300, HJPerMol: 0 } })).code).toBe("INVALID_ARGUMENT");
+      expect(caught(() => fitCp(pts, "shomate", { match: {}, matchAt: { TK: 300 } })).code).toBe("INVALID_ARGUMENT");
+      expect(caught(() => fitCp(pts, "polynomial", { degree: 4 as 3 })).details).toEqual({ degree: 4 });
+      expect(caught(() => fitCp(pts, "polynomial", { temperatureUnit: "C", inverseSquare: true })).code).toBe("INVALID_ARGUMENT");
+      expect(caught(() => fitCp(pts, "wavy" as "constant")).details).toEqual({ form: "wavy" });
+      expect(caught(() => fitCp(pts, "shomate", { match: { s298: NaN } })).code).toBe("INVALID_ARGUMENT");
+      expect(caught(() => fitCp(pts, "nasa9", { matchAt: { TK: -3 } })).details).toEqual({ TK: -3 });
+      expect(caught(() => fitCp(pts, "constant", { TminK: 900, TmaxK: 400 })).details).toEqual({ TminK: 900, TmaxK: 400 });
+      expect(caught(() => fitCp("x" as unknown as CpPoint[], "constant")).code).toBe("INVALID_ARGUMENT");
     });
   });
 });

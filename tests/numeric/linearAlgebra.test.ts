@@ -9,16 +9,8 @@ import {
 } from "../../src/numeric/linearAlgebra.js";
 import { rational, rationalAdd, rationalMul, rationalToString, type Rational } from "../../src/numeric/rational.js";
 import { RxthermError } from "../../src/errors.js";
+import { caught } from "../_helpers/caught.js";
 
-function errorOf(f: () => unknown): RxthermError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof RxthermError) return e;
-    throw e;
-  }
-  throw new Error("expected an RxthermError");
-}
 const str = (v: Rational[]) => v.map(rationalToString);
 function apply(a: readonly (readonly number[])[] | bigint[][], x: readonly Rational[]): Rational[] {
   return a.map((row) => row.reduce<Rational>((s, v, j) => rationalAdd(s, rationalMul(rational(BigInt(v)), x[j] as Rational)), rational(0n)));
@@ -42,10 +34,10 @@ describe("reducedRowEchelon", () => {
     expect(r.rref.map(str)).toEqual([["1", "1/2"], ["0", "0"]]);
   });
   it("rejects a ragged matrix with INVALID_ARGUMENT", () => {
-    const e = errorOf(() => reducedRowEchelon([[1, 2], [3]]));
+    const e = caught(() => reducedRowEchelon([[1, 2], [3]]));
     expect(e.code).toBe("INVALID_ARGUMENT");
     expect(e.details).toEqual({ row: 1, expected: 2, got: 1 });
-    expect(errorOf(() => reducedRowEchelon([[Number.NaN]])).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => reducedRowEchelon([[Number.NaN]])).code).toBe("INVALID_ARGUMENT");
   });
   test.prop([arbSmallMatrix])("the RREF is reduced: pivots 1, zero elsewhere in pivot columns, rank = pivots", (a) => {
     const r = reducedRowEchelon(a);
@@ -131,10 +123,10 @@ describe("solveLinearSystem", () => {
     }
   });
   it("rejects b of the wrong length", () => {
-    const e = errorOf(() => solveLinearSystem([[1, 2]], [1, 2]));
+    const e = caught(() => solveLinearSystem([[1, 2]], [1, 2]));
     expect(e.code).toBe("INVALID_ARGUMENT");
     expect(e.details).toEqual({ rows: 1, rhsLength: 2 });
-    expect(errorOf(() => solveLinearSystem([[1, 2], [1]], [1, 2])).details).toEqual({ row: 1, expected: 2, got: 1 });
+    expect(caught(() => solveLinearSystem([[1, 2], [1]], [1, 2])).details).toEqual({ row: 1, expected: 2, got: 1 });
   });
   test.prop([arbSmallMatrix, fc.array(fc.integer({ min: -5, max: 5 }), { minLength: 6, maxLength: 6 })])(
     "b = A·x₀ is always solvable and every returned solution satisfies A·x = b",

@@ -22,16 +22,7 @@ import {
   type Rational,
 } from "../../src/numeric/rational.js";
 import { RxthermError } from "../../src/errors.js";
-
-function errorOf(f: () => unknown): RxthermError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof RxthermError) return e;
-    throw e;
-  }
-  throw new Error("expected an RxthermError");
-}
+import { caught } from "../_helpers/caught.js";
 
 const arbRational = fc
   .tuple(fc.bigInt({ min: -(10n ** 30n), max: 10n ** 30n }), fc.bigInt({ min: 1n, max: 10n ** 20n }))
@@ -66,14 +57,14 @@ describe("rational", () => {
     expect(Object.isFrozen(rational(1, 2))).toBe(true);
   });
   it("rejects a zero denominator and non-integers", () => {
-    const e = errorOf(() => rational(1n, 0n));
+    const e = caught(() => rational(1n, 0n));
     expect(e.code).toBe("INVALID_ARGUMENT");
     expect(e.details).toEqual({ num: "1", den: "0" });
-    expect(errorOf(() => rational(1.5)).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => rational(1.5)).code).toBe("INVALID_ARGUMENT");
   });
   it("rationalFromInteger (documented example)", () => {
     expect(rationalFromInteger(7)).toEqual({ num: 7n, den: 1n });
-    expect(errorOf(() => rationalFromInteger(0.5)).details).toEqual({ value: 0.5 });
+    expect(caught(() => rationalFromInteger(0.5)).details).toEqual({ value: 0.5 });
   });
 });
 
@@ -92,7 +83,7 @@ describe("rationalFromDecimalString", () => {
   });
   it("rejects malformed text with INVALID_ARGUMENT and the text in details", () => {
     for (const t of ["", ".", "1/0", "abc", "1/2/3", "1e", "e5", "--1", "1/-2", "1e99999"]) {
-      const e = errorOf(() => rationalFromDecimalString(t));
+      const e = caught(() => rationalFromDecimalString(t));
       expect(e.code, t).toBe("INVALID_ARGUMENT");
       expect(e.details, t).toEqual({ text: t });
     }
@@ -113,8 +104,8 @@ describe("rationalFromNumber / rationalFrom", () => {
     expect(s(rationalFrom({ num: 4n, den: -6n }))).toBe("-2/3");
   });
   it("rejects NaN and infinities", () => {
-    expect(errorOf(() => rationalFromNumber(Number.NaN)).code).toBe("INVALID_ARGUMENT");
-    expect(errorOf(() => rationalFromNumber(Infinity)).details).toEqual({ value: Infinity });
+    expect(caught(() => rationalFromNumber(Number.NaN)).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => rationalFromNumber(Infinity)).details).toEqual({ value: Infinity });
   });
 });
 
@@ -138,7 +129,7 @@ describe("rational arithmetic", () => {
     expect(s(t)).toBe("1");
   });
   it("division by zero throws INVALID_ARGUMENT", () => {
-    const e = errorOf(() => rationalDiv(rational(3n, 2n), rational(0n)));
+    const e = caught(() => rationalDiv(rational(3n, 2n), rational(0n)));
     expect(e.code).toBe("INVALID_ARGUMENT");
     expect(e.details).toEqual({ dividend: "3/2" });
   });

@@ -2,16 +2,7 @@ import { describe, expect, it } from "vitest";
 import { test, fc } from "@fast-check/vitest";
 import { findRoot } from "../../src/numeric/roots.js";
 import { RxthermError } from "../../src/errors.js";
-
-function caught(fn: () => unknown): RxthermError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof RxthermError) return e;
-    throw e;
-  }
-  throw new Error("expected an RxthermError");
-}
+import { caught } from "../_helpers/caught.js";
 
 describe("findRoot", () => {
   it("findRoot(x² − 2, [0, 2]) gives √2 (the documented example)", () => {

@@ -4,6 +4,7 @@ import { test, fc } from "@fast-check/vitest";
 import { species } from "../../src/species/species.js";
 import { RxthermError } from "../../src/errors.js";
 import { GAS_CONSTANT_J_PER_MOL_K } from "../../src/units.js";
+import { caught } from "../_helpers/caught.js";
 
 // NIST-JANAF Thermochemical Tables, 4th ed. (Chase 1998): rows copied in tests/fixtures/janaf.json
 // (tables O-029, H-050, H-064, N-023, C-095, C-093, C-067, N-005).
@@ -14,16 +15,6 @@ const janaf = JSON.parse(readFileSync(new URL("../fixtures/janaf.json", import.m
 const KEY: Record<string, string> = {
   O2: "O2(g)", H2: "H2(g)", "H2O(g)": "H2O(g)", N2: "N2(g)", CO2: "CO2(g)", CO: "CO(g)", CH4: "CH4(g)", NO: "NO(g)",
 };
-
-function codeOf(f: () => unknown): { code: string; details: Record<string, unknown> } {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof RxthermError) return { code: e.code, details: e.details as Record<string, unknown> };
-    throw e;
-  }
-  throw new Error("expected an RxthermError");
-}
 
 describe("species", () => {
   it("species(\"CO2(g)\").enthalpy(1000) — the @example: ΔfH° + H(1000) − H(298.15)", () => {
@@ -45,32 +36,32 @@ describe("species", () => {
 
   it("species(\"H2O\") fails with AMBIGUOUS_PHASE naming H2O(g) and H2O(l) (water never picks a phase)", () => {
     for (const q of ["H2O", "water"]) {
-      const e = codeOf(() => species(q));
+      const e = caught(() => species(q));
       expect(e.code).toBe("AMBIGUOUS_PHASE");
       expect(e.details["choices"]).toEqual(["H2O(g)", "H2O(l)"]);
     }
   });
 
   it("species(\"C4H10\") fails with AMBIGUOUS_SPECIES naming both isomers", () => {
-    const e = codeOf(() => species("C4H10"));
+    const e = caught(() => species("C4H10"));
     expect(e.code).toBe("AMBIGUOUS_SPECIES");
     expect(e.details["choices"]).toEqual(["i-C4H10(g)", "n-C4H10(g)"]);
   });
 
   it("species(unknown) fails with UNKNOWN_SPECIES and close matches", () => {
-    const e = codeOf(() => species("CO3(g)"));
+    const e = caught(() => species("CO3(g)"));
     expect(e.code).toBe("UNKNOWN_SPECIES");
     expect(e.details["suggestions"]).toContain("CO2(g)");
-    expect(codeOf(() => species("metane")).details["suggestions"]).toContain("CH4(g)");
-    expect(codeOf(() => species("Zz9")).code).toBe("UNKNOWN_SPECIES");
-    expect(codeOf(() => species(42 as unknown as string)).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => species("metane")).details["suggestions"]).toContain("CH4(g)");
+    expect(caught(() => species("Zz9")).code).toBe("UNKNOWN_SPECIES");
+    expect(caught(() => species(42 as unknown as string)).code).toBe("INVALID_ARGUMENT");
   });
 
   it("species(key, undefined, { dataset }) selects the GRI-Mech 3.0 variant; JANAF-based data are the default", () => {
     expect(species("CH4(g)").dataset).toBe("nist-janaf");
     expect(species("CH4(g)", undefined, { dataset: "gri30" }).dataset).toBe("gri30");
     expect(species("C3H8(g)").dataset).toBe("gri30"); // no Shomate set for propane: GRI-Mech is the default
-    const e = codeOf(() => species("CaO(cr)", undefined, { dataset: "gri30" }));
+    const e = caught(() => species("CaO(cr)", undefined, { dataset: "gri30" }));
     expect(e.code).toBe("UNKNOWN_SPECIES");
     expect(e.details["datasets"]).toEqual(["memory"]);
   });
@@ -180,12 +171,12 @@ describe("Species: phase transitions, ranges and extrapolation", () => {
   });
 
   it("species(k).enthalpy outside the range throws OUT_OF_RANGE with species, T and range", () => {
-    const e = codeOf(() => species("CaO(cr)").enthalpy(1200));
+    const e = caught(() => species("CaO(cr)").enthalpy(1200));
     expect(e.code).toBe("OUT_OF_RANGE");
     expect(e.details).toEqual({ species: "CaO(cr)", T: 1200, range: [273.15, 400] });
-    expect(codeOf(() => species("N2(g)").cp(7000)).code).toBe("OUT_OF_RANGE");
-    expect(codeOf(() => species("N2(g)").entropy(50)).code).toBe("OUT_OF_RANGE");
-    expect(codeOf(() => species("N2(g)").gibbs(10000)).code).toBe("OUT_OF_RANGE");
+    expect(caught(() => species("N2(g)").cp(7000)).code).toBe("OUT_OF_RANGE");
+    expect(caught(() => species("N2(g)").entropy(50)).code).toBe("OUT_OF_RANGE");
+    expect(caught(() => species("N2(g)").gibbs(10000)).code).toBe("OUT_OF_RANGE");
   });
 
   it("{ extrapolate: true } extends the nearest range and evaluate() says so", () => {
@@ -194,13 +185,13 @@ describe("Species: phase transitions, ranges and extrapolation", () => {
     const ev = cao.evaluate(500, undefined, { extrapolate: true });
     expect(ev.extrapolated).toBe(true);
     expect(cao.evaluate(350).extrapolated).toBe(false);
-    expect(codeOf(() => cao.evaluate(500)).code).toBe("OUT_OF_RANGE");
+    expect(caught(() => cao.evaluate(500)).code).toBe("OUT_OF_RANGE");
   });
 
   it("bad temperatures and pressures throw INVALID_ARGUMENT", () => {
     const n2 = species("N2(g)");
-    for (const T of [NaN, -5, 0, Infinity]) expect(codeOf(() => n2.enthalpy(T, { extrapolate: true })).code).toBe("INVALID_ARGUMENT");
-    for (const P of [0, -1, NaN]) expect(codeOf(() => n2.entropy(300, P)).code).toBe("INVALID_ARGUMENT");
+    for (const T of [NaN, -5, 0, Infinity]) expect(caught(() => n2.enthalpy(T, { extrapolate: true })).code).toBe("INVALID_ARGUMENT");
+    for (const P of [0, -1, NaN]) expect(caught(() => n2.entropy(300, P)).code).toBe("INVALID_ARGUMENT");
   });
 
   it("data starting at 300 K (NASA convention) are read down to 298.15 K", () => {
