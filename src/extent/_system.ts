@@ -24,6 +24,7 @@ import {
   rationalSub,
   rationalToNumber,
 } from "../numeric/rational.js";
+import { type SafeQ, SafeOverflow, sqFromNumber, sqFromRational } from "./_safeRational.js";
 import type { Flows } from "./types.js";
 
 /** A reaction with exact net coefficients (products +, reactants −), checked for balance. */
@@ -217,6 +218,8 @@ export interface StoichStructure {
   readonly nu: Rational[][];
   /** The same as numbers. */
   readonly nuF: number[][];
+  /** The same as safe-integer rationals (the exact fast lane), or null when one outgrows it. */
+  readonly nuSafe: SafeQ[][] | null;
   readonly reactions: PreparedReaction[];
   /** True for species that appear in at least one reaction. */
   readonly reacting: boolean[];
@@ -228,6 +231,18 @@ export interface StoichStructure {
   readonly yieldRatio: (Rational | null | "inconsistent")[][];
   /** proportional[a][b]: true when two species' coefficient columns are proportional. */
   readonly proportional: boolean[][];
+  /** Every (product p, reactant a) with an agreed yield ratio, in (p, a) order. */
+  readonly yieldPairs: readonly YieldPair[];
+}
+
+/** A product, a reactant it is made from, and their agreed ratio ν_P/|ν_A|. */
+export interface YieldPair {
+  readonly p: number;
+  readonly a: number;
+  readonly ratio: Rational;
+  /** The ratio in the safe-integer lane, null when it does not fit. */
+  readonly ratioSafe: SafeQ | null;
+  readonly ratioF: number;
 }
 
 /** The species × reaction table of a problem with its feed. */
@@ -236,6 +251,11 @@ export interface StoichSystem extends StoichStructure {
   readonly feed: number[];
   /** The same, exact (computed on first use). */
   readonly feedQ: Rational[];
+  /**
+   * The same in the safe-integer lane (throws SafeOverflow when a value does not fit). The last
+   * conversion is kept on the shared structure and reused when the feed numbers are equal.
+   */
+  readonly feedSafe: readonly SafeQ[];
 }
 
 const STRUCTURE_CACHE_LIMIT = 256;
@@ -252,15 +272,11 @@ export function buildSystem(feed: Flows, reactions: readonly (Reaction | string)
   if (!Array.isArray(reactions) || reactions.length === 0) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires at least one reaction`, { reactions: Array.isArray(reactions) ? 0 : typeof reactions });
   }
-  const prepared = reactions.map((r, i) => prepareReaction(r, i, fn));
   const feedKeys = Object.keys(feed);
-  const cacheKey = `${feedKeys.join("\u0000")}\u0001${prepared.map((r) => `${r.label}\u0002${r.species.join("\u0000")}`).join("\u0001")}`;
-  let st = structureCache.get(cacheKey);
-  if (st === undefined || st.reactions.some((r, j) => r !== prepared[j])) {
-    st = buildStructure(feedKeys, prepared, fn);
-    if (structureCache.size >= STRUCTURE_CACHE_LIMIT) structureCache.clear();
-    structureCache.set(cacheKey, st);
-  }
+  const last = lastStructure.get(reactions);
+  let st: StoichStructure | undefined;
+  if (last !== undefined && sameItems(last.items, reactions) && sameItems(last.feedKeys, feedKeys)) st = last.structure;
+  else st = structureFor(feedKeys, reactions, fn);
   const feedF: number[] = new Array<number>(st.species.length).fill(0);
   for (let i = 0; i < st.feedCount; i++) feedF[i] = feed[feedKeys[i] as string] as number;
   // the per-call system inherits the memoised structure (no copying) and adds the feed
@@ -268,6 +284,32 @@ export function buildSystem(feed: Flows, reactions: readonly (Reaction | string)
   sys.feed = feedF;
   sys.exactFeed = null;
   return sys as unknown as StoichSystem;
+}
+
+/**
+ * Last structure built for a reactions array, with copies of its items and the feed keys, so a
+ * plant model that calls again with the same arrays skips the key building (the copies catch an
+ * array edited in place).
+ */
+const lastStructure = new WeakMap<readonly (Reaction | string)[], { items: (Reaction | string)[]; feedKeys: string[]; structure: StoichStructure }>();
+
+function sameItems<T>(a: readonly T[], b: readonly T[]): boolean {
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
+  return true;
+}
+
+function structureFor(feedKeys: string[], reactions: readonly (Reaction | string)[], fn: string): StoichStructure {
+  const prepared = reactions.map((r, i) => prepareReaction(r, i, fn));
+  const cacheKey = `${feedKeys.join("\u0000")}\u0001${prepared.map((r) => `${r.label}\u0002${r.species.join("\u0000")}`).join("\u0001")}`;
+  let st = structureCache.get(cacheKey);
+  if (st === undefined || st.reactions.some((r, j) => r !== prepared[j])) {
+    st = buildStructure(feedKeys, prepared, fn);
+    if (structureCache.size >= STRUCTURE_CACHE_LIMIT) structureCache.clear();
+    structureCache.set(cacheKey, st);
+  }
+  lastStructure.set(reactions, { items: reactions.slice(), feedKeys, structure: st });
+  return st;
 }
 
 function buildStructure(feedKeys: readonly string[], prepared: PreparedReaction[], fn: string): StoichStructure {
@@ -327,8 +369,27 @@ function buildStructure(feedKeys: readonly string[], prepared: PreparedReaction[
     yieldRatio.push(yr);
     proportional.push(pr);
   }
-  const structure = { species, index, feedCount, formulas, nu, nuF, reactions: prepared, reacting, consumed, produced, yieldRatio, proportional };
+  const nuSafe = safeOrNull(() => nu.map((row) => row.map(sqFromRational)));
+  const yieldPairs: YieldPair[] = [];
+  yieldRatio.forEach((ratios, p) =>
+    ratios.forEach((ratio, a) => {
+      if (ratio !== null && ratio !== "inconsistent") {
+        yieldPairs.push({ p, a, ratio, ratioSafe: safeOrNull(() => sqFromRational(ratio)), ratioF: rationalToNumber(ratio) });
+      }
+    }),
+  );
+  const structure = { species, index, feedCount, formulas, nu, nuF, nuSafe, reactions: prepared, reacting, consumed, produced, yieldRatio, proportional, yieldPairs };
   // exact feed, computed on first use by each per-call system that inherits this structure
+  let lastSafe: { values: number[]; safe: SafeQ[] } | null = null;
+  Object.defineProperty(structure, "feedSafe", {
+    get(this: { feed: number[] }): readonly SafeQ[] {
+      const feed = this.feed;
+      if (lastSafe !== null && sameItems(lastSafe.values, feed)) return lastSafe.safe;
+      const safe = feed.map(sqFromNumber);
+      lastSafe = { values: feed, safe };
+      return safe;
+    },
+  });
   Object.defineProperty(structure, "feedQ", {
     get(this: { feed: number[]; exactFeed: Rational[] | null }): Rational[] {
       this.exactFeed ??= this.feed.map((v, i) => (i < feedCount ? rationalFromNumber(v) : ZERO));
@@ -336,6 +397,15 @@ function buildStructure(feedKeys: readonly string[], prepared: PreparedReaction[
     },
   });
   return structure;
+}
+
+function safeOrNull<T>(f: () => T): T | null {
+  try {
+    return f();
+  } catch (e) {
+    if (e instanceof SafeOverflow) return null;
+    throw e;
+  }
 }
 
 function ratioOf(nu: Rational[][], p: number, a: number): Rational | null | "inconsistent" {

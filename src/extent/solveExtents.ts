@@ -6,12 +6,31 @@ import {
   rationalAdd,
   rationalDiv,
   rationalFromNumber,
+  rationalIsZero,
   rationalMul,
   rationalNeg,
   rationalSub,
   rationalToNumber,
+  rationalToString,
 } from "../numeric/rational.js";
-import { type StoichSystem, buildSystem, resolveSpecies } from "./_system.js";
+import { integerGaussJordanNumber } from "../_internal/integerElimination.js";
+import {
+  type SafeQ,
+  S0,
+  S1,
+  SafeOverflow,
+  gcdNumber,
+  sq,
+  sqAdd,
+  sqDiv,
+  sqFromNumber,
+  sqFromRational,
+  sqMul,
+  sqNeg,
+  sqSub,
+  sqToNumber,
+} from "./_safeRational.js";
+import { type StoichSystem, type YieldPair, buildSystem, resolveSpecies } from "./_system.js";
 import type { ExtentSpec, Flows } from "./types.js";
 
 /**
@@ -24,7 +43,8 @@ export interface SolveExtentsOptions {
    * `"exact"` solves the linear system in exact rationals (each input number read from its
    * shortest decimal text, so 0.1 is 1/10) and rounds only the final results; `"float"` solves
    * in float64 with partial pivoting and falls back to the exact path whenever a pivot is tiny
-   * or an outlet flow comes out negative, so errors are always decided exactly.
+   * or an outlet flow comes out negative beyond round-off (see {@link solveExtents}), so errors
+   * are always decided exactly.
    * @defaultValue "exact"
    */
   arithmetic?: "exact" | "float";
@@ -74,6 +94,12 @@ export interface SolveExtentsResult {
    * undesired product is formed (> 0).
    */
   selectivity: Record<string, Record<string, number>>;
+  /**
+   * Species whose computed outlet came out negative by no more than round-off — at most
+   * 1e-12 × (feed + Σⱼ |νⱼ ξⱼ|) of that species — and was therefore set to exactly 0 (their
+   * `change` is then −feed). Empty in the usual case. See {@link solveExtents}.
+   */
+  roundOffZeros: string[];
 }
 
 /**
@@ -98,7 +124,14 @@ export interface SolveExtentsResult {
  * suffix (`CH4` matches `CH4(g)`). With dependent reactions the extents can still be fixed by
  * per-reaction specifications (extent, per-reaction conversion); specifications on species
  * flows alone then give a singular system, and the error says the reactions are dependent.
- * No outlet flow is ever clamped: a negative one is an error.
+ * Round-off rule: inputs that are themselves results of float arithmetic (an extent computed as
+ * 0.3 × 0.7 reads exactly as 0.21000000000000002) can overdraw a species by a few parts in 10¹⁷.
+ * An outlet flow that comes out negative by at most 1e-12 × the species' throughput
+ * (feed + Σⱼ |νⱼ ξⱼ|) is such a round-off zero: it is set to exactly 0 and the species is listed
+ * in `roundOffZeros`. Anything more negative is never clamped: it is a `NEGATIVE_FLOW` error.
+ * Both arithmetics apply the same rule. The exact path runs in float64 safe integers while every
+ * numerator and denominator fits (exact there), and in BigInt rationals otherwise — the same
+ * exact values either way.
  *
  * @param input - feed (mol or mol/s), reactions, one spec per reaction
  * @param options - arithmetic (see {@link SolveExtentsOptions})
@@ -107,8 +140,8 @@ export interface SolveExtentsResult {
  *   [0, 1], a negative yield or selectivity, a spec on a species in no reaction, a conversion of a
  *   species not fed or not consumed, a bad reaction index or an unknown spec shape (details: `spec`, `species`)
  * @throws {@link RxthermError} `NEGATIVE_FLOW` for a negative feed or specified outlet, or a
- *   solution with a negative outlet (details: `species`, `outlet`, `extents`, and for one
- *   reaction `feasibleExtentRange`)
+ *   solution with an outlet negative beyond round-off (details: `species`, `outlet`, `extents`,
+ *   and for one reaction `feasibleExtentRange` [lowest, largest feasible extent])
  * @throws {@link RxthermError} `UNBALANCED_REACTION` (details: `reaction`, `residuals`)
  * @throws {@link RxthermError} `SPEC_COUNT_MISMATCH` when specs ≠ reactions (details: `needed`, `given`, `missing`, `extra`, `rank`)
  * @throws {@link RxthermError} `SINGULAR_SPECS` / `CONFLICTING_SPECS` (details: `specs` — the indices involved, `descriptions`)
@@ -153,7 +186,7 @@ export function solveExtents(input: SolveExtentsInput, options: SolveExtentsOpti
   const rows: SpecRow[] = [];
   for (let k = 0; k < specs.length; k++) rows.push(specRow(sys, specs[k] as ExtentSpec, k, fn));
   if (arithmetic === "float") {
-    const fast = solveFloat(sys, rows);
+    const fast = solveIn(FLOAT, sys, rows, fn);
     if (fast !== null) return fast;
   }
   return solveExactPath(sys, rows, fn);
@@ -163,13 +196,11 @@ export function solveExtents(input: SolveExtentsInput, options: SolveExtentsOpti
 interface SpecRow {
   aF: number[];
   bF: number;
-  text: string;
   kind: "conversion" | "conversionInReaction" | "outlet" | "extent" | "yield" | "selectivity";
-  /** Species index (of), reaction index or second species index, the spec's number, yield ratio. */
+  /** Species index (of), reaction index or second species index, and the spec's number. */
   i: number;
   j: number;
   value: number;
-  ratio: Rational | null;
 }
 
 function specNumber(s: Record<string, unknown>, field: string, k: number, fn: string): number {
@@ -213,13 +244,6 @@ function columnF(sys: StoichSystem, i: number): number[] {
   return out;
 }
 
-function columnQ(sys: StoichSystem, i: number): Rational[] {
-  const R = sys.nu.length;
-  const out = new Array<Rational>(R);
-  for (let j = 0; j < R; j++) out[j] = (sys.nu[j] as Rational[])[i] as Rational;
-  return out;
-}
-
 function specRow(sys: StoichSystem, spec: ExtentSpec, k: number, fn: string): SpecRow {
   const R = sys.reactions.length;
   if (spec === null || typeof spec !== "object") {
@@ -253,13 +277,13 @@ function specRow(sys: StoichSystem, spec: ExtentSpec, k: number, fn: string): Sp
       }
       const aF = new Array<number>(R).fill(0);
       aF[j] = -nu;
-      return { aF, bF: X * fed, text: `conversion of ${key} in reaction ${j} = ${X}`, kind: "conversionInReaction", i, j, value: X, ratio: null };
+      return { aF, bF: X * fed, kind: "conversionInReaction", i, j, value: X };
     }
     if (!sys.consumed[i]) {
       throw new RxthermError("INVALID_ARGUMENT", `${fn}: spec ${k} gives a conversion of ${key}, which no reaction consumes`, { spec: k, species: key });
     }
     // Σ ν ξ = −X n_feed
-    return { aF: columnF(sys, i), bF: -X * fed, text: `conversion of ${key} = ${X}`, kind: "conversion", i, j: -1, value: X, ratio: null };
+    return { aF: columnF(sys, i), bF: -X * fed, kind: "conversion", i, j: -1, value: X };
   }
   if ("outlet" in s) {
     const out = specNumber(s, "outlet", k, fn);
@@ -268,14 +292,14 @@ function specRow(sys: StoichSystem, spec: ExtentSpec, k: number, fn: string): Sp
     if (out < 0) {
       throw new RxthermError("NEGATIVE_FLOW", `${fn}: spec ${k} gives a negative outlet flow ${out} of ${key}`, { spec: k, species: key, outlet: out });
     }
-    return { aF: columnF(sys, i), bF: out - (sys.feed[i] as number), text: `outlet of ${key} = ${out}`, kind: "outlet", i, j: -1, value: out, ratio: null };
+    return { aF: columnF(sys, i), bF: out - (sys.feed[i] as number), kind: "outlet", i, j: -1, value: out };
   }
   if ("extent" in s) {
     const e = specNumber(s, "extent", k, fn);
     const j = specReaction(R, s.reaction, k, fn);
     const aF = new Array<number>(R).fill(0);
     aF[j] = 1;
-    return { aF, bF: e, text: `extent of reaction ${j} = ${e}`, kind: "extent", i: -1, j, value: e, ratio: null };
+    return { aF, bF: e, kind: "extent", i: -1, j, value: e };
   }
   if ("yield" in s) {
     const Y = specNumber(s, "yield", k, fn);
@@ -300,7 +324,7 @@ function specRow(sys: StoichSystem, spec: ExtentSpec, k: number, fn: string): Sp
       throw new RxthermError("INVALID_ARGUMENT", `${fn}: spec ${k} takes the yield on ${bk}, which is not fed`, { spec: k, basis: bk });
     }
     const bF = Y * (sys.feed[b] as number) * rationalToNumber(ratio);
-    return { aF: columnF(sys, p), bF, text: `yield of ${pk} on ${bk} = ${Y}`, kind: "yield", i: p, j: b, value: Y, ratio };
+    return { aF: columnF(sys, p), bF, kind: "yield", i: p, j: b, value: Y };
   }
   if ("selectivity" in s) {
     const S = specNumber(s, "selectivity", k, fn);
@@ -313,7 +337,7 @@ function specRow(sys: StoichSystem, spec: ExtentSpec, k: number, fn: string): Sp
     }
     const aF = new Array<number>(R);
     for (let j = 0; j < R; j++) aF[j] = ((sys.nuF[j] as number[])[d] as number) - S * ((sys.nuF[j] as number[])[u] as number);
-    return { aF, bF: 0, text: `selectivity of ${dk} over ${uk} = ${S}`, kind: "selectivity", i: d, j: u, value: S, ratio: null };
+    return { aF, bF: 0, kind: "selectivity", i: d, j: u, value: S };
   }
   throw new RxthermError(
     "INVALID_ARGUMENT",
@@ -322,65 +346,293 @@ function specRow(sys: StoichSystem, spec: ExtentSpec, k: number, fn: string): Sp
   );
 }
 
-/** The exact form of a spec row. */
-function exactRow(sys: StoichSystem, r: SpecRow): { a: Rational[]; b: Rational } {
+/**
+ * The arithmetic a solve runs in: exact BigInt rationals, exact safe-integer rationals (the fast
+ * lane, which throws {@link SafeOverflow} when a value outgrows it) or float64.
+ */
+interface Lane<T> {
+  readonly exact: boolean;
+  readonly zero: T;
+  readonly one: T;
+  add(a: T, b: T): T;
+  sub(a: T, b: T): T;
+  mul(a: T, b: T): T;
+  div(a: T, b: T): T;
+  neg(a: T): T;
+  isNegative(a: T): boolean;
+  isZero(a: T): boolean;
+  /** A user number: exact lanes read its shortest decimal text (0.1 is 1/10). */
+  fromNumber(x: number): T;
+  toNumber(a: T): number;
+  /** Exact text of a value, for messages. */
+  text(a: T): string;
+  /** nu[j][s] in this lane. */
+  nu(sys: StoichSystem): readonly (readonly T[])[];
+  /** Feed of each species in this lane. */
+  feed(sys: StoichSystem): readonly T[];
+  /** The yield ratio ν_P/|ν_A| in this lane (null when there is none or they disagree). */
+  yieldRatio(sys: StoichSystem, p: number, a: number): T | null;
+  /** a / b as the correctly rounded double of the exact quotient (b ≠ 0). */
+  quotient(a: T, b: T): number;
+  /** The ratio of a yield pair in this lane. */
+  pairRatio(pair: YieldPair): T;
+  /** The linear equation of a spec in this lane (not to be mutated). */
+  specRow(sys: StoichSystem, r: SpecRow): { a: T[]; b: T };
+  /** Solve A ξ = b (A and b not mutated); null when A is singular (exact lanes) or ill-conditioned (float). */
+  solve(A: T[][], b: T[]): T[] | null;
+}
+
+const BIG: Lane<Rational> = {
+  exact: true,
+  zero: rationalFromNumber(0),
+  one: rationalFromNumber(1),
+  add: rationalAdd,
+  sub: rationalSub,
+  mul: rationalMul,
+  div: rationalDiv,
+  neg: rationalNeg,
+  isNegative: (a) => a.num < 0n,
+  isZero: rationalIsZero,
+  fromNumber: rationalFromNumber,
+  toNumber: rationalToNumber,
+  text: rationalToString,
+  nu: (sys) => sys.nu,
+  feed: (sys) => sys.feedQ,
+  yieldRatio(sys, p, a) {
+    const r = (sys.yieldRatio[p] as (Rational | null | "inconsistent")[])[a] ?? null;
+    return r === "inconsistent" ? null : r;
+  },
+  quotient: (a, b) => rationalToNumber(rationalDiv(a, b)),
+  pairRatio: (pair) => pair.ratio,
+  specRow: (sys, r) => laneRow(BIG, sys, r),
+  solve(A, b) {
+    const sol = solveLinearSystem(A, b);
+    return sol.kind === "unique" ? sol.solution : null;
+  },
+};
+
+const SAFE: Lane<SafeQ> = {
+  exact: true,
+  zero: S0,
+  one: S1,
+  add: sqAdd,
+  sub: sqSub,
+  mul: sqMul,
+  div: sqDiv,
+  neg: sqNeg,
+  isNegative: (a) => a.n < 0,
+  isZero: (a) => a.n === 0,
+  fromNumber: sqFromNumber,
+  toNumber: sqToNumber,
+  text: (a) => (a.d === 1 ? String(a.n) : `${a.n}/${a.d}`),
+  nu(sys) {
+    const nu = sys.nuSafe;
+    if (nu === null) throw new SafeOverflow();
+    return nu;
+  },
+  feed: (sys) => sys.feedSafe,
+  yieldRatio(sys, p, a) {
+    const r = (sys.yieldRatio[p] as (Rational | null | "inconsistent")[])[a] ?? null;
+    return r === null || r === "inconsistent" ? null : sqFromRational(r);
+  },
+  quotient(a, b) {
+    // (a.n·b.d) / (a.d·b.n): two exact doubles, so one correctly rounded division
+    const num = a.n * b.d;
+    const den = a.d * b.n;
+    if (Number.isSafeInteger(num) && Number.isSafeInteger(den)) return num === 0 ? 0 : num / den;
+    return sqToNumber(sqDiv(a, b));
+  },
+  pairRatio(pair) {
+    if (pair.ratioSafe === null) throw new SafeOverflow();
+    return pair.ratioSafe;
+  },
+  specRow: (sys, r) => laneRow(SAFE, sys, r),
+  solve(A, b) {
+    // scale each row [a | b] to integers, then fraction-free Gauss–Jordan in float64 integers
+    const R = A.length;
+    const ints: number[][] = [];
+    for (let i = 0; i < R; i++) {
+      const row = [...(A[i] as SafeQ[]), b[i] as SafeQ];
+      let l = 1;
+      for (const v of row) if (v.d !== 1) l = checkedSafe((l / gcdNumber(l, v.d)) * v.d);
+      ints.push(row.map((v) => checkedSafe(v.n * (l / v.d))));
+    }
+    const ech = integerGaussJordanNumber(ints, R);
+    if (ech === null) throw new SafeOverflow();
+    if (ech.pivots.length < R) return null;
+    const x = new Array<SafeQ>(R);
+    for (let i = 0; i < R; i++) {
+      const row = ech.rows[i] as number[];
+      x[ech.pivots[i] as number] = sq(row[R] as number, row[ech.pivots[i] as number] as number);
+    }
+    return x;
+  },
+};
+
+const FLOAT: Lane<number> = {
+  exact: false,
+  zero: 0,
+  one: 1,
+  add: (a, b) => a + b,
+  sub: (a, b) => a - b,
+  mul: (a, b) => a * b,
+  div: (a, b) => a / b,
+  neg: (a) => -a,
+  isNegative: (a) => a < 0,
+  isZero: (a) => a === 0,
+  fromNumber: (x) => x,
+  toNumber: (a) => a,
+  text: (a) => String(a),
+  nu: (sys) => sys.nuF,
+  feed: (sys) => sys.feed,
+  yieldRatio(sys, p, a) {
+    const r = (sys.yieldRatio[p] as (Rational | null | "inconsistent")[])[a] ?? null;
+    return r === null || r === "inconsistent" ? null : rationalToNumber(r);
+  },
+  quotient: (a, b) => a / b,
+  pairRatio: (pair) => pair.ratioF,
+  specRow: (_sys, r) => ({ a: r.aF, b: r.bF }),
+  solve: solveFloatSystem,
+};
+
+function checkedSafe(v: number): number {
+  if (!Number.isSafeInteger(v)) throw new SafeOverflow();
+  return v;
+}
+
+/**
+ * Relative size below which a negative outlet flow is round-off of the inputs and is set to
+ * exactly 0: |outlet| ≤ ROUND_OFF_RELATIVE × (feed + Σⱼ |νⱼ ξⱼ|) of that species.
+ */
+const ROUND_OFF_RELATIVE = 1e-12;
+
+/** The exact form of a spec row in a lane. */
+function laneRow<T>(L: Lane<T>, sys: StoichSystem, r: SpecRow): { a: T[]; b: T } {
   const R = sys.reactions.length;
+  const nu = L.nu(sys);
+  const feed = L.feed(sys);
+  const column = (i: number): T[] => {
+    const out = new Array<T>(R);
+    for (let j = 0; j < R; j++) out[j] = (nu[j] as readonly T[])[i] as T;
+    return out;
+  };
   switch (r.kind) {
     case "conversion":
-      return { a: columnQ(sys, r.i), b: rationalNeg(rationalMul(rationalFromNumber(r.value), sys.feedQ[r.i] as Rational)) };
+      return { a: column(r.i), b: L.neg(L.mul(L.fromNumber(r.value), feed[r.i] as T)) };
     case "conversionInReaction": {
-      const a = new Array<Rational>(R).fill(ZERO);
-      a[r.j] = rationalNeg((sys.nu[r.j] as Rational[])[r.i] as Rational);
-      return { a, b: rationalMul(rationalFromNumber(r.value), sys.feedQ[r.i] as Rational) };
+      const a = new Array<T>(R).fill(L.zero);
+      a[r.j] = L.neg((nu[r.j] as readonly T[])[r.i] as T);
+      return { a, b: L.mul(L.fromNumber(r.value), feed[r.i] as T) };
     }
     case "outlet":
-      return { a: columnQ(sys, r.i), b: rationalSub(rationalFromNumber(r.value), sys.feedQ[r.i] as Rational) };
+      return { a: column(r.i), b: L.sub(L.fromNumber(r.value), feed[r.i] as T) };
     case "extent": {
-      const a = new Array<Rational>(R).fill(ZERO);
-      a[r.j] = ONE;
-      return { a, b: rationalFromNumber(r.value) };
+      const a = new Array<T>(R).fill(L.zero);
+      a[r.j] = L.one;
+      return { a, b: L.fromNumber(r.value) };
     }
     case "yield":
-      return { a: columnQ(sys, r.i), b: rationalMul(rationalMul(rationalFromNumber(r.value), sys.feedQ[r.j] as Rational), r.ratio as Rational) };
+      return { a: column(r.i), b: L.mul(L.mul(L.fromNumber(r.value), feed[r.j] as T), L.yieldRatio(sys, r.i, r.j) as T) };
     case "selectivity": {
-      const Sq = rationalFromNumber(r.value);
-      const a = new Array<Rational>(R);
-      for (let j = 0; j < R; j++) a[j] = rationalSub((sys.nu[j] as Rational[])[r.i] as Rational, rationalMul(Sq, (sys.nu[j] as Rational[])[r.j] as Rational));
-      return { a, b: ZERO };
+      const Sq = L.fromNumber(r.value);
+      const a = new Array<T>(R);
+      for (let j = 0; j < R; j++) a[j] = L.sub((nu[j] as readonly T[])[r.i] as T, L.mul(Sq, (nu[j] as readonly T[])[r.j] as T));
+      return { a, b: L.zero };
     }
   }
 }
 
+/** Exact path: the safe-integer lane, redone with BigInt rationals if a value outgrows it. */
 function solveExactPath(sys: StoichSystem, rows: SpecRow[], fn: string): SolveExtentsResult {
+  if (sys.nuSafe !== null) {
+    try {
+      const r = solveIn(SAFE, sys, rows, fn);
+      if (r !== null) return r;
+    } catch (e) {
+      if (!(e instanceof SafeOverflow)) throw e;
+    }
+  }
+  return solveIn(BIG, sys, rows, fn) as SolveExtentsResult;
+}
+
+/**
+ * Solve and assemble in one lane. Exact lanes throw the singular/conflicting/negative errors
+ * (a singular system is diagnosed in BigInt); the float lane returns null to defer to the exact
+ * path (tiny pivot, or an outlet negative beyond round-off).
+ */
+function solveIn<T>(L: Lane<T>, sys: StoichSystem, rows: SpecRow[], fn: string): SolveExtentsResult | null {
   const R = sys.reactions.length;
-  const A: Rational[][] = [];
-  const b: Rational[] = [];
+  const A: T[][] = [];
+  const b: T[] = [];
   for (const r of rows) {
-    const e = exactRow(sys, r);
+    const e = L.specRow(sys, r);
     A.push(e.a);
     b.push(e.b);
   }
-  const sol = solveLinearSystem(A, b);
-  if (sol.kind !== "unique") throwSingular(sys, rows, A, b, sol.rank, fn);
-  const xi = sol.solution;
-  const S = sys.species.length;
-  const feedQ = sys.feedQ;
-  const change: Rational[] = new Array<Rational>(S);
-  const outlet: number[] = new Array<number>(S);
-  const extents = new Array<number>(R);
-  for (let j = 0; j < R; j++) extents[j] = rationalToNumber(xi[j] as Rational);
-  for (let s = 0; s < S; s++) {
-    let d: Rational = ZERO;
-    for (let j = 0; j < R; j++) {
-      const c = (sys.nu[j] as Rational[])[s] as Rational;
-      if (c.num !== 0n) d = rationalAdd(d, rationalMul(c, xi[j] as Rational));
+  const xi = L.solve(A, b);
+  if (xi === null) {
+    if (!L.exact) return null;
+    const Ab: Rational[][] = [];
+    const bb: Rational[] = [];
+    for (const r of rows) {
+      const e = laneRow(BIG, sys, r);
+      Ab.push(e.a);
+      bb.push(e.b);
     }
-    const v = rationalAdd(feedQ[s] as Rational, d);
-    if (v.num < 0n) throwNegative(sys, s, rationalToNumber(v), extents, fn);
-    change[s] = d;
-    outlet[s] = rationalToNumber(v);
+    throwSingular(sys, rows, Ab, bb, matrixRank(Ab), fn);
   }
-  return assemble(sys, extents, outlet, change, xi);
+  const S = sys.species.length;
+  const nu = L.nu(sys);
+  const feed = L.feed(sys);
+  const extents = new Array<number>(R);
+  for (let j = 0; j < R; j++) extents[j] = L.toNumber(xi[j] as T);
+  const change = new Array<T>(S);
+  const outlet = new Array<number>(S);
+  const roundOffZeros: string[] = [];
+  for (let s = 0; s < S; s++) {
+    let d = L.zero;
+    for (let j = 0; j < R; j++) {
+      const c = (nu[j] as readonly T[])[s] as T;
+      if (!L.isZero(c)) d = L.add(d, L.mul(c, xi[j] as T));
+    }
+    const v = L.add(feed[s] as T, d);
+    if (L.isNegative(v)) {
+      // round-off rule: a negative outlet within ROUND_OFF_RELATIVE of the species' throughput is 0
+      let scale = sys.feed[s] as number;
+      for (let j = 0; j < R; j++) scale += Math.abs(((sys.nuF[j] as number[])[s] as number) * (extents[j] as number));
+      const value = L.toNumber(v);
+      if (-value > ROUND_OFF_RELATIVE * scale) {
+        if (!L.exact) return null; // decide real negatives exactly
+        throwNegative(sys, s, value, L.text(v), extents, fn);
+      }
+      roundOffZeros.push(sys.species[s] as string);
+      change[s] = L.neg(feed[s] as T);
+      outlet[s] = 0;
+      continue;
+    }
+    change[s] = d;
+    outlet[s] = L.toNumber(v);
+  }
+  return assemble(L, sys, xi, extents, outlet, change, roundOffZeros);
+}
+
+/** Readable text of a spec row, for messages (built only when needed: number text is slow). */
+function describeRow(sys: StoichSystem, r: SpecRow): string {
+  const sp = (i: number): string => sys.species[i] as string;
+  switch (r.kind) {
+    case "conversion":
+      return `conversion of ${sp(r.i)} = ${r.value}`;
+    case "conversionInReaction":
+      return `conversion of ${sp(r.i)} in reaction ${r.j} = ${r.value}`;
+    case "outlet":
+      return `outlet of ${sp(r.i)} = ${r.value}`;
+    case "extent":
+      return `extent of reaction ${r.j} = ${r.value}`;
+    case "yield":
+      return `yield of ${sp(r.i)} on ${sp(r.j)} = ${r.value}`;
+    case "selectivity":
+      return `selectivity of ${sp(r.i)} over ${sp(r.j)} = ${r.value}`;
+  }
 }
 
 /**
@@ -392,7 +644,7 @@ function throwSingular(sys: StoichSystem, rows: SpecRow[], A: Rational[][], b: R
   const transposed: Rational[][] = [];
   for (let j = 0; j < R; j++) transposed.push(A.map((row) => row[j] as Rational));
   const combos = nullSpace(transposed).map((y) => {
-    let rhs = ZERO;
+    let rhs: Rational = BIG.zero;
     y.forEach((c, i) => {
       if (!rationalIsZero(c)) rhs = rationalAdd(rhs, rationalMul(c, b[i] as Rational));
     });
@@ -401,7 +653,7 @@ function throwSingular(sys: StoichSystem, rows: SpecRow[], A: Rational[][], b: R
   const conflicting = combos.filter((c) => c.conflicting);
   const chosen = conflicting.length > 0 ? conflicting : combos;
   const involved = [...new Set(chosen.flatMap((c) => c.rows))].sort((x, y) => x - y);
-  const descriptions = involved.map((i) => `spec ${i} (${(rows[i] as SpecRow).text})`);
+  const descriptions = involved.map((i) => `spec ${i} (${describeRow(sys, rows[i] as SpecRow)})`);
   const rxRank = matrixRank(sys.nu);
   const dep = rxRank < R ? `; the reactions are dependent (${rxRank} independent of ${R}), so species specs cannot separate their extents — give per-reaction specs` : "";
   if (conflicting.length > 0) {
@@ -418,7 +670,7 @@ function throwSingular(sys: StoichSystem, rows: SpecRow[], A: Rational[][], b: R
   });
 }
 
-function throwNegative(sys: StoichSystem, s: number, value: number, extents: number[], fn: string): never {
+function throwNegative(sys: StoichSystem, s: number, value: number, exactText: string, extents: number[], fn: string): never {
   const key = sys.species[s] as string;
   const details: Record<string, unknown> = { species: key, outlet: value, extents };
   let hint = "";
@@ -433,34 +685,36 @@ function throwNegative(sys: StoichSystem, s: number, value: number, extents: num
     });
     if (lo === 0) lo = 0; // never -0
     details.feasibleExtentRange = [lo, hi];
-    hint = `; feasible extents lie in [${lo}, ${hi}]`;
+    hint = `; feasible extents lie in [${lo}, ${hi}], so the largest is ${hi}`;
   }
-  throw new RxthermError("NEGATIVE_FLOW", `${fn}: the specs give a negative outlet flow ${value} of ${key} (extents ${extents.join(", ")})${hint}`, details);
-}
-
-/** a/b as a number; exact when both are rationals. */
-function ratioOf(a: Rational | number, b: Rational | number): number {
-  if (typeof a === "number" || typeof b === "number") {
-    const an = typeof a === "number" ? a : rationalToNumber(a);
-    const bn = typeof b === "number" ? b : rationalToNumber(b);
-    return an / bn;
-  }
-  return rationalToNumber(rationalDiv(a, b));
+  // a value too small for a double is shown as its exact fraction, never as "0" or "-0"
+  const shown = value !== 0 ? String(value) : exactText;
+  throw new RxthermError(
+    "NEGATIVE_FLOW",
+    `${fn}: the specs give a negative outlet flow ${shown} of ${key}, beyond round-off (${ROUND_OFF_RELATIVE} × its throughput) (extents ${extents.join(", ")})${hint}`,
+    details,
+  );
 }
 
 function noNegZero(v: number): number {
   return v === 0 ? 0 : v;
 }
 
-/**
- * Build the result. `change[s]` is out − in of each species and `xi` the extents, both exact
- * (rationals) or float (numbers, with xi null and the extents in `extents`).
- */
-function assemble(sys: StoichSystem, extents: number[], outlet: number[], change: (Rational | number)[], xi: Rational[] | null): SolveExtentsResult {
+/** Build the result from the lane's exact (or float) extents and changes out − in. */
+function assemble<T>(
+  L: Lane<T>,
+  sys: StoichSystem,
+  xi: T[],
+  extents: number[],
+  outlet: number[],
+  change: T[],
+  roundOffZeros: string[],
+): SolveExtentsResult {
   const S = sys.species.length;
   const R = sys.reactions.length;
-  const exact = xi !== null;
-  const feedQ: Rational[] | null = exact ? sys.feedQ : null;
+  const nu = L.nu(sys);
+  const feed = L.feed(sys);
+  const ratio = (a: T, b: T): number => L.quotient(a, b);
   const outletFlows: Flows = {};
   const changeFlows: Flows = {};
   const conversion: Record<string, number> = {};
@@ -470,31 +724,22 @@ function assemble(sys: StoichSystem, extents: number[], outlet: number[], change
     const key = sys.species[s] as string;
     outletFlows[key] = noNegZero(outlet[s] as number);
     if (!sys.reacting[s]) continue;
-    const ch = change[s] as Rational | number;
-    changeFlows[key] = noNegZero(typeof ch === "number" ? ch : rationalToNumber(ch));
+    const ch = change[s] as T;
+    changeFlows[key] = noNegZero(L.toNumber(ch));
     if (sys.consumed[s] && sys.feed[s] !== 0) {
-      const fed: Rational | number = feedQ !== null ? (feedQ[s] as Rational) : (sys.feed[s] as number);
-      conversion[key] = noNegZero(-ratioOf(ch, fed));
+      const fed = feed[s] as T;
+      conversion[key] = noNegZero(-ratio(ch, fed));
       for (let j = 0; j < R; j++) {
-        if (((sys.nuF[j] as number[])[s] as number) < 0) {
-          const used: Rational | number = exact
-            ? rationalMul((sys.nu[j] as Rational[])[s] as Rational, xi[j] as Rational)
-            : ((sys.nuF[j] as number[])[s] as number) * (extents[j] as number);
-          (conversionByReaction[j] as Record<string, number>)[key] = noNegZero(-ratioOf(used, fed));
-        }
+        const c = (nu[j] as readonly T[])[s] as T;
+        if (L.isNegative(c)) (conversionByReaction[j] as Record<string, number>)[key] = noNegZero(-ratio(L.mul(c, xi[j] as T), fed));
       }
     }
   }
   const yields: Record<string, Record<string, number>> = {};
-  for (let p = 0; p < S; p++) {
-    if (!sys.produced[p]) continue;
-    const ratios = sys.yieldRatio[p] as (Rational | null | "inconsistent")[];
-    for (let a = 0; a < S; a++) {
-      const r = ratios[a] ?? null;
-      if (r === null || r === "inconsistent" || sys.feed[a] === 0) continue;
-      const ideal: Rational | number = feedQ !== null ? rationalMul(feedQ[a] as Rational, r) : (sys.feed[a] as number) * rationalToNumber(r);
-      (yields[sys.species[p] as string] ??= {})[sys.species[a] as string] = noNegZero(ratioOf(change[p] as Rational | number, ideal));
-    }
+  for (const yp of sys.yieldPairs) {
+    if (sys.feed[yp.a] === 0) continue;
+    const ideal = L.mul(feed[yp.a] as T, L.pairRatio(yp));
+    (yields[sys.species[yp.p] as string] ??= {})[sys.species[yp.a] as string] = noNegZero(ratio(change[yp.p] as T, ideal));
   }
   const selectivity: Record<string, Record<string, number>> = {};
   if (R > 1) {
@@ -502,25 +747,25 @@ function assemble(sys: StoichSystem, extents: number[], outlet: number[], change
       if (!sys.produced[d]) continue;
       for (let u = 0; u < S; u++) {
         if (u === d || !sys.produced[u] || (sys.proportional[d] as boolean[])[u]) continue;
-        const cu = change[u] as Rational | number;
-        if ((typeof cu === "number" ? cu : Number(cu.num)) <= 0) continue;
-        (selectivity[sys.species[d] as string] ??= {})[sys.species[u] as string] = noNegZero(ratioOf(change[d] as Rational | number, cu));
+        const cu = change[u] as T;
+        if (L.isNegative(cu) || L.isZero(cu)) continue;
+        (selectivity[sys.species[d] as string] ??= {})[sys.species[u] as string] = noNegZero(ratio(change[d] as T, cu));
       }
     }
   }
   const ext = new Array<number>(R);
   for (let j = 0; j < R; j++) ext[j] = noNegZero(extents[j] as number);
-  return { extents: ext, outlet: outletFlows, change: changeFlows, conversion, conversionByReaction, yield: yields, selectivity };
+  return { extents: ext, outlet: outletFlows, change: changeFlows, conversion, conversionByReaction, yield: yields, selectivity, roundOffZeros };
 }
 
-/** Float64 Gauss elimination with partial pivoting; null to defer to the exact path. */
-function solveFloat(sys: StoichSystem, rows: SpecRow[]): SolveExtentsResult | null {
-  const R = rows.length;
+/** Float64 Gauss elimination with partial pivoting; null when a pivot is tiny (defer to exact). */
+function solveFloatSystem(A: number[][], b: number[]): number[] | null {
+  const R = A.length;
   const M: number[][] = [];
   let scale = 0;
-  for (const r of rows) {
-    const row = r.aF.slice();
-    row.push(r.bF);
+  for (let i = 0; i < R; i++) {
+    const row = (A[i] as number[]).slice();
+    row.push(b[i] as number);
     for (const v of row) scale = Math.max(scale, Math.abs(v));
     M.push(row);
   }
@@ -547,19 +792,5 @@ function solveFloat(sys: StoichSystem, rows: SpecRow[]): SolveExtentsResult | nu
     for (let k = i + 1; k < R; k++) v -= (ri[k] as number) * (x[k] as number);
     x[i] = v / (ri[i] as number);
   }
-  const S = sys.species.length;
-  const out: number[] = new Array<number>(S);
-  const change: number[] = new Array<number>(S);
-  for (let s = 0; s < S; s++) {
-    let d = 0;
-    for (let j = 0; j < R; j++) d += ((sys.nuF[j] as number[])[s] as number) * (x[j] as number);
-    const v = (sys.feed[s] as number) + d;
-    if (v < 0) return null; // decide negatives exactly
-    out[s] = v;
-    change[s] = d;
-  }
-  return assemble(sys, x, out, change, null);
+  return x;
 }
-
-const ZERO: Rational = rationalFromNumber(0);
-const ONE: Rational = rationalFromNumber(1);

@@ -4,6 +4,8 @@ import { RxthermError } from "../../src/errors.js";
 import { parseFormula } from "../../src/formula/parseFormula.js";
 import { solveExtents } from "../../src/extent/solveExtents.js";
 import type { ExtentSpec, Flows } from "../../src/extent/types.js";
+import { rationalAdd, rationalFrom, rationalFromNumber, rationalMul, rationalSub, rationalToNumber } from "../../src/numeric/rational.js";
+import { parseReaction } from "../../src/reaction/parseReaction.js";
 
 function caught(f: () => unknown): RxthermError {
   try {
@@ -239,5 +241,76 @@ describe("solveExtents", () => {
     }
     const fl = solveExtents(input, { arithmetic: "float" });
     exact.extents.forEach((x, j) => expect(Math.abs((fl.extents[j] as number) - x)).toBeLessThanOrEqual(1e-12 * Math.max(1, Math.abs(x))));
+  });
+});
+
+describe("solveExtents round-off rule", () => {
+  // invented methane-burner feed; stoichiometry CH4 + 2 O2 -> CO2 + 2 H2O: common practice
+  const rx = ["CH4 + 2 O2 -> CO2 + 2 H2O"];
+  const arithmetics = ["exact", "float"] as const;
+
+  it.each(arithmetics)("a float-computed extent that overdraws the feed by round-off gives exactly 0 (%s)", (arithmetic) => {
+    const extent = 0.1 * 3; // 0.30000000000000004 in float64: exactly 4e-17 more than the 0.3 fed
+    expect(String(extent)).toBe("0.30000000000000004");
+    const r = solveExtents({ feed: { CH4: 0.3, O2: 1 }, reactions: rx, specs: [{ reaction: 0, extent }] }, { arithmetic });
+    expect(Object.is(r.outlet.CH4, 0)).toBe(true);
+    expect(r.roundOffZeros).toEqual(["CH4"]);
+    expect(r.change.CH4).toBe(-0.3); // out − in stays consistent with the zeroed outlet
+    expect(r.conversion.CH4).toBe(1);
+    expect(r.extents).toEqual([0.30000000000000004]);
+  });
+
+  it.each(arithmetics)("the tolerance is 1e-12 of the species' throughput: just inside → 0, just outside → NEGATIVE_FLOW (%s)", (arithmetic) => {
+    // CH4 fed 1, drawn 1 + δ: throughput 1 + (1 + δ) ≈ 2, so the limit is ≈ 2e-12
+    const inside = solveExtents({ feed: { CH4: 1, O2: 3 }, reactions: rx, specs: [{ reaction: 0, extent: 1.000000000001 }] }, { arithmetic });
+    expect(inside.outlet.CH4).toBe(0);
+    expect(inside.roundOffZeros).toEqual(["CH4"]);
+    const e = caught(() => solveExtents({ feed: { CH4: 1, O2: 3 }, reactions: rx, specs: [{ reaction: 0, extent: 1.000000000003 }] }, { arithmetic }));
+    expect(e.code).toBe("NEGATIVE_FLOW");
+    expect(e.details).toMatchObject({ species: "CH4", outlet: -3e-12, feasibleExtentRange: [0, 1] });
+  });
+
+  it.each(arithmetics)("a clearly negative outlet is NEGATIVE_FLOW naming the species, its value and the largest feasible extent (%s)", (arithmetic) => {
+    const e = caught(() => solveExtents({ feed: { CH4: 0.21, O2: 1 }, reactions: rx, specs: [{ reaction: 0, extent: 0.2100001 }] }, { arithmetic }));
+    expect(e.code).toBe("NEGATIVE_FLOW");
+    expect(e.details).toMatchObject({ species: "CH4", outlet: -1e-7, extents: [0.2100001], feasibleExtentRange: [0, 0.21] });
+    expect(e.message).toContain("negative outlet flow -1e-7 of CH4");
+    expect(e.message).toContain("the largest is 0.21");
+    expect(e.message).not.toMatch(/flow -?0 of/);
+  });
+
+  it("no result lists round-off zeros when nothing was zeroed", () => {
+    const r = solveExtents({ feed: { CH4: 1, O2: 2.4 }, reactions: rx, specs: [{ of: "CH4", conversion: 1 }] });
+    expect(r.outlet.CH4).toBe(0); // an exact zero is not a round-off zero
+    expect(r.roundOffZeros).toEqual([]);
+  });
+});
+
+describe("solveExtents exact arithmetic", () => {
+  // Independent check: each outlet is the correctly rounded double of feed + ν·ξ computed here in
+  // BigInt rationals. Feeds with 1–3 decimals keep the library in its safe-integer lane; feeds with
+  // 17 significant digits force its BigInt lane. Both must give the same doubles.
+  const feedArb = fc.oneof(
+    fc.integer({ min: 70_000, max: 200_000 }).map((n) => n / 1000),
+    fc.double({ min: 70, max: 200, noNaN: true }).filter((x) => String(x).replace(/[.-]/g, "").length >= 17),
+  );
+  test.prop([
+    fc.subarray([0, 1, 2, 3, 4, 5], { minLength: 1 }),
+    fc.array(fc.integer({ min: 0, max: 64 }), { minLength: 6, maxLength: 6 }),
+    fc.array(feedArb, { minLength: POOL_SPECIES.length, maxLength: POOL_SPECIES.length }),
+  ])("solveExtents outlets are the correctly rounded exact values in either integer lane", (idx, eighths, feed) => {
+    const f: Flows = Object.fromEntries(POOL_SPECIES.map((s, i) => [s, feed[i] as number]));
+    const reactions = idx.map((i) => POOL[i]!.eq);
+    const xi = idx.map((_, j) => rationalFrom(`${eighths[j] as number}/8`));
+    const r = solveExtents({ feed: f, reactions, specs: idx.map((_, j) => ({ reaction: j, extent: (eighths[j] as number) / 8 })) });
+    for (const sp of POOL_SPECIES) {
+      let v = rationalFromNumber(f[sp] as number);
+      idx.forEach((i, j) => {
+        const p = parseReaction(POOL[i]!.eq);
+        for (const t of p.reactants) if (t.species === sp) v = rationalSub(v, rationalMul(rationalFrom(t.exact), xi[j]!));
+        for (const t of p.products) if (t.species === sp) v = rationalAdd(v, rationalMul(rationalFrom(t.exact), xi[j]!));
+      });
+      expect(r.outlet[sp]).toBe(rationalToNumber(v));
+    }
   });
 });
