@@ -36,6 +36,17 @@ export const S1: SafeQ = { n: 1, d: 1 };
 export function gcdNumber(a: number, b: number): number {
   if (a < 0) a = -a;
   if (b < 0) b = -b;
+  if (a <= 0x7fffffff && b <= 0x7fffffff) {
+    // int32 remainders are much cheaper than float64 ones
+    let x = a | 0;
+    let y = b | 0;
+    while (y !== 0) {
+      const t = x % y;
+      x = y;
+      y = t;
+    }
+    return x;
+  }
   while (b !== 0) {
     const t = a % b;
     a = b;
