@@ -3,6 +3,7 @@ import type { Formula } from "../formula/types.js";
 import { formulaOf, molarMassOf, validateFlows } from "./_system.js";
 import type { Flows } from "./types.js";
 import { waterSaturationPressure } from "./waterSaturationPressure.js";
+import { compensatedSum } from "../_internal/compensatedSum.js";
 
 /**
  * Dry air by mole fraction, the default oxidizer of {@link combustion}: O₂ 0.209476 and Ar
@@ -235,7 +236,7 @@ export function combustion(input: CombustionInput): CombustionResult {
   for (const [k, v] of Object.entries(airFlows)) if (k !== "O2(g)") add(k, v);
   const leftover = o2Supplied - o2Used;
   flue["O2(g)"] = Math.abs(leftover) <= 1e-12 * o2Supplied ? 0 : leftover;
-  const flueGasTotal = sum(Object.values(flue));
+  const flueGasTotal = compensatedSum(Object.values(flue));
   const dryFlueGasTotal = flueGasTotal - (flue["H2O(g)"] ?? 0);
   const wet: Record<string, number> = {};
   const dry: Record<string, number> = {};
@@ -244,7 +245,7 @@ export function combustion(input: CombustionInput): CombustionResult {
     if (k !== "H2O(g)") dry[k] = dryFlueGasTotal > 0 ? v / dryFlueGasTotal : 0;
   }
   const airMassKg = massKg(airFlows, fn);
-  const dryOxidizerMolarMass = sum(Object.entries(oxidizer).map(([k, y]) => y * molarMassOf(k, fn, "oxidizer")));
+  const dryOxidizerMolarMass = compensatedSum(Object.entries(oxidizer).map(([k, y]) => y * molarMassOf(k, fn, "oxidizer")));
   return {
     theoreticalO2,
     theoreticalAir,
@@ -425,7 +426,7 @@ function oxidizerComposition(input: CombustionInput, fn: string): Flows {
       }
       comp[canon] = (comp[canon] ?? 0) + v;
     }
-    const total = sum(Object.values(comp));
+    const total = compensatedSum(Object.values(comp));
     if (!(total > 0)) throw new RxthermError("NO_OXIDIZER", `${fn}: the oxidizer flows are all zero`, {});
     for (const k of Object.keys(comp)) comp[k] = (comp[k] as number) / total;
   }
@@ -471,16 +472,6 @@ function humidityFraction(h: AirHumidity | undefined, fn: string): number {
 }
 
 function massKg(flows: Flows, fn: string): number {
-  return sum(Object.entries(flows).map(([k, n]) => n * molarMassOf(k, fn, "flows"))) / 1000;
+  return compensatedSum(Object.entries(flows).map(([k, n]) => n * molarMassOf(k, fn, "flows"))) / 1000;
 }
 
-function sum(values: readonly number[]): number {
-  let s = 0;
-  let c = 0;
-  for (const v of values) {
-    const t = s + v;
-    c += Math.abs(s) >= Math.abs(v) ? s - t + v : v - t + s;
-    s = t;
-  }
-  return s + c;
-}

@@ -6,6 +6,7 @@
 import { RxthermError } from "../errors.js";
 import { molarMassOf, validateFlows } from "./_system.js";
 import type { Flows } from "./types.js";
+import { compensatedSum } from "../_internal/compensatedSum.js";
 
 /**
  * Options of the mass-flow conversions {@link massToMolarFlows} and {@link molarToMassFlows}.
@@ -162,14 +163,3 @@ function unitFactor(options: MassFlowOptions, fn: string): number {
   throw new RxthermError("INVALID_ARGUMENT", `${fn} requires massUnit "kg" or "g", got ${String(u)}`, { massUnit: u });
 }
 
-/** Neumaier's compensated sum. */
-function compensatedSum(values: readonly number[]): number {
-  let s = 0;
-  let c = 0;
-  for (const v of values) {
-    const t = s + v;
-    c += Math.abs(s) >= Math.abs(v) ? s - t + v : v - t + s;
-    s = t;
-  }
-  return s + c;
-}

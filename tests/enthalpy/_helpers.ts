@@ -3,16 +3,7 @@ import { RxthermError } from "../../src/errors.js";
 import { createLibrary } from "../../src/species/createLibrary.js";
 import type { Library } from "../../src/species/types.js";
 
-/** Run fn and return the RxthermError it throws (fails the test otherwise). */
-export function caught(fn: () => unknown): RxthermError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof RxthermError) return e;
-    throw e;
-  }
-  throw new Error("expected an RxthermError");
-}
+export { caught } from "../_helpers/caught.js";
 
 /** JANAF rows copied into tests/fixtures/enthalpy-janaf.json (source named in the file). */
 export interface JanafRow {

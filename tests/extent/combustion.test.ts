@@ -4,16 +4,7 @@ import { RxthermError } from "../../src/errors.js";
 import { AIR_21_79, DRY_AIR, combustion } from "../../src/extent/combustion.js";
 import type { Flows } from "../../src/extent/types.js";
 import { parseFormula } from "../../src/formula/parseFormula.js";
-
-function caught(f: () => unknown): RxthermError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof RxthermError) return e;
-    throw e;
-  }
-  throw new Error("expected an RxthermError");
-}
+import { caught } from "../_helpers/caught.js";
 
 function atoms(flows: Flows): Record<string, number> {
   const t: Record<string, number> = {};

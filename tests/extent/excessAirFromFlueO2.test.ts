@@ -3,16 +3,7 @@ import { describe, expect, it } from "vitest";
 import { RxthermError } from "../../src/errors.js";
 import { AIR_21_79, combustion } from "../../src/extent/combustion.js";
 import { excessAirFromFlueCO2, excessAirFromFlueO2 } from "../../src/extent/excessAirFromFlueO2.js";
-
-function caught(f: () => unknown): RxthermError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof RxthermError) return e;
-    throw e;
-  }
-  throw new Error("expected an RxthermError");
-}
+import { caught } from "../_helpers/caught.js";
 
 describe("excessAirFromFlueO2", () => {
   it("excessAirFromFlueO2 for carbon is O2/(y_O2 − O2) exactly (the documented example)", () => {

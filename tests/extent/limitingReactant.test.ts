@@ -3,16 +3,7 @@ import { describe, expect, it } from "vitest";
 import { RxthermError } from "../../src/errors.js";
 import { limitingReactant } from "../../src/extent/limitingReactant.js";
 import { parseReaction } from "../../src/reaction/parseReaction.js";
-
-function caught(f: () => unknown): RxthermError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof RxthermError) return e;
-    throw e;
-  }
-  throw new Error("expected an RxthermError");
-}
+import { caught } from "../_helpers/caught.js";
 
 describe("limitingReactant", () => {
   it("limitingReactant(feed, reaction) gives the documented example", () => {

@@ -4,16 +4,7 @@ import { RxthermError } from "../../src/errors.js";
 import { reconcileExtents } from "../../src/extent/reconcileExtents.js";
 import { solveExtents } from "../../src/extent/solveExtents.js";
 import type { Flows } from "../../src/extent/types.js";
-
-function caught(f: () => unknown): RxthermError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof RxthermError) return e;
-    throw e;
-  }
-  throw new Error("expected an RxthermError");
-}
+import { caught } from "../_helpers/caught.js";
 
 describe("reconcileExtents", () => {
   it("reconcileExtents gives the documented example (least squares by hand: ξ = (7 + 7.2 + 6.8)/3)", () => {

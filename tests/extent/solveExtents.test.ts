@@ -6,16 +6,7 @@ import { solveExtents } from "../../src/extent/solveExtents.js";
 import type { ExtentSpec, Flows } from "../../src/extent/types.js";
 import { rationalAdd, rationalFrom, rationalFromNumber, rationalMul, rationalSub, rationalToNumber } from "../../src/numeric/rational.js";
 import { parseReaction } from "../../src/reaction/parseReaction.js";
-
-function caught(f: () => unknown): RxthermError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof RxthermError) return e;
-    throw e;
-  }
-  throw new Error("expected an RxthermError");
-}
+import { caught } from "../_helpers/caught.js";
 
 function elementTotals(flows: Flows): Record<string, number> {
   const t: Record<string, number> = {};

@@ -2,16 +2,7 @@ import { fc, test } from "@fast-check/vitest";
 import { describe, expect, it } from "vitest";
 import { RxthermError } from "../../src/errors.js";
 import { massFractions, massToMolarFlows, molarToMassFlows, moleFractions, totalFlow, totalMassFlow } from "../../src/extent/streams.js";
-
-function caught(f: () => unknown): RxthermError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof RxthermError) return e;
-    throw e;
-  }
-  throw new Error("expected an RxthermError");
-}
+import { caught } from "../_helpers/caught.js";
 
 // molar masses from IUPAC standard atomic weights (abridged): H2O 18.015, CH4 16.043, CO2 44.009 g/mol
 describe("massToMolarFlows", () => {

@@ -4,16 +4,7 @@ import Decimal from "decimal.js";
 import { ATOMIC_WEIGHTS } from "../../src/data/atomicWeights.js";
 import { RxthermError } from "../../src/errors.js";
 
-/** Run `fn`, expect an RxthermError, return it. */
-export function errorOf(fn: () => unknown): RxthermError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof RxthermError) return e;
-    throw e;
-  }
-  throw new Error("expected an RxthermError, got a result");
-}
+export { caught as errorOf } from "../_helpers/caught.js";
 
 export const SYMBOLS: readonly string[] = [...ATOMIC_WEIGHTS.map((r) => r.symbol), "D", "T"];
 

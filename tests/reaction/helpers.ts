@@ -32,15 +32,7 @@ export function pairs(r: Reaction): { reactants: [number, string][]; products: [
   };
 }
 
-export function errorOf(f: () => unknown): RxthermError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof RxthermError) return e;
-    throw e;
-  }
-  throw new Error("expected an RxthermError");
-}
+export { caught as errorOf } from "../_helpers/caught.js";
 
 const ELEMENTS = ["C", "H", "O", "N", "S", "Fe", "Cl"] as const;
 type Atoms = Record<string, number>;
