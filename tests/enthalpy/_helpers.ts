@@ -1,5 +1,4 @@
 import { readFileSync } from "node:fs";
-import { RxthermError } from "../../src/errors.js";
 import { createLibrary } from "../../src/species/createLibrary.js";
 import type { Library } from "../../src/species/types.js";
 

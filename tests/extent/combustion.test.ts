@@ -1,6 +1,5 @@
 import { fc, test } from "@fast-check/vitest";
 import { describe, expect, it } from "vitest";
-import { RxthermError } from "../../src/errors.js";
 import { AIR_21_79, DRY_AIR, combustion } from "../../src/extent/combustion.js";
 import type { Flows } from "../../src/extent/types.js";
 import { parseFormula } from "../../src/formula/parseFormula.js";

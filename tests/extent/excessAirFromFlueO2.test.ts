@@ -1,6 +1,5 @@
 import { fc, test } from "@fast-check/vitest";
 import { describe, expect, it } from "vitest";
-import { RxthermError } from "../../src/errors.js";
 import { AIR_21_79, combustion } from "../../src/extent/combustion.js";
 import { excessAirFromFlueCO2, excessAirFromFlueO2 } from "../../src/extent/excessAirFromFlueO2.js";
 import { caught } from "../_helpers/caught.js";

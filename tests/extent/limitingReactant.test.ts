@@ -1,6 +1,5 @@
 import { fc, test } from "@fast-check/vitest";
 import { describe, expect, it } from "vitest";
-import { RxthermError } from "../../src/errors.js";
 import { limitingReactant } from "../../src/extent/limitingReactant.js";
 import { parseReaction } from "../../src/reaction/parseReaction.js";
 import { caught } from "../_helpers/caught.js";

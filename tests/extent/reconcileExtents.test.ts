@@ -1,6 +1,5 @@
 import { fc, test } from "@fast-check/vitest";
 import { describe, expect, it } from "vitest";
-import { RxthermError } from "../../src/errors.js";
 import { reconcileExtents } from "../../src/extent/reconcileExtents.js";
 import { solveExtents } from "../../src/extent/solveExtents.js";
 import type { Flows } from "../../src/extent/types.js";

@@ -1,6 +1,5 @@
 import { fc, test } from "@fast-check/vitest";
 import { describe, expect, it } from "vitest";
-import { RxthermError } from "../../src/errors.js";
 import { massFractions, massToMolarFlows, molarToMassFlows, moleFractions, totalFlow, totalMassFlow } from "../../src/extent/streams.js";
 import { caught } from "../_helpers/caught.js";
 

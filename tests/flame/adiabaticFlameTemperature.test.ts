@@ -4,7 +4,6 @@ import { readFileSync } from "node:fs";
 import { adiabaticFlameTemperature } from "../../src/flame/adiabaticFlameTemperature.js";
 import { DEFAULT_FLAME_PRODUCTS } from "../../src/flame/flameDefaults.js";
 import { species } from "../../src/species/species.js";
-import { RxthermError } from "../../src/errors.js";
 import { GAS_CONSTANT_J_PER_MOL_K } from "../../src/units.js";
 import { caught } from "../_helpers/caught.js";
 

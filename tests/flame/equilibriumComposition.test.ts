@@ -3,7 +3,6 @@ import { test, fc } from "@fast-check/vitest";
 import { readFileSync } from "node:fs";
 import { equilibriumComposition } from "../../src/flame/equilibriumComposition.js";
 import { species } from "../../src/species/species.js";
-import { RxthermError } from "../../src/errors.js";
 import { GAS_CONSTANT_J_PER_MOL_K } from "../../src/units.js";
 import { caught } from "../_helpers/caught.js";
 

@@ -2,7 +2,6 @@ import { describe, expect, it } from "vitest";
 import { test, fc } from "@fast-check/vitest";
 import { flameTemperatureSweep } from "../../src/flame/flameTemperatureSweep.js";
 import { adiabaticFlameTemperature } from "../../src/flame/adiabaticFlameTemperature.js";
-import { RxthermError } from "../../src/errors.js";
 import { caught } from "../_helpers/caught.js";
 
 describe("flameTemperatureSweep", () => {

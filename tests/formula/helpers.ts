@@ -2,7 +2,6 @@
 import { fc } from "@fast-check/vitest";
 import Decimal from "decimal.js";
 import { ATOMIC_WEIGHTS } from "../../src/data/atomicWeights.js";
-import { RxthermError } from "../../src/errors.js";
 
 export { caught as errorOf } from "../_helpers/caught.js";
 

@@ -3,7 +3,6 @@ import { test, fc } from "@fast-check/vitest";
 import { fitCp, type CpPoint } from "../../src/heat-capacity/fitCp.js";
 import { createHeatCapacity } from "../../src/heat-capacity/createHeatCapacity.js";
 import type { CpRange, Nasa7Form, ShomateForm } from "../../src/heat-capacity/types.js";
-import { RxthermError } from "../../src/errors.js";
 import { GAS_CONSTANT_J_PER_MOL_K as R } from "../../src/units.js";
 import { janafRows, nasa7Ranges, shomateRanges } from "./fixtures.js";
 import { caught } from "../_helpers/caught.js";

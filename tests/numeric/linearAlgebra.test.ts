@@ -8,7 +8,6 @@ import {
   solveLinearSystem,
 } from "../../src/numeric/linearAlgebra.js";
 import { rational, rationalAdd, rationalMul, rationalToString, type Rational } from "../../src/numeric/rational.js";
-import { RxthermError } from "../../src/errors.js";
 import { caught } from "../_helpers/caught.js";
 
 const str = (v: Rational[]) => v.map(rationalToString);

@@ -21,7 +21,6 @@ import {
   scaleToCoprimeIntegers,
   type Rational,
 } from "../../src/numeric/rational.js";
-import { RxthermError } from "../../src/errors.js";
 import { caught } from "../_helpers/caught.js";
 
 const arbRational = fc

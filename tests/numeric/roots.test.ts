@@ -1,7 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { test, fc } from "@fast-check/vitest";
 import { findRoot } from "../../src/numeric/roots.js";
-import { RxthermError } from "../../src/errors.js";
 import { caught } from "../_helpers/caught.js";
 
 describe("findRoot", () => {

@@ -5,7 +5,6 @@
  */
 import { fc } from "@fast-check/vitest";
 import { parseFormula } from "../../src/formula/parseFormula.js";
-import { RxthermError } from "../../src/errors.js";
 import type { Reaction } from "../../src/reaction/types.js";
 
 /** Products − reactants for every element and the charge, by plain float arithmetic. */
