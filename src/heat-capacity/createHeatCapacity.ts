@@ -391,9 +391,12 @@ class PiecewiseHeatCapacity implements HeatCapacity {
       });
     }
     const lo = this.TminK, hi = this.TmaxK;
-    for (let j = 0; j < ts.length; j++) {
-      const T = ts[j]!;
-      if (!(T >= lo && T <= hi)) this.check(fn, T, options, j);
+    if (!allWithin(ts, lo, hi)) {
+      // slow path: find each temperature outside the range (throws, or allows extrapolation)
+      for (let j = 0; j < ts.length; j++) {
+        const T = ts[j]!;
+        if (!(T >= lo && T <= hi)) this.check(fn, T, options, j);
+      }
     }
     return out ?? new Float64Array(ts.length);
   }
@@ -426,4 +429,24 @@ class PiecewiseHeatCapacity implements HeatCapacity {
       { label: this.label, T, rangeIndex, form: r.cp.form },
     );
   }
+}
+
+/**
+ * True when every value of `ts` lies in [lo, hi] (false for NaN). Unrolled by four: this up-front
+ * check is what lets the batch APIs promise that nothing is written when a temperature is bad, and
+ * unrolling halves its cost next to the evaluation loop.
+ */
+function allWithin(ts: Float64Array, lo: number, hi: number): boolean {
+  const n = ts.length;
+  const m = n - (n & 3);
+  let j = 0;
+  for (; j < m; j += 4) {
+    const a = ts[j]!, b = ts[j + 1]!, c = ts[j + 2]!, d = ts[j + 3]!;
+    if (!(a >= lo && a <= hi && b >= lo && b <= hi && c >= lo && c <= hi && d >= lo && d <= hi)) return false;
+  }
+  for (; j < n; j++) {
+    const a = ts[j]!;
+    if (!(a >= lo && a <= hi)) return false;
+  }
+  return true;
 }

@@ -368,6 +368,18 @@ describe("createHeatCapacity", () => {
       expect(caught(() => N2.cpBatch(Float64Array.from([400, NaN]))).details).toMatchObject({ index: 1 });
     });
 
+    it("find a bad temperature anywhere in a long array (unrolled check and its tail)", () => {
+      const ts = Float64Array.from([300, 400, 500, 600, 700, 50, 800, 900, 1000]);
+      const out = new Float64Array(ts.length).fill(7);
+      expect(caught(() => N2.sensibleEnthalpyBatch(ts, out)).details).toMatchObject({ T: 50, index: 5 });
+      ts[5] = 750;
+      ts[8] = Number.NaN;
+      expect(caught(() => N2.sensibleEnthalpyBatch(ts, out)).details).toMatchObject({ index: 8 });
+      expect(Array.from(out).every((v) => v === 7)).toBe(true);
+      ts[8] = 1000;
+      expect(N2.sensibleEnthalpyBatch(ts, out)[8]).toBe(N2.sensibleEnthalpy(1000));
+    });
+
     it("reject an out array that is too short, and non-Float64Array input", () => {
       const e = caught(() => N2.cpBatch(Float64Array.from([400, 500]), new Float64Array(1)));
       expect(e.code).toBe("INVALID_ARGUMENT");
