@@ -37,8 +37,9 @@ export const FORMULA_LIMITS = {
  *   closing bracket; Unicode subscript digits are accepted (`H₂O`). Decimals are read exactly with a private
  *   decimal.js constructor (1000 significant digits, half-even), so nested multipliers multiply exactly:
  *   `(Fe0.947O)3` gives Fe 2.841, never 2.8409999999999997. Each count in the result is the double nearest
- *   to the exact decimal. A `.` between two digits is always a decimal point: write a hydrate after a count
- *   with `·` or `*` (`CuSO4·5H2O`), since `CuSO4.5H2O` reads as O4.5.
+ *   to the exact decimal. A `.` between two digits is a decimal point (`Li1.2Mn0.6Ni0.2O2`), except where the
+ *   digits after it are a whole number followed by water, `H2O` or `D2O`: `CuSO4.5H2O` is the pentahydrate, as
+ *   plant documents write it. `·` or `*` (`CuSO4·5H2O`) are never ambiguous.
  * - **Groups**: `()`, `[]`, `{}` nested up to {@link FORMULA_LIMITS} `.maxNestingDepth` deep; each closing bracket must
  *   match the kind of the last open one.
  * - **Adducts**: parts joined by `·` (U+00B7), `•`, `∙`, `⋅`, `*` or `.`, each with an optional leading
@@ -190,7 +191,7 @@ function scan(s: string, start: number, end: number, exact: boolean): Formula | 
 
   if (isDigit(c) || isSubDigit(c)) {
     leadCol = i;
-    i = readCount(s, i, end, exact);
+    i = readCount(s, i, end, exact, true);
     if (i < 0) return null;
     GMUL[0] = countValue;
     GDMUL[0] = countExact;
@@ -325,7 +326,7 @@ function scan(s: string, start: number, end: number, exact: boolean): Formula | 
         const c3 = s.charCodeAt(i);
         if (isDigit(c3) || isSubDigit(c3)) {
           GMCOL[cur] = i;
-          i = readCount(s, i, end, exact);
+          i = readCount(s, i, end, exact, true);
           if (i < 0) return null;
           GMUL[cur] = countValue;
           GDMUL[cur] = countExact;
@@ -522,7 +523,7 @@ function multiplierColumn(g: number, fallback: number): number {
  * countValue / countExact / countIsInteger and returns the next index; returns −1 in fast mode
  * when the count is a decimal.
  */
-function readCount(s: string, i: number, end: number, exact: boolean): number {
+function readCount(s: string, i: number, end: number, exact: boolean, leading = false): number {
   const col = i;
   let c = s.charCodeAt(i);
   let v = 0;
@@ -541,7 +542,7 @@ function readCount(s: string, i: number, end: number, exact: boolean): number {
     v = v * 10 + (c - 48);
     i++;
   }
-  if (i + 1 < end && c === 46 && isDigit(s.charCodeAt(i + 1))) {
+  if (i + 1 < end && c === 46 && isDigit(s.charCodeAt(i + 1)) && (leading || !isHydrateDot(s, i, end))) {
     if (!exact) return -1;
     i++;
     const fracStart = i;
@@ -787,4 +788,21 @@ function describe(v: unknown): string {
   if (typeof v === "number" || typeof v === "boolean" || typeof v === "bigint") return `${typeof v} ${String(v)}`;
   if (v === null) return "null";
   return typeof v;
+}
+
+/**
+ * True when the `.` at `dot` (between two digits) joins a hydrate, `CuSO4.5H2O`: the digits after it
+ * form a whole number followed by `H2O` or `D2O` that is not the start of a longer formula (`H2O2`, `H2Os`).
+ * Water of hydration is by far the most common use of a dot after a count in plant and supplier
+ * documents, and reading it as a decimal (O 4.5) would silently give a wrong molar mass.
+ */
+function isHydrateDot(s: string, dot: number, end: number): boolean {
+  let j = dot + 1;
+  while (j < end && isDigit(s.charCodeAt(j))) j++;
+  if (j === dot + 1 || j + 3 > end) return false;
+  const h = s.charCodeAt(j);
+  if (!((h === 72 /* H */ || h === 68 /* D */) && s.charCodeAt(j + 1) === 50 /* 2 */ && s.charCodeAt(j + 2) === 79 /* O */)) return false;
+  if (j + 3 === end) return true;
+  const next = s.charCodeAt(j + 3);
+  return !(isDigit(next) || isLower(next) || next === 46 /* . */);
 }

@@ -48,7 +48,14 @@ describe("parseFormula", () => {
     expect(el("Li1.2Mn0.6Ni0.2O2")).toEqual({ Li: 1.2, Mn: 0.6, Ni: 0.2, O: 2 });
     expect(el("YBa2Cu3O6.5")).toEqual({ Y: 1, Ba: 2, Cu: 3, O: 6.5 });
     expect(el("H0.1H0.2").H).toBe(0.3); // exact sum of repeated entries
-    expect(el("CuSO4.5H2O")).toEqual({ Cu: 1, S: 1, O: 5.5, H: 2 }); // documented: "." between digits is a decimal point
+    // a "." between digits followed by a whole number and water is a hydrate, as plant documents write it
+    // (copper(II) sulfate pentahydrate CuSO4·5H2O — common practice); anything else stays a decimal point
+    expect(el("CuSO4.5H2O")).toEqual({ Cu: 1, S: 1, O: 9, H: 10 });
+    expect(el("MgSO4.7H2O(s)")).toEqual({ Mg: 1, S: 1, O: 11, H: 14 });
+    expect(el("Na2CO3.10H2O")).toEqual({ Na: 2, C: 1, O: 13, H: 20 });
+    expect(el("CaCl2.2D2O")).toEqual({ Ca: 1, Cl: 2, D: 4, O: 2 });
+    expect(el("CuSO4.5H2O2")).toEqual({ Cu: 1, S: 1, O: 6.5, H: 2 }); // H2O2 is not water: decimal point
+    expect(el("NiO1.5H2")).toEqual({ Ni: 1, O: 1.5, H: 2 });
   });
 
   it("parseFormula(text) reads adducts and hydrates with ·, *, ., • and leading multipliers", () => {
