@@ -374,9 +374,9 @@ class PiecewiseHeatCapacity implements HeatCapacity {
         h0 = k[o + H_0]! - minus; h1 = k[o + H_1]!; h2 = k[o + H_2]!; h3 = k[o + H_3]!;
         h4 = k[o + H_4]!; h5 = k[o + H_5]!; hi1 = k[o + H_INV]!; hl = k[o + H_LN]!;
       }
-      let v = h0 + T * (h1 + T * (h2 + T * (h3 + T * (h4 + T * h5)))) + hi1 / T;
-      if (hl !== 0) v += hl * Math.log(T);
-      res[j] = v;
+      res[j] = hl === 0
+        ? h0 + T * (h1 + T * (h2 + T * (h3 + T * (h4 + T * h5)))) + hi1 / T
+        : h0 + T * (h1 + T * (h2 + T * (h3 + T * (h4 + T * h5)))) + hi1 / T + hl * Math.log(T);
     }
   }
 
