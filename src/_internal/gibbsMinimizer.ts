@@ -246,16 +246,7 @@ export function solveGibbs(p: GibbsProblem, c: GibbsConditions, s: GibbsState, l
       }
       for (let l = 0; l < i; l++) M[l * size + i] = M[i * size + l]!;
       r[i] = b[i]! - bc + rhs;
-      if (isP) {
-        M[i * size + m] = si;
-        M[m * size + i] = si;
-      }
-      for (let k = 0; k < nc; k++) {
-        const aik = a[i * ns + cond[k]!]!;
-        const col = m + (isP ? 1 : 0) + k;
-        M[i * size + col] = aik;
-        M[col * size + i] = aik;
-      }
+      fillBorder(M, a, cond, i, si, size, m, ns, nc, isP);
     }
     if (isP) {
       M[m * size + m] = nGas - Nt;
@@ -396,16 +387,7 @@ export function equilibriumDerivatives(
       }
     }
     r[i] = rhs;
-    if (isP) {
-      M[i * size + m] = si;
-      M[m * size + i] = si;
-    }
-    for (let k = 0; k < nc; k++) {
-      const aik = a[i * ns + cond[k]!]!;
-      const col = m + (isP ? 1 : 0) + k;
-      M[i * size + col] = aik;
-      M[col * size + i] = aik;
-    }
+    fillBorder(M, a, cond, i, si, size, m, ns, nc, isP);
   }
   if (isP) {
     M[m * size + m] = nGas - Nt;
@@ -515,4 +497,25 @@ export function solveGibbsRobust(p: GibbsProblem, c: GibbsConditions, s: GibbsSt
     if (out.converged) return { ...out, iterations: total };
   }
   return { ...out, iterations: total };
+}
+
+/**
+ * Fill the border of element row `i` of the symmetric element-potential matrix: the ln N column
+ * (Σⱼ aᵢⱼ nⱼ, at constant pressure only) and one column per active condensed species (aᵢₖ).
+ * Shared by the Newton step and the temperature-sensitivity solve, which use the same matrix.
+ */
+function fillBorder(
+  M: Float64Array, a: Float64Array, cond: ArrayLike<number>, i: number, si: number,
+  size: number, m: number, ns: number, nc: number, isP: boolean,
+): void {
+  if (isP) {
+    M[i * size + m] = si;
+    M[m * size + i] = si;
+  }
+  for (let k = 0; k < nc; k++) {
+    const aik = a[i * ns + cond[k]!]!;
+    const col = m + (isP ? 1 : 0) + k;
+    M[i * size + col] = aik;
+    M[col * size + i] = aik;
+  }
 }
