@@ -28,7 +28,7 @@ export function run(): void {
   );
 
   const dhVap = species("H2O(g)").enthalpy(373.15) - species("H2O(l)").enthalpy(373.15);
-  console.log(`Steam for the reformer: latent heat of water at 373.15 K = ${(dhVap / 1000).toFixed(2)} kJ/mol (steam tables: 40.66)`);
+  console.log(`Steam for the reformer: latent heat of water at 373.15 K = ${(dhVap / 1000).toFixed(2)} kJ/mol (steam tables, IAPWS-IF97, from memory: 40.66)`);
   const meoh = species("CH3OH(g)");
   console.log(`Methanol vapour (${meoh.dataset}): G(523.15 K, 1 bar) = ${(meoh.gibbs(T_REACTOR_K) / 1000).toFixed(2)} kJ/mol`);
 
