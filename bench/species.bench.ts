@@ -5,7 +5,7 @@
  */
 import { species } from "../src/species/species.js";
 import { createLibrary } from "../src/species/createLibrary.js";
-import { builtInSpeciesData } from "../src/data/species/builtInSpeciesData.js";
+import { builtInSpeciesData } from "../src/species/data/builtInSpeciesData.js";
 import { measure, report } from "./harness.js";
 
 // 64 temperatures spread over 300–3000 K (both CO2(g) Shomate ranges)

@@ -40,8 +40,8 @@ export type { FormatFormulaOptions } from "./formula/formatFormula.js";
 export { molarMass, ELECTRON_MOLAR_MASS_G_PER_MOL } from "./formula/molarMass.js";
 export type { MolarMassOptions } from "./formula/molarMass.js";
 export { elementMassFractions } from "./formula/elementMassFractions.js";
-export { ATOMIC_WEIGHTS, HYDROGEN_ISOTOPES, ATOMIC_WEIGHTS_EDITION, elementData } from "./data/atomicWeights.js";
-export type { ElementData, AtomicWeightKind } from "./data/atomicWeights.js";
+export { ATOMIC_WEIGHTS, HYDROGEN_ISOTOPES, ATOMIC_WEIGHTS_EDITION, elementData } from "./formula/atomicWeights.js";
+export type { ElementData, AtomicWeightKind } from "./formula/atomicWeights.js";
 
 // ── reaction (layer 2) ────────────────────────────────────────────────────────
 export type { Reaction, Term } from "./reaction/types.js";

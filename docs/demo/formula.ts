@@ -4,7 +4,7 @@
  * The materials and their roles are invented for this demo; the numbers come from the IUPAC atomic weights
  * built into rxtherm.
  */
-import { ATOMIC_WEIGHTS_EDITION } from "../../src/data/atomicWeights.js";
+import { ATOMIC_WEIGHTS_EDITION } from "../../src/formula/atomicWeights.js";
 import { elementMassFractions } from "../../src/formula/elementMassFractions.js";
 import { formatFormula } from "../../src/formula/formatFormula.js";
 import { molarMass } from "../../src/formula/molarMass.js";

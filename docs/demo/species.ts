@@ -21,10 +21,10 @@ export function run(): void {
       `${key.padEnd(9)} ${String(s.dataset).padEnd(12)} ${(h1 / 1000).toFixed(3).padStart(12)} ${(h2 / 1000).toFixed(3).padStart(14)} ${((h2 - h1) / 1000).toFixed(3).padStart(11)} ${s.entropy(T_REACTOR_K, 50e5).toFixed(2).padStart(25)}   ${s.sources["hf298"]}, ${s.sources["s298"]}, ${s.sources["cp"]}`,
     );
   }
-  const ch4Gri = species("CH4(g)", undefined, { dataset: "gri30" });
+  const ch4Gri = species("CH4(g)", undefined, { dataset: "gri-mech-3.0" });
   const ch4 = species("CH4(g)");
   console.log(
-    `\nCH4 data sets at ${T_REACTOR_K} K: nist-janaf Cp ${ch4.cp(T_REACTOR_K).toFixed(2)}, gri30 Cp ${ch4Gri.cp(T_REACTOR_K).toFixed(2)} J/(mol·K) (GRI-Mech CH4 is flagged: 1–4 % high in Cp at high T)`,
+    `\nCH4 data sets at ${T_REACTOR_K} K: nist-janaf Cp ${ch4.cp(T_REACTOR_K).toFixed(2)}, gri-mech-3.0 Cp ${ch4Gri.cp(T_REACTOR_K).toFixed(2)} J/(mol·K) (GRI-Mech CH4 is flagged: 1–4 % high in Cp at high T)`,
   );
 
   const dhVap = species("H2O(g)").enthalpy(373.15) - species("H2O(l)").enthalpy(373.15);

@@ -5,8 +5,8 @@ import type { Reaction } from "../reaction/types.js";
 import type { ExtentSpec, Flows, Stream } from "../extent/types.js";
 import { solveExtents } from "../extent/solveExtents.js";
 import { findRoot } from "../numeric/roots.js";
-import { resolveSpeciesCached } from "../_internal/enthalpyLinks.js";
-import { resolveStream } from "../_internal/energyStreams.js";
+import { resolveSpeciesCached } from "../enthalpy/resolveInputs.js";
+import { resolveStream } from "./internal/energyStreams.js";
 
 /**
  * Input of {@link adiabaticReactionTemperature} and {@link adiabaticTemperatureRise}.

@@ -3,8 +3,8 @@ import { GAS_CONSTANT_J_PER_MOL_K } from "../units.js";
 import type { Library, Species } from "../species/types.js";
 import type { Reaction } from "../reaction/types.js";
 import type { Stream } from "../extent/types.js";
-import { resolveStream, type Entry, type ResolvedStream } from "../_internal/energyStreams.js";
-import { prepareReaction, standardEnthalpyExact } from "../_internal/preparedReaction.js";
+import { resolveStream, type Entry, type ResolvedStream } from "./internal/energyStreams.js";
+import { prepareReaction, standardEnthalpyExact } from "../enthalpy/preparedReaction.js";
 
 /**
  * Streams and optional reactions of an energy balance, for {@link heatDuty}.

@@ -2,7 +2,7 @@ import { RxthermError } from "../errors.js";
 import { GAS_CONSTANT_J_PER_MOL_K, STANDARD_TEMPERATURE_K } from "../units.js";
 import type { Library } from "../species/types.js";
 import type { Reaction } from "../reaction/types.js";
-import { prepareReaction } from "../_internal/preparedReaction.js";
+import { prepareReaction } from "./preparedReaction.js";
 import { checkTemperature, reactionEnthalpy } from "./reactionEnthalpy.js";
 import { reactionGibbs } from "./reactionGibbs.js";
 

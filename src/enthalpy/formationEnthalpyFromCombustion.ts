@@ -1,9 +1,9 @@
 import { RxthermError } from "../errors.js";
 import type { Library } from "../species/types.js";
 import { parseFormula } from "../formula/parseFormula.js";
-import { resolveSpecies } from "../_internal/enthalpyLinks.js";
-import { ExactDecimal } from "../_internal/preparedReaction.js";
-import { combustionProducts } from "../_internal/combustionProducts.js";
+import { resolveSpecies } from "./resolveInputs.js";
+import { ExactDecimal } from "./preparedReaction.js";
+import { combustionProducts } from "./internal/combustionProducts.js";
 import { decimalText } from "./reactionEnthalpyFromCombustion.js";
 
 /**

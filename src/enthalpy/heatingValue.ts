@@ -3,9 +3,9 @@ import { ATMOSPHERE_PA, GAS_CONSTANT_J_PER_MOL_K } from "../units.js";
 import type { Library, Species } from "../species/types.js";
 import type { Flows } from "../extent/types.js";
 import { molarMass } from "../formula/molarMass.js";
-import { resolveSpecies } from "../_internal/enthalpyLinks.js";
-import { ExactDecimal } from "../_internal/preparedReaction.js";
-import { combustionProducts } from "../_internal/combustionProducts.js";
+import { resolveSpecies } from "./resolveInputs.js";
+import { ExactDecimal } from "./preparedReaction.js";
+import { combustionProducts } from "./internal/combustionProducts.js";
 
 /**
  * Options of {@link heatingValue}.

@@ -4,8 +4,8 @@ import {
   rationalAdd, rationalDiv, rationalFromDecimalString, rationalIsZero, rationalMul, rationalNeg, rationalSub,
   rationalToNumber, rationalToString, type Rational,
 } from "../numeric/rational.js";
-import { toReaction } from "../_internal/enthalpyLinks.js";
-import { ExactDecimal, exactWeightedSum } from "../_internal/preparedReaction.js";
+import { toReaction } from "./resolveInputs.js";
+import { ExactDecimal, exactWeightedSum } from "./preparedReaction.js";
 
 /**
  * One known reaction and its enthalpy, for {@link hessCombine}.

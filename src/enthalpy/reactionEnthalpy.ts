@@ -4,7 +4,7 @@ import type { Library } from "../species/types.js";
 import type { Reaction } from "../reaction/types.js";
 import type Decimal from "decimal.js";
 import type { Rational } from "../numeric/rational.js";
-import { prepareReaction, standardEnthalpyExact, type PreparedReaction } from "../_internal/preparedReaction.js";
+import { prepareReaction, standardEnthalpyExact, type PreparedReaction } from "./preparedReaction.js";
 
 /**
  * Options of {@link reactionEnthalpy}.

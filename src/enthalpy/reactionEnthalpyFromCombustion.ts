@@ -1,8 +1,8 @@
 import { RxthermError } from "../errors.js";
 import type { Reaction } from "../reaction/types.js";
 import { rationalFromDecimalString, rationalNeg, type Rational } from "../numeric/rational.js";
-import { reactionResiduals, toReaction } from "../_internal/enthalpyLinks.js";
-import { ExactDecimal, exactWeightedSum } from "../_internal/preparedReaction.js";
+import { reactionResiduals, toReaction } from "./resolveInputs.js";
+import { ExactDecimal, exactWeightedSum } from "./preparedReaction.js";
 
 /**
  * Species whose standard enthalpy of combustion is zero by definition: the products of complete

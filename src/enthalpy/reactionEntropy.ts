@@ -1,7 +1,7 @@
 import { STANDARD_PRESSURE_PA, STANDARD_TEMPERATURE_K } from "../units.js";
 import type { Library } from "../species/types.js";
 import type { Reaction } from "../reaction/types.js";
-import { prepareReaction } from "../_internal/preparedReaction.js";
+import { prepareReaction } from "./preparedReaction.js";
 import { checkTemperature } from "./reactionEnthalpy.js";
 
 /**

@@ -2,7 +2,7 @@ import { RxthermError } from "../errors.js";
 import type { Library } from "../species/types.js";
 import type { Flows } from "../extent/types.js";
 import { molarMass } from "../formula/molarMass.js";
-import { resolveSpecies } from "../_internal/enthalpyLinks.js";
+import { resolveSpecies } from "./resolveInputs.js";
 import { heatingValue } from "./heatingValue.js";
 
 /**

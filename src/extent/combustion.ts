@@ -1,9 +1,9 @@
 import { RxthermError } from "../errors.js";
 import type { Formula } from "../formula/types.js";
-import { formulaOf, molarMassOf, validateFlows } from "./_system.js";
+import { formulaOf, molarMassOf, validateFlows } from "./internal/extentSystem.js";
 import type { Flows } from "./types.js";
 import { waterSaturationPressure } from "./waterSaturationPressure.js";
-import { compensatedSum } from "../_internal/compensatedSum.js";
+import { compensatedSum } from "../numeric/compensatedSum.js";
 
 /**
  * Dry air by mole fraction, the default oxidizer of {@link combustion}: O₂ 0.209476 and Ar

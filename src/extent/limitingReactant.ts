@@ -11,7 +11,7 @@ import {
   rationalSub,
   rationalToNumber,
 } from "../numeric/rational.js";
-import { buildSystem } from "./_system.js";
+import { buildSystem } from "./internal/extentSystem.js";
 import type { Flows } from "./types.js";
 
 /**

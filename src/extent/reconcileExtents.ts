@@ -11,7 +11,7 @@ import {
   rationalToNumber,
 } from "../numeric/rational.js";
 import { solveLinearSystem } from "../numeric/linearAlgebra.js";
-import { buildSystem, resolveSpecies, validateFlows } from "./_system.js";
+import { buildSystem, resolveSpecies, validateFlows } from "./internal/extentSystem.js";
 import type { Flows } from "./types.js";
 
 /**

@@ -13,7 +13,7 @@ import {
   rationalToNumber,
   rationalToString,
 } from "../numeric/rational.js";
-import { integerGaussJordanNumber } from "../_internal/integerElimination.js";
+import { integerGaussJordanNumber } from "../numeric/integerElimination.js";
 import {
   type SafeQ,
   S0,
@@ -29,8 +29,8 @@ import {
   sqNeg,
   sqSub,
   sqToNumber,
-} from "./_safeRational.js";
-import { type StoichSystem, type YieldPair, buildSystem, resolveSpecies } from "./_system.js";
+} from "../numeric/safeRational.js";
+import { type StoichSystem, type YieldPair, buildSystem, resolveSpecies } from "./internal/extentSystem.js";
 import type { ExtentSpec, Flows } from "./types.js";
 
 /**

@@ -4,9 +4,9 @@
  * @module
  */
 import { RxthermError } from "../errors.js";
-import { molarMassOf, validateFlows } from "./_system.js";
+import { molarMassOf, validateFlows } from "./internal/extentSystem.js";
 import type { Flows } from "./types.js";
-import { compensatedSum } from "../_internal/compensatedSum.js";
+import { compensatedSum } from "../numeric/compensatedSum.js";
 
 /**
  * Options of the mass-flow conversions {@link massToMolarFlows} and {@link molarToMassFlows}.

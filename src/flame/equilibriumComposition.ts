@@ -2,7 +2,7 @@ import { RxthermError } from "../errors.js";
 import { ATMOSPHERE_PA } from "../units.js";
 import type { Flows } from "../extent/types.js";
 import type { Library, Species } from "../species/types.js";
-import { flameSpecies } from "../_internal/flameLinks.js";
+import { flameSpecies } from "./internal/flameLinks.js";
 import {
   amount,
   energyAndSlope,
@@ -11,8 +11,8 @@ import {
   solveAtT,
   solveEnergy,
   type Engine,
-} from "../_internal/equilibriumEngine.js";
-import { resolveLimits } from "../_internal/flameInput.js";
+} from "./internal/equilibriumEngine.js";
+import { resolveLimits } from "./internal/flameInput.js";
 
 /**
  * What to bring to equilibrium, and at which conditions, for {@link equilibriumComposition}.

@@ -1,7 +1,7 @@
 import { RxthermError } from "../errors.js";
-import { solveFlamePoint, type FlamePoint } from "../_internal/flameProblem.js";
-import { flamePointOf, prepareFlameInput, toFlameResult } from "../_internal/flameInput.js";
-import type { AdiabaticFlameInput, AdiabaticFlameOptions } from "./adiabaticFlameTemperature.js";
+import { solveFlamePoint, type FlamePoint } from "./internal/flameProblem.js";
+import { flamePointOf, prepareFlameInput, toFlameResult } from "./internal/flameInput.js";
+import type { AdiabaticFlameInput, AdiabaticFlameOptions } from "./types.js";
 
 /**
  * Which setting of an {@link AdiabaticFlameInput} a sweep varies, and over which values.

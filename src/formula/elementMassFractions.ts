@@ -1,6 +1,6 @@
 import { RxthermError } from "../errors.js";
-import { checkFormula } from "../_internal/checkFormula.js";
-import { INDEX_WEIGHTS, symbolIndexOf } from "../_internal/elementIndex.js";
+import { checkFormula } from "./internal/checkFormula.js";
+import { INDEX_WEIGHTS, symbolIndexOf } from "./internal/elementIndex.js";
 import { molarMass } from "./molarMass.js";
 import { parseFormula } from "./parseFormula.js";
 import type { Formula } from "./types.js";

@@ -1,5 +1,5 @@
 import { RxthermError } from "../errors.js";
-import { checkFormula } from "../_internal/checkFormula.js";
+import { checkFormula } from "./internal/checkFormula.js";
 import type { Formula } from "./types.js";
 
 /**

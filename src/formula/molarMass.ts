@@ -1,7 +1,7 @@
 import Decimal from "decimal.js";
 import { RxthermError } from "../errors.js";
-import { checkFormula } from "../_internal/checkFormula.js";
-import { INDEX_MICRO_WEIGHTS, INDEX_WEIGHTS, symbolIndexOf } from "../_internal/elementIndex.js";
+import { checkFormula } from "./internal/checkFormula.js";
+import { INDEX_MICRO_WEIGHTS, INDEX_WEIGHTS, symbolIndexOf } from "./internal/elementIndex.js";
 import { parseFormula } from "./parseFormula.js";
 import type { Formula } from "./types.js";
 

@@ -1,6 +1,6 @@
 import Decimal from "decimal.js";
 import { RxthermError, type RxthermErrorCode } from "../errors.js";
-import { ELEMENT_KEY_COUNT, INDEX_SYMBOLS, symbolIndex } from "../_internal/elementIndex.js";
+import { ELEMENT_KEY_COUNT, INDEX_SYMBOLS, symbolIndex } from "./internal/elementIndex.js";
 import type { Formula, Phase } from "./types.js";
 
 /**

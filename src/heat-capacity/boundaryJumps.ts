@@ -1,4 +1,4 @@
-import { formAbsolute, formCp } from "../_internal/cpCompile.js";
+import { formAbsolute, formCp } from "./internal/cpCompile.js";
 import type { HeatCapacity } from "./createHeatCapacity.js";
 
 /**

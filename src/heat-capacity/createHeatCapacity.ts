@@ -1,5 +1,5 @@
 import { RxthermError } from "../errors.js";
-import * as compiled from "../_internal/cpCompile.js";
+import * as compiled from "./internal/cpCompile.js";
 import type { CpRange, RangeOptions } from "./types.js";
 
 // Module-local aliases of the compiled-form helpers. The hot paths call these per evaluation; a

@@ -1,7 +1,7 @@
 import { RxthermError } from "../errors.js";
 import { GAS_CONSTANT_J_PER_MOL_K } from "../units.js";
-import { CELSIUS_OFFSET_K, REFERENCE_T_K, STRIDE, canonical, formCp, hAt, sAt, writeSegment } from "../_internal/cpCompile.js";
-import { leastSquares } from "../_internal/leastSquares.js";
+import { CELSIUS_OFFSET_K, REFERENCE_T_K, STRIDE, canonical, formCp, hAt, sAt, writeSegment } from "./internal/cpCompile.js";
+import { leastSquares } from "../numeric/leastSquares.js";
 import type { CpForm, CpRange } from "./types.js";
 
 /**

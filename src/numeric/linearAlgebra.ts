@@ -19,7 +19,7 @@
  * @module
  */
 import { RxthermError } from "../errors.js";
-import { complement, integerGaussJordan, integerNullSpaceFromEchelon } from "../_internal/integerElimination.js";
+import { complement, integerGaussJordan, integerNullSpaceFromEchelon } from "./integerElimination.js";
 import {
   lcmBigInt,
   rational,

@@ -7,7 +7,7 @@ import {
   integerGaussJordanNumber,
   integerNullSpaceFromEchelon,
   integerNullSpaceNumber,
-} from "../_internal/integerElimination.js";
+} from "../numeric/integerElimination.js";
 import {
   equationText,
   integerElementMatrix,
@@ -17,7 +17,7 @@ import {
   numberElementMatrix,
   reactionFromSigned,
   type SpeciesEntry,
-} from "../_internal/reactionTerms.js";
+} from "./internal/reactionTerms.js";
 import { parseReaction } from "./parseReaction.js";
 import type { Reaction, Term } from "./types.js";
 

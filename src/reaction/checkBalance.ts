@@ -8,7 +8,7 @@ import {
   rationalToString,
   type Rational,
 } from "../numeric/rational.js";
-import { termCoefficient } from "../_internal/reactionTerms.js";
+import { termCoefficient } from "./internal/reactionTerms.js";
 import { parseReaction } from "./parseReaction.js";
 import type { Reaction, Term } from "./types.js";
 

@@ -1,5 +1,5 @@
 import { RxthermError } from "../errors.js";
-import { termCoefficient } from "../_internal/reactionTerms.js";
+import { termCoefficient } from "./internal/reactionTerms.js";
 import { rationalToNumber, rationalToString } from "../numeric/rational.js";
 import type { Reaction, Term } from "./types.js";
 

@@ -6,8 +6,8 @@ import {
   integerGaussJordanNumber,
   integerNullSpaceFromEchelon,
   integerNullSpaceNumber,
-} from "../_internal/integerElimination.js";
-import { integerElementMatrix, numberElementMatrix, reactionFromSigned, type SpeciesEntry } from "../_internal/reactionTerms.js";
+} from "../numeric/integerElimination.js";
+import { integerElementMatrix, numberElementMatrix, reactionFromSigned, type SpeciesEntry } from "./internal/reactionTerms.js";
 import type { Reaction } from "./types.js";
 
 /**

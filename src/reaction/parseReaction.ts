@@ -1,7 +1,7 @@
 import { RxthermError } from "../errors.js";
 import { parseFormula } from "../formula/parseFormula.js";
 import { rationalFromDecimalString, rationalToNumber, type Rational } from "../numeric/rational.js";
-import { makeIntegerTerm, makeReaction, makeTerm } from "../_internal/reactionTerms.js";
+import { makeIntegerTerm, makeReaction, makeTerm } from "./internal/reactionTerms.js";
 import type { Reaction, Term } from "./types.js";
 
 /**

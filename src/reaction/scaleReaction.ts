@@ -1,6 +1,6 @@
 import { RxthermError } from "../errors.js";
 import { rationalFrom, rationalMul, type Rational, type RationalLike } from "../numeric/rational.js";
-import { makeReaction, makeTerm, termCoefficient } from "../_internal/reactionTerms.js";
+import { makeReaction, makeTerm, termCoefficient } from "./internal/reactionTerms.js";
 import type { Reaction, Term } from "./types.js";
 
 /**

@@ -1,6 +1,6 @@
-import { builtInSpeciesData } from "../data/species/builtInSpeciesData.js";
-import { buildSpecies } from "../_internal/speciesObject.js";
-import { mergeLibrary, type SpeciesLibrary } from "../_internal/speciesLibrary.js";
+import { builtInSpeciesData } from "./data/builtInSpeciesData.js";
+import { buildSpecies } from "./internal/speciesObject.js";
+import { mergeLibrary, type SpeciesLibrary } from "./internal/speciesLibrary.js";
 import type { Library } from "./types.js";
 import { validateSpeciesData } from "./validateSpeciesData.js";
 
@@ -11,8 +11,8 @@ let cached: SpeciesLibrary | undefined;
  *
  * It holds, with a source id on every value: the NIST Chemistry WebBook Shomate set (gas-phase fits
  * from NIST-JANAF, 4th ed. 1998; data set `"nist-janaf"`, the default wherever it has the species);
- * the GRI-Mech 3.0 NASA-7 polynomials (data set `"gri30"`, the default only for species the Shomate
- * set lacks, selectable for the others: `library.get("CH4(g)", { dataset: "gri30" })`; GRI-Mech CH4,
+ * the GRI-Mech 3.0 NASA-7 polynomials (data set `"gri-mech-3.0"`, the default only for species the Shomate
+ * set lacks, selectable for the others: `library.get("CH4(g)", { dataset: "gri-mech-3.0" })`; GRI-Mech CH4,
  * NO2, N2O and high-T H2O deviate 1–4 % in Cp from NIST-JANAF); and ΔfH°, S° and a constant Cp° over a
  * narrow stated range for common fuels, solvents, process chemicals and minerals, written from memory
  * of the published tables (source id `memory`: check them before design use).
@@ -24,7 +24,7 @@ let cached: SpeciesLibrary | undefined;
  * @example
  * builtInLibrary().keys().length // => 73
  * builtInLibrary().get("methane").key // => "CH4(g)"
- * builtInLibrary().datasets("CH4(g)") // => ["nist-janaf", "gri30"]
+ * builtInLibrary().datasets("CH4(g)") // => ["nist-janaf", "gri-mech-3.0"]
  * @see {@link SOURCES} for the full citations
  */
 export function builtInLibrary(): Library {

@@ -1,5 +1,5 @@
-import { buildSpecies } from "../_internal/speciesObject.js";
-import { mergeLibrary, SpeciesLibrary } from "../_internal/speciesLibrary.js";
+import { buildSpecies } from "./internal/speciesObject.js";
+import { mergeLibrary, SpeciesLibrary } from "./internal/speciesLibrary.js";
 import { builtInLibrary } from "./builtInLibrary.js";
 import type { Library, Species } from "./types.js";
 import { validateSpeciesData } from "./validateSpeciesData.js";

@@ -108,7 +108,7 @@ export const speciesEntrySchema = z.strictObject({
   aliases: z.array(z.string().min(1)).optional(),
   cas: z.string().regex(/^\d{2,7}-\d{2}-\d$/).optional(),
   dataset: z.string().min(1).max(32).regex(/^[a-z0-9][a-z0-9._-]*$/).optional()
-    .describe("label of the data set this entry comes from, e.g. nist-janaf, gri30"),
+    .describe("label of the data set this entry comes from, e.g. nist-janaf, gri-mech-3.0"),
   alternative: z.boolean().optional()
     .describe("true: selectable only by its dataset, not the default for its key"),
   hf298KJPerMol: finite.describe("standard enthalpy of formation at 298.15 K, kJ/mol"),

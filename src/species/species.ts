@@ -13,7 +13,7 @@ import type { Library, LibraryGetOptions, Species } from "./types.js";
  *
  * @param key - species key, formula or name
  * @param library - where to look; the built-in library when omitted
- * @param options - `{ dataset }` to pick a data-set variant, e.g. `"gri30"`
+ * @param options - `{ dataset }` to pick a data-set variant, e.g. `"gri-mech-3.0"`
  * @returns the species
  * @throws RxthermError `UNKNOWN_SPECIES` (details `{ key, suggestions }`), `AMBIGUOUS_PHASE` (details
  *   `{ key, choices }`, e.g. `"H2O"` → `H2O(g)`, `H2O(l)`), `AMBIGUOUS_SPECIES` (isomers, e.g. `"C4H10"`)

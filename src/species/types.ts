@@ -37,7 +37,7 @@ export interface Species {
   entropy(T: number, P?: number, options?: RangeOptions): number;
   /** G(T, P) = H(T) − T·S(T, P), J/mol. */
   gibbs(T: number, P?: number, options?: RangeOptions): number;
-  /** Label of the data set the entry comes from (e.g. `"nist-janaf"`, `"gri30"`), when given. */
+  /** Label of the data set the entry comes from (e.g. `"nist-janaf"`, `"gri-mech-3.0"`), when given. */
   readonly dataset?: string;
   /** Other names the species is found by (lowercase lookups). */
   readonly aliases: readonly string[];
@@ -95,7 +95,7 @@ export interface SpeciesEvaluation {
  */
 export interface LibraryGetOptions {
   /**
-   * Data set to take the entry from (e.g. `"gri30"` for the GRI-Mech 3.0 polynomials) instead of
+   * Data set to take the entry from (e.g. `"gri-mech-3.0"` for the GRI-Mech 3.0 polynomials) instead of
    * the key's default entry.
    * @defaultValue undefined (the default entry)
    */

@@ -1,7 +1,7 @@
 import { RxthermError } from "../errors.js";
 import { createHeatCapacity } from "../heat-capacity/createHeatCapacity.js";
 import type { CpRange } from "../heat-capacity/types.js";
-import { readSpeciesFormula } from "../_internal/speciesFormula.js";
+import { readSpeciesFormula } from "./internal/speciesFormula.js";
 import { SOURCES } from "./citation.js";
 import { speciesDataSchema, speciesEntrySchema, type SpeciesData, type SpeciesEntry } from "./schema.js";
 

@@ -1,7 +1,7 @@
 /** Shared test helpers for the formula tests: error capture and formula-text generators. */
 import { fc } from "@fast-check/vitest";
 import Decimal from "decimal.js";
-import { ATOMIC_WEIGHTS } from "../../src/data/atomicWeights.js";
+import { ATOMIC_WEIGHTS } from "../../src/formula/atomicWeights.js";
 
 export { caught as errorOf } from "../_helpers/caught.js";
 

@@ -9,7 +9,7 @@ describe("builtInLibrary", () => {
   it("the @example: 73 species; methane by name; CH4 in two data sets, JANAF-based first", () => {
     expect(lib.keys().length).toBe(73);
     expect(lib.get("methane").key).toBe("CH4(g)");
-    expect(lib.datasets("CH4(g)")).toEqual(["nist-janaf", "gri30"]);
+    expect(lib.datasets("CH4(g)")).toEqual(["nist-janaf", "gri-mech-3.0"]);
   });
 
   it("holds at least 60 species, gases and condensed phases, water in both phases", () => {

@@ -42,7 +42,7 @@ describe("createLibrary", () => {
     expect(lib.get("CH4(g)").hf298).toBe(-70000);
     expect(lib.get("methane").hf298).toBe(-70000);
     expect(lib.get("CH4(g)", { dataset: "nist-janaf" }).hf298).toBe(-74873.1);
-    expect(lib.datasets("CH4(g)")).toEqual(["user", "gri30", "nist-janaf"]);
+    expect(lib.datasets("CH4(g)")).toEqual(["user", "gri-mech-3.0", "nist-janaf"]);
     // the built-in library itself is unchanged (libraries are immutable values)
     expect(builtInLibrary().get("CH4(g)").hf298).toBe(-74873.1);
     expect(species("CH4(g)").hf298).toBe(-74873.1);
@@ -112,7 +112,7 @@ describe("README species section", () => {
     expect(co2.enthalpy(1000).toFixed(1)).toBe("-360120.5");
     expect(co2.cp(1000).toFixed(2)).toBe("54.30"); // NIST-JANAF C-095 lists 54.308 J/(mol·K) at 1000 K (from memory)
     expect(co2.entropy(1000, 5e5).toFixed(2)).toBe("255.93");
-    expect(species("CH4", undefined, { dataset: "gri30" }).cp(1500).toFixed(2)).toBe("90.41");
+    expect(species("CH4", undefined, { dataset: "gri-mech-3.0" }).cp(1500).toFixed(2)).toBe("90.41");
     expect(species("CH4").cp(1500).toFixed(2)).toBe("86.68");
     const lib = createLibrary({
       sources: { "biogas-lab": "Biogas boiler commissioning report, table 3 (invented demo scenario)" },

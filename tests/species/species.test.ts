@@ -58,9 +58,9 @@ describe("species", () => {
 
   it("species(key, undefined, { dataset }) selects the GRI-Mech 3.0 variant; JANAF-based data are the default", () => {
     expect(species("CH4(g)").dataset).toBe("nist-janaf");
-    expect(species("CH4(g)", undefined, { dataset: "gri30" }).dataset).toBe("gri30");
-    expect(species("C3H8(g)").dataset).toBe("gri30"); // no Shomate set for propane: GRI-Mech is the default
-    const e = caught(() => species("CaO(cr)", undefined, { dataset: "gri30" }));
+    expect(species("CH4(g)", undefined, { dataset: "gri-mech-3.0" }).dataset).toBe("gri-mech-3.0");
+    expect(species("C3H8(g)").dataset).toBe("gri-mech-3.0"); // no Shomate set for propane: GRI-Mech is the default
+    const e = caught(() => species("CaO(cr)", undefined, { dataset: "gri-mech-3.0" }));
     expect(e.code).toBe("UNKNOWN_SPECIES");
     expect(e.details["datasets"]).toEqual(["memory"]);
   });
@@ -100,7 +100,7 @@ describe("Species methods against NIST-JANAF (4th ed. 1998, tests/fixtures/janaf
     for (const [name, table] of Object.entries(janaf.species)) {
       const key = KEY[name]!;
       const t = tol[key] ?? { cp: 0.005, h: 0.005, g: 0.003 };
-      const sp = species(key, undefined, { dataset: "gri30" });
+      const sp = species(key, undefined, { dataset: "gri-mech-3.0" });
       for (const r of table.rows) {
         if (r.T > sp.range[1]) continue;
         const dhKJ = (sp.enthalpy(r.T) - sp.enthalpy(298.15)) / 1000;
@@ -117,7 +117,7 @@ describe("Species methods against NIST-JANAF (4th ed. 1998, tests/fixtures/janaf
     // the 0.5 % bound is the GRI-Mech self-check of the reference data (unflagged species)
     for (const key of ["CO2(g)", "N2(g)", "O2(g)", "CO(g)", "H2(g)", "NO(g)"]) {
       const a = species(key);
-      const b = species(key, undefined, { dataset: "gri30" });
+      const b = species(key, undefined, { dataset: "gri-mech-3.0" });
       for (let T = 300; T <= 3000; T += 100) {
         expect(Math.abs(a.cp(T) / b.cp(T) - 1), `${key} ${T}`).toBeLessThan(0.005);
         const da = a.enthalpy(T) - a.enthalpy(298.15), db = b.enthalpy(T) - b.enthalpy(298.15);

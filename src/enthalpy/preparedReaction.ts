@@ -1,0 +1,123 @@
+/**
+ * Private: a reaction resolved once against a species library — net signed coefficients
+ * (products +, reactants −) as float and exact text, and the Species objects — cached so
+ * that repeated evaluations at many temperatures cost only a loop over the species.
+ *
+ * @module
+ * @internal
+ */
+import Decimal from "decimal.js";
+import { RxthermError } from "../errors.js";
+import type { Library, Species } from "../species/types.js";
+import type { Reaction } from "../reaction/types.js";
+import { rationalAdd, rationalFromDecimalString, rationalNeg, type Rational } from "../numeric/rational.js";
+import { reactionResiduals, resolveSpecies, toReaction } from "./resolveInputs.js";
+
+/** Private decimal constructor: 34 significant digits, round half even (never Decimal.set). */
+export const ExactDecimal = /* @__PURE__ */ Decimal.clone({ precision: 34, rounding: Decimal.ROUND_HALF_EVEN });
+
+/** A reaction resolved against a library. */
+export interface PreparedReaction {
+  readonly reaction: Reaction;
+  /** Species keys as written (net, each once). */
+  readonly keys: readonly string[];
+  readonly species: readonly Species[];
+  /** Net signed coefficients, products positive. */
+  readonly nu: Float64Array;
+  /** The same as exact rationals. */
+  readonly nuExact: readonly Rational[];
+}
+
+const DEFAULT_LIBRARY = {};
+const parsedText = new Map<string, Reaction>();
+const PARSED_TEXT_LIMIT = 512;
+const prepared = new WeakMap<object, WeakMap<Reaction, PreparedReaction>>();
+
+/**
+ * Resolve (or fetch from the cache) a reaction against a library. Throws UNBALANCED_REACTION
+ * with the residuals when the reaction does not balance (elements and charge).
+ */
+export function prepareReaction(fn: string, input: Reaction | string, library: Library | undefined): PreparedReaction {
+  let reaction: Reaction;
+  if (typeof input === "string") {
+    const hit = parsedText.get(input);
+    if (hit) reaction = hit;
+    else {
+      reaction = toReaction(fn, input);
+      if (parsedText.size >= PARSED_TEXT_LIMIT) parsedText.clear();
+      parsedText.set(input, reaction);
+    }
+  } else reaction = toReaction(fn, input);
+  const libKey: object = library ?? DEFAULT_LIBRARY;
+  let perLib = prepared.get(libKey);
+  if (!perLib) {
+    perLib = new WeakMap();
+    prepared.set(libKey, perLib);
+  }
+  const hit = perLib.get(reaction);
+  if (hit) return hit;
+  const p = build(fn, reaction, library);
+  perLib.set(reaction, p);
+  return p;
+}
+
+function build(fn: string, reaction: Reaction, library: Library | undefined): PreparedReaction {
+  const { residuals, charge } = reactionResiduals(reaction);
+  if (Object.keys(residuals).length > 0 || charge !== 0) {
+    throw new RxthermError(
+      "UNBALANCED_REACTION",
+      `${fn} requires a balanced reaction; products − reactants leave ${Object.entries(residuals).map(([e, v]) => `${e} ${v}`).join(", ") || "no element"}${charge !== 0 ? ` and charge ${charge}` : ""}`,
+      { residuals, charge },
+    );
+  }
+  const order: string[] = [];
+  const net = new Map<string, Rational>();
+  const add = (key: string, r: Rational): void => {
+    const prev = net.get(key);
+    if (prev === undefined) order.push(key);
+    net.set(key, prev === undefined ? r : rationalAdd(prev, r));
+  };
+  for (const t of reaction.reactants) add(t.species, rationalNeg(termRational(t)));
+  for (const t of reaction.products) add(t.species, termRational(t));
+  const keys = order.filter((k) => (net.get(k) as Rational).num !== 0n);
+  const nuExact = keys.map((k) => net.get(k) as Rational);
+  const nu = Float64Array.from(nuExact, (r) => Number(r.num) / Number(r.den));
+  const species = keys.map((k) => resolveSpecies(fn, k, library));
+  return Object.freeze({ reaction, keys: Object.freeze(keys), species: Object.freeze(species), nu, nuExact: Object.freeze(nuExact) });
+}
+
+function termRational(t: Reaction["reactants"][number]): Rational {
+  const text = typeof t.exact === "string" && t.exact !== "" ? t.exact : String(t.coefficient);
+  return rationalFromDecimalString(text);
+}
+
+/** Exact Σ ν·x for decimal texts x (J/mol), as a Decimal (one final rounded division). */
+export function exactWeightedSum(nuExact: readonly Rational[], values: readonly string[]): Decimal {
+  // Σ (p/q)·h = (Σ p·(L/q)·h) / L with L the lcm of the denominators: only the last step rounds.
+  let lcm = 1n;
+  for (const r of nuExact) lcm = (lcm / gcd(lcm, r.den)) * r.den;
+  let sum = new ExactDecimal(0);
+  for (let i = 0; i < nuExact.length; i++) {
+    const r = nuExact[i] as Rational;
+    const factor = (r.num * (lcm / r.den)).toString();
+    sum = sum.plus(new ExactDecimal(values[i] as string).times(factor));
+  }
+  return lcm === 1n ? sum : sum.div(lcm.toString());
+}
+
+function gcd(a: bigint, b: bigint): bigint {
+  while (b !== 0n) [a, b] = [b, a % b];
+  return a < 0n ? -a : a;
+}
+
+const standardSums = new WeakMap<PreparedReaction, Decimal>();
+
+/** Exact Σ ν·ΔfH°(298.15 K) of a prepared reaction in J/mol, computed once and cached. */
+export function standardEnthalpyExact(p: PreparedReaction): Decimal {
+  let sum = standardSums.get(p);
+  if (sum === undefined) {
+    sum = exactWeightedSum(p.nuExact, p.species.map((s) => s.hf298Exact));
+    standardSums.set(p, sum);
+  }
+  return sum;
+}

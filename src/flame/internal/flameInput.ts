@@ -1,0 +1,138 @@
+/**
+ * Private: input checking shared by the flame functions — solver limits, the equivalence ratio
+ * from φ or excess air, the prepared flame problem and the public result of a solved point.
+ *
+ * @module
+ * @internal
+ */
+import { RxthermError } from "../../errors.js";
+import { ATMOSPHERE_PA, STANDARD_TEMPERATURE_K } from "../../units.js";
+import { AIR_21_79 } from "../../extent/combustion.js";
+import type { EngineLimits } from "./equilibriumEngine.js";
+import { prepareFlame, type FlamePoint, type FlamePointResult, type FlameSetup } from "./flameProblem.js";
+import { DEFAULT_FLAME_PRODUCTS } from "../flameDefaults.js";
+import type { AdiabaticFlameInput, AdiabaticFlameOptions, AdiabaticFlameResult } from "../types.js";
+
+/** Resolve and check the solver settings. */
+export function resolveLimits(
+  fn: string,
+  options: { maxIterations?: number; elementTolerance?: number; toleranceK?: number; extrapolate?: boolean },
+): EngineLimits {
+  const maxIterations = options.maxIterations ?? 300;
+  const elementTolerance = options.elementTolerance ?? 1e-12;
+  const toleranceK = options.toleranceK ?? 1e-6;
+  if (!Number.isInteger(maxIterations) || maxIterations < 1) {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires maxIterations to be a positive integer, got ${String(maxIterations)}`, { maxIterations });
+  }
+  if (!(elementTolerance > 0) || !Number.isFinite(elementTolerance)) {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires elementTolerance > 0, got ${String(elementTolerance)}`, { elementTolerance });
+  }
+  if (!(toleranceK > 0) || !Number.isFinite(toleranceK)) {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires toleranceK > 0, got ${String(toleranceK)}`, { toleranceK });
+  }
+  return { maxIterations, elementTolerance, toleranceK, extrapolate: options.extrapolate === true };
+}
+
+/** Validate an input, prepare the problem and the first point. */
+export function prepareFlameInput(fn: string, input: AdiabaticFlameInput, options: AdiabaticFlameOptions): { setup: FlameSetup; point: FlamePoint } {
+  if (input === null || typeof input !== "object") {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object`, { input });
+  }
+  const lim = resolveLimits(fn, options);
+  const mode = input.mode ?? "equilibrium";
+  if (mode !== "complete" && mode !== "equilibrium") {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires mode "complete" or "equilibrium", got ${String(mode)}`, { mode });
+  }
+  const process = input.process ?? "constant-pressure";
+  if (process !== "constant-pressure" && process !== "constant-volume") {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires process "constant-pressure" or "constant-volume", got ${String(process)}`, { process });
+  }
+  const point = flamePointOf(fn, input);
+  const products = input.products ?? DEFAULT_FLAME_PRODUCTS;
+  if (!Array.isArray(products) || products.length === 0) {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires products to be a non-empty list of species keys`, { products });
+  }
+  const setup = prepareFlame({
+    fn,
+    fuel: input.fuel,
+    oxidizer: input.oxidizer ?? "air",
+    air: AIR_21_79,
+    diluent: input.diluent,
+    mode,
+    constantVolume: process === "constant-volume",
+    products,
+    library: input.library,
+    lim,
+  });
+  return { setup, point };
+}
+
+/** The settings of one point (φ, stream temperatures, pressure), checked. */
+export function flamePointOf(fn: string, input: AdiabaticFlameInput): FlamePoint {
+  const phi = equivalenceRatioOf(fn, input.equivalenceRatio, input.excessAir);
+  const T = positive(fn, "T", input.T ?? STANDARD_TEMPERATURE_K);
+  const fuelT = positive(fn, "fuelT", input.fuelT ?? T);
+  const oxidizerT = positive(fn, "oxidizerT", input.oxidizerT ?? T);
+  const diluentT = positive(fn, "diluentT", input.diluentT ?? oxidizerT);
+  const P = positive(fn, "P", input.P ?? ATMOSPHERE_PA);
+  return { phi, fuelT, oxidizerT, diluentT, P };
+}
+
+/** Public result of one solved point. */
+export function toFlameResult(setup: FlameSetup, point: FlamePoint, r: FlamePointResult): AdiabaticFlameResult {
+  let gas = 0;
+  for (const [k, n] of Object.entries(r.moles)) if (!(k in r.condensed)) gas += n;
+  const products: Record<string, number> = {};
+  for (const [k, n] of Object.entries(r.moles)) if (!(k in r.condensed) && !isCondensedKey(setup, k)) products[k] = n / gas;
+  return {
+    T: r.T,
+    P: r.P,
+    products,
+    moles: r.moles,
+    condensed: r.condensed,
+    oxidizer: r.oxidizerMoles,
+    equivalenceRatio: point.phi,
+    theoreticalO2: setup.theoreticalO2,
+    mode: setup.mode,
+    process: setup.constantVolume ? "constant-volume" : "constant-pressure",
+    reactantEnergy: r.reactantEnergy,
+    residual: r.residual,
+    relativeResidual: r.relativeResidual,
+    iterations: r.iterations,
+    equilibriumIterations: r.equilibriumIterations,
+    elementResidual: r.elementResidual,
+    extrapolated: r.extrapolated,
+  };
+}
+
+function isCondensedKey(setup: FlameSetup, key: string): boolean {
+  const e = setup.engine;
+  if (e === null || setup.mode !== "equilibrium") return false;
+  const j = e.keys.indexOf(key);
+  return j >= 0 && e.problem.gas[j] === 0;
+}
+
+/** φ from the equivalence ratio or the excess air (exactly one, or neither → 1). */
+export function equivalenceRatioOf(fn: string, equivalenceRatio: number | undefined, excessAir: number | undefined): number {
+  if (equivalenceRatio !== undefined && excessAir !== undefined) {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} takes either equivalenceRatio or excessAir, not both`, { equivalenceRatio, excessAir });
+  }
+  if (excessAir !== undefined) {
+    if (typeof excessAir !== "number" || !Number.isFinite(excessAir) || !(excessAir > -1)) {
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires excessAir > −1 (a fraction: 0.2 = 20 % excess), got ${String(excessAir)}`, { excessAir });
+    }
+    return 1 / (1 + excessAir);
+  }
+  const phi = equivalenceRatio ?? 1;
+  if (typeof phi !== "number" || !Number.isFinite(phi) || !(phi > 0)) {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires equivalenceRatio > 0, got ${String(phi)}`, { equivalenceRatio: phi });
+  }
+  return phi;
+}
+
+function positive(fn: string, name: string, v: number): number {
+  if (typeof v !== "number" || !Number.isFinite(v) || !(v > 0)) {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${name} > 0, got ${String(v)}`, { [name]: v });
+  }
+  return v;
+}

@@ -1,0 +1,131 @@
+/**
+ * Private helpers shared by the reaction functions: exact element counts, element matrices,
+ * Term construction and equation text.
+ */
+import type { Formula } from "../../formula/types.js";
+import type { Reaction, Term } from "../types.js";
+import {
+  lcmBigInt,
+  rationalFromDecimalString,
+  rationalFromNumber,
+  rationalToNumber,
+  rationalToString,
+  type Rational,
+} from "../../numeric/rational.js";
+
+/** Pseudo-element name used for the charge row of an element matrix. */
+export const CHARGE_ROW = "charge";
+
+/** A species with its parsed formula (no coefficient). */
+export interface SpeciesEntry {
+  readonly species: string;
+  readonly formula: Formula;
+}
+
+/** Element symbols in order of first appearance over the given formulas. */
+export function elementOrder(formulas: readonly Formula[]): string[] {
+  const seen = new Set<string>();
+  for (const f of formulas) for (const el of Object.keys(f.elements)) seen.add(el);
+  return [...seen];
+}
+
+/** An element count or charge as an exact rational, read from its shortest decimal text. */
+export function exactCount(n: number): Rational {
+  return rationalFromNumber(n);
+}
+
+/**
+ * Integer element matrix: one row per element (plus a charge row when any species is charged,
+ * or when `forceCharge`), one column per formula, each entry multiplied by `signs[j]`
+ * (default +1). Rows with decimal counts are scaled by the lcm of their denominators, which
+ * does not change the solutions of `row · x = 0`.
+ */
+export function integerElementMatrix(
+  formulas: readonly Formula[],
+  signs?: readonly number[],
+): { rows: bigint[][]; rowNames: string[] } {
+  const elements = elementOrder(formulas);
+  const charged = formulas.some((f) => f.charge !== 0);
+  const rowNames = charged ? [...elements, CHARGE_ROW] : elements;
+  const rows = rowNames.map((name) => {
+    const rs = formulas.map((f, j) => {
+      const v = name === CHARGE_ROW ? f.charge : (f.elements[name] ?? 0);
+      const r = exactCount(v);
+      return (signs?.[j] ?? 1) < 0 ? { num: -r.num, den: r.den } : r;
+    });
+    let l = 1n;
+    for (const r of rs) if (r.den !== 1n) l = lcmBigInt(l, r.den);
+    return rs.map((r) => (r.num * l) / r.den);
+  });
+  return { rows, rowNames };
+}
+
+/**
+ * The signed element matrix in float64 integers when every count and charge is an integer of
+ * magnitude below 2^31 (the common case); null otherwise.
+ */
+export function numberElementMatrix(formulas: readonly Formula[], signs?: readonly number[]): { rows: number[][]; rowNames: string[] } | null {
+  const elements = elementOrder(formulas);
+  const charged = formulas.some((f) => f.charge !== 0);
+  const rowNames = charged ? [...elements, CHARGE_ROW] : elements;
+  const rows: number[][] = [];
+  for (const name of rowNames) {
+    const row: number[] = [];
+    for (let j = 0; j < formulas.length; j++) {
+      const f = formulas[j] as Formula;
+      const v = name === CHARGE_ROW ? f.charge : (f.elements[name] ?? 0);
+      if (!Number.isInteger(v) || Math.abs(v) >= 2 ** 31) return null;
+      row.push((signs?.[j] ?? 1) < 0 ? -v || 0 : v);
+    }
+    rows.push(row);
+  }
+  return { rows, rowNames };
+}
+
+/** A frozen Term with a positive safe-integer coefficient (fast path of {@link makeTerm}). */
+export function makeIntegerTerm(entry: SpeciesEntry, coefficient: number): Term {
+  return Object.freeze({ species: entry.species, formula: entry.formula, coefficient, exact: String(coefficient) });
+}
+
+/** Build a frozen Term from a species, its formula and an exact positive coefficient. */
+export function makeTerm(entry: SpeciesEntry, coefficient: Rational): Term {
+  return Object.freeze({
+    species: entry.species,
+    formula: entry.formula,
+    coefficient: rationalToNumber(coefficient),
+    exact: rationalToString(coefficient),
+  });
+}
+
+/** The exact coefficient of a term: its `exact` text when present, else its number. */
+export function termCoefficient(term: Term): Rational {
+  if (typeof term.exact === "string" && term.exact !== "") return rationalFromDecimalString(term.exact);
+  return rationalFromNumber(term.coefficient);
+}
+
+/** Frozen Reaction from term lists. */
+export function makeReaction(reactants: Term[], products: Term[]): Reaction {
+  return Object.freeze({ reactants: Object.freeze(reactants), products: Object.freeze(products) });
+}
+
+/** Equation text `a A + b B -> c C` (coefficient 1 omitted, fractions as `13/2`). */
+export function equationText(reaction: Reaction, arrow = "->"): string {
+  const side = (terms: readonly Term[]) =>
+    terms.map((t) => (t.exact === "1" ? t.species : `${t.exact} ${t.species}`)).join(" + ");
+  return `${side(reaction.reactants)} ${arrow} ${side(reaction.products)}`;
+}
+
+/**
+ * A reaction from a signed integer vector over species: negative entries become reactants,
+ * positive entries products, zeros are left out (species order kept on each side).
+ */
+export function reactionFromSigned(entries: readonly SpeciesEntry[], v: readonly bigint[]): Reaction {
+  const reactants: Term[] = [];
+  const products: Term[] = [];
+  entries.forEach((e, j) => {
+    const x = v[j] ?? 0n;
+    if (x < 0n) reactants.push(makeTerm(e, { num: -x, den: 1n }));
+    else if (x > 0n) products.push(makeTerm(e, { num: x, den: 1n }));
+  });
+  return makeReaction(reactants, products);
+}
