@@ -214,4 +214,24 @@ describe("adiabaticFlameTemperature", () => {
     expect(r.T).toBeGreaterThan(3500);
     expect(r.extrapolated).toBe(true);
   });
+
+  it("adiabaticFlameTemperature reads a fuel object edited in place afresh (the reactant cache is keyed by content)", () => {
+    const fuel: Record<string, number> = { "CH4(g)": 1 };
+    const methane = adiabaticFlameTemperature({ fuel, mode: "complete" }).T;
+    fuel["CH4(g)"] = 0;
+    fuel["H2(g)"] = 1;
+    const hydrogen = adiabaticFlameTemperature({ fuel, mode: "complete" }).T;
+    // a fresh object of the same content gives the same answer as the edited one
+    expect(hydrogen).toBe(adiabaticFlameTemperature({ fuel: { "H2(g)": 1 }, mode: "complete" }).T);
+    expect(methane).toBe(adiabaticFlameTemperature({ fuel: { "CH4(g)": 1 }, mode: "complete" }).T);
+    // H2–air burns hotter than CH4–air at φ = 1 (common practice: about 2380 K against 2230 K)
+    expect(hydrogen - methane).toBeGreaterThan(100);
+  });
+
+  it("adiabaticFlameTemperature gives the same result on a repeated call as on the first (cached reactants)", () => {
+    const input = { fuel: { "CH4(g)": 0.9, "C2H6(g)": 0.06, "N2(g)": 0.04 }, excessAir: 0.15, T: 320, mode: "complete" } as const;
+    const first = adiabaticFlameTemperature(input);
+    const second = adiabaticFlameTemperature(input);
+    expect(second).toEqual(first);
+  });
 });

@@ -81,9 +81,14 @@ export function flamePointOf(fn: string, input: AdiabaticFlameInput): FlamePoint
 /** Public result of one solved point. */
 export function toFlameResult(setup: FlameSetup, point: FlamePoint, r: FlamePointResult): AdiabaticFlameResult {
   let gas = 0;
-  for (const [k, n] of Object.entries(r.moles)) if (!(k in r.condensed)) gas += n;
+  const keys = Object.keys(r.moles);
+  for (let i = 0; i < keys.length; i++) if (!(keys[i]! in r.condensed)) gas += r.moles[keys[i]!]!;
   const products: Record<string, number> = {};
-  for (const [k, n] of Object.entries(r.moles)) if (!(k in r.condensed) && !isCondensedKey(setup, k)) products[k] = n / gas;
+  const checkPhase = setup.mode === "equilibrium" && setup.engine !== null;
+  for (let i = 0; i < keys.length; i++) {
+    const k = keys[i]!;
+    if (!(k in r.condensed) && !(checkPhase && isCondensedKey(setup, k))) products[k] = r.moles[k]! / gas;
+  }
   return {
     T: r.T,
     P: r.P,

@@ -28,6 +28,7 @@ const R = GAS_CONSTANT_J_PER_MOL_K;
 
 /** Noble gases: inert, carried through as monatomic gases. */
 const NOBLE = ["He", "Ne", "Ar", "Kr", "Xe"];
+const NOBLE_KEYS = NOBLE.map((g) => `${g}(g)`);
 /** Elements the complete-combustion model knows. */
 const COMPLETE_ELEMENTS = new Set(["C", "H", "O", "N", "S", ...NOBLE]);
 
@@ -65,8 +66,10 @@ export interface FlameSetup {
   readonly o2PerOxidizerUnit: number;
   /** Equilibrium product keys (equilibrium mode). */
   readonly productKeys: readonly string[];
+  /** The resolved reactants (shared between setups of the same content). */
+  readonly reactants: Reactants;
   readonly lim: EngineLimits;
-  /** Lazily resolved species of the complete-combustion products. */
+  /** Lazily resolved species of the products (shared with every setup of these reactants). */
   readonly cache: Map<string, Species>;
   engine: Engine | null;
   lastT: number;
@@ -135,7 +138,131 @@ export function oxygenDemand(members: readonly Member[]): { demand: number; comb
   return { demand: c + h / 4 + s - o / 2, combustible: c > 0 || h > 0 || s > 0 };
 }
 
-/** Build a flame setup (resolves every species once). */
+/** Fuel, oxidizer and diluent resolved and checked: what a flame setup keeps between calls. */
+interface Reactants {
+  readonly fuel: readonly Member[];
+  readonly oxidizer: readonly Member[];
+  readonly diluent: readonly Member[];
+  readonly theoreticalO2: number;
+  readonly o2PerOxidizerUnit: number;
+  /** Elements present in any of the three streams, and their totals per stream (oxidizer: per unit). */
+  readonly elements: readonly string[];
+  readonly fuelElements: Float64Array;
+  readonly oxidizerElements: Float64Array;
+  readonly diluentElements: Float64Array;
+  /** Species of the products, resolved on first use (shared by every setup of these reactants). */
+  readonly products: Map<string, Species>;
+}
+
+/** Largest number of distinct reactant sets kept per library. */
+const REACTANT_CACHE_SIZE = 64;
+/** Reactant sets resolved from the built-in library, by content. */
+const builtInReactants = new Map<string, Reactants>();
+/** Reactant sets resolved from a caller's library, by library and content. */
+const libraryReactants = new WeakMap<Library, Map<string, Reactants>>();
+
+/** Content keys of frozen streams (they cannot change, so identity is enough). */
+const frozenKeys = new WeakMap<object, string>();
+
+/** Content key of a stream (a species key or an object of amounts); null when it is not cacheable. */
+function streamKey(flows: string | Flows | undefined): string | null {
+  if (flows === undefined) return "";
+  if (typeof flows === "string") return "s" + flows;
+  if (flows === null || typeof flows !== "object") return null;
+  const frozen = Object.isFrozen(flows);
+  if (frozen) {
+    const known = frozenKeys.get(flows);
+    if (known !== undefined) return known;
+  }
+  const k = flowsKey(flows);
+  if (frozen && k !== null) frozenKeys.set(flows, k);
+  return k;
+}
+
+function flowsKey(flows: Flows): string | null {
+  let k = "o";
+  const keys = Object.keys(flows);
+  for (let i = 0; i < keys.length; i++) {
+    const n = flows[keys[i]!];
+    if (typeof n !== "number") return null;
+    k += keys[i]! + "\u0001" + n + "\u0001";
+  }
+  return k;
+}
+
+/**
+ * Resolve the reactant streams once per distinct content (a small per-library cache keyed by the
+ * streams' text and amounts, so an input object edited in place is read afresh; errors are not
+ * cached). The species keys are parsed and looked up only on the first call with these streams.
+ */
+function reactantsOf(fn: string, fuelIn: string | Flows, oxFlows: Flows, diluentIn: Flows | undefined, library: Library | undefined): Reactants {
+  const kf = streamKey(fuelIn);
+  const ko = streamKey(oxFlows);
+  const kd = streamKey(diluentIn);
+  const cacheable = kf !== null && ko !== null && kd !== null && (library === undefined || typeof library === "object");
+  let map: Map<string, Reactants> | undefined;
+  let key = "";
+  if (cacheable) {
+    key = kf + "\u0002" + ko + "\u0002" + kd;
+    if (library === undefined) map = builtInReactants;
+    else {
+      map = libraryReactants.get(library);
+      if (map === undefined) {
+        map = new Map();
+        libraryReactants.set(library, map);
+      }
+    }
+    const hit = map.get(key);
+    if (hit !== undefined) return hit;
+  }
+  const r = resolveReactants(fn, fuelIn, oxFlows, diluentIn, library);
+  if (map !== undefined) {
+    if (map.size >= REACTANT_CACHE_SIZE) map.delete(map.keys().next().value as string);
+    map.set(key, r);
+  }
+  return r;
+}
+
+function resolveReactants(fn: string, fuelIn: string | Flows, oxFlows: Flows, diluentIn: Flows | undefined, library: Library | undefined): Reactants {
+  const fuel = resolveMembers(fn, "fuel", fuelIn, library);
+  if (fuel.length === 0) {
+    throw new RxthermError("NOTHING_TO_BURN", `${fn} requires a fuel with a positive amount of some species`, { fuel: fuelIn });
+  }
+  const fuelDemand = oxygenDemand(fuel);
+  if (!fuelDemand.combustible || !(fuelDemand.demand > 0)) {
+    throw new RxthermError(
+      "NOTHING_TO_BURN",
+      `${fn} requires a fuel with something to oxidise (C, H or S beyond its own oxygen); theoretical O2 is ${fuelDemand.demand} mol`,
+      { fuel: fuelIn, theoreticalO2: fuelDemand.demand },
+    );
+  }
+  const oxidizer = resolveMembers(fn, "oxidizer", oxFlows, library);
+  const oxDemand = oxygenDemand(oxidizer).demand;
+  if (!(oxDemand < 0)) {
+    throw new RxthermError("NO_OXIDIZER", `${fn} requires an oxidizer that carries free oxygen; this one supplies ${-oxDemand} mol O2 per unit`, { oxidizer: oxFlows });
+  }
+  const diluent = diluentIn === undefined ? [] : resolveMembers(fn, "diluent", diluentIn, library);
+  const fe = new Map<string, number>();
+  const oe = new Map<string, number>();
+  const de = new Map<string, number>();
+  addElements(fe, fuel, 1);
+  addElements(oe, oxidizer, 1);
+  addElements(de, diluent, 1);
+  const elements = [...new Set([...fe.keys(), ...oe.keys(), ...de.keys()])];
+  const vec = (m: Map<string, number>): Float64Array => Float64Array.from(elements, (el) => m.get(el) ?? 0);
+  return {
+    fuel, oxidizer, diluent,
+    theoreticalO2: fuelDemand.demand,
+    o2PerOxidizerUnit: -oxDemand,
+    elements,
+    fuelElements: vec(fe),
+    oxidizerElements: vec(oe),
+    diluentElements: vec(de),
+    products: new Map(),
+  };
+}
+
+/** Build a flame setup (species resolved once per distinct reactant content, see reactantsOf). */
 export function prepareFlame(args: {
   fn: string;
   fuel: string | Flows;
@@ -149,46 +276,26 @@ export function prepareFlame(args: {
   lim: EngineLimits;
 }): FlameSetup {
   const { fn, library } = args;
-  const fuel = resolveMembers(fn, "fuel", args.fuel, library);
-  if (fuel.length === 0) {
-    throw new RxthermError("NOTHING_TO_BURN", `${fn} requires a fuel with a positive amount of some species`, { fuel: args.fuel });
-  }
-  const fuelDemand = oxygenDemand(fuel);
-  if (!fuelDemand.combustible || !(fuelDemand.demand > 0)) {
-    throw new RxthermError(
-      "NOTHING_TO_BURN",
-      `${fn} requires a fuel with something to oxidise (C, H or S beyond its own oxygen); theoretical O2 is ${fuelDemand.demand} mol`,
-      { fuel: args.fuel, theoreticalO2: fuelDemand.demand },
-    );
-  }
-  const oxFlows: Flows | string = args.oxidizer === "air" ? args.air : args.oxidizer === "oxygen" ? { "O2(g)": 1 } : args.oxidizer;
+  const oxFlows: Flows | string = args.oxidizer === "air" ? args.air : args.oxidizer === "oxygen" ? OXYGEN : args.oxidizer;
   if (typeof oxFlows === "string") {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires oxidizer "air", "oxygen" or an object of amounts, got "${oxFlows}"`, { oxidizer: oxFlows });
   }
-  const oxidizer = resolveMembers(fn, "oxidizer", oxFlows, library);
-  const oxDemand = oxygenDemand(oxidizer).demand;
-  if (!(oxDemand < 0)) {
-    throw new RxthermError("NO_OXIDIZER", `${fn} requires an oxidizer that carries free oxygen; this one supplies ${-oxDemand} mol O2 per unit`, { oxidizer: oxFlows });
-  }
-  const diluent = args.diluent === undefined ? [] : resolveMembers(fn, "diluent", args.diluent, library);
+  const r = reactantsOf(fn, args.fuel, oxFlows, args.diluent, library);
   const setup: FlameSetup = {
     fn, library, mode: args.mode, constantVolume: args.constantVolume,
-    fuel, oxidizer, diluent,
-    theoreticalO2: fuelDemand.demand,
-    o2PerOxidizerUnit: -oxDemand,
+    fuel: r.fuel, oxidizer: r.oxidizer, diluent: r.diluent,
+    theoreticalO2: r.theoreticalO2,
+    o2PerOxidizerUnit: r.o2PerOxidizerUnit,
+    reactants: r,
     productKeys: args.products,
     lim: args.lim,
-    cache: new Map(),
+    cache: r.products,
     engine: null,
     lastT: Number.NaN,
     lastCompleteT: Number.NaN,
   };
   if (args.mode === "complete") {
-    const els = new Map<string, number>();
-    addElements(els, fuel, 1);
-    addElements(els, oxidizer, 1);
-    addElements(els, diluent, 1);
-    for (const el of els.keys()) {
+    for (const el of r.elements) {
       if (!COMPLETE_ELEMENTS.has(el)) {
         throw new RxthermError(
           "ELEMENTS_NOT_COVERED",
@@ -200,6 +307,8 @@ export function prepareFlame(args: {
   }
   return setup;
 }
+
+const OXYGEN: Flows = Object.freeze({ "O2(g)": 1 });
 
 /** Oxidizer units for an equivalence ratio. */
 function oxidizerUnits(s: FlameSetup, phi: number): number {
@@ -219,9 +328,10 @@ export function solveFlamePoint(s: FlameSetup, pt: FlamePoint): FlamePointResult
   const volume = acc.nRT / pt.P;
   const target = s.constantVolume ? acc.H - acc.nRT : acc.H;
   const els = new Map<string, number>();
-  addElements(els, s.fuel, 1);
-  addElements(els, s.oxidizer, units);
-  addElements(els, s.diluent, 1);
+  const rx = s.reactants;
+  for (let i = 0; i < rx.elements.length; i++) {
+    els.set(rx.elements[i]!, rx.fuelElements[i]! + units * rx.oxidizerElements[i]! + rx.diluentElements[i]!);
+  }
   const oxidizerMoles: Record<string, number> = {};
   for (const m of s.oxidizer) oxidizerMoles[m.key] = (oxidizerMoles[m.key] ?? 0) + m.n * units;
 
@@ -432,22 +542,17 @@ class CompleteBalance {
         { equivalenceRatio: pt.phi, oxygen: oFree, carbon: C },
       );
     }
-    const add = (key: string, n: number): void => {
-      this.keys.push(key);
-      this.amounts.push(n);
-      this.species.push(cached(s, key));
-    };
-    if (N > 0) add("N2(g)", N / 2);
-    if (S > 0) add("SO2(g)", S);
-    for (const g of NOBLE) {
-      const n = els.get(g) ?? 0;
-      if (n > 0) add(`${g}(g)`, n);
+    if (N > 0) this.add(s, "N2(g)", N / 2);
+    if (S > 0) this.add(s, "SO2(g)", S);
+    for (let i = 0; i < NOBLE.length; i++) {
+      const n = els.get(NOBLE[i]!) ?? 0;
+      if (n > 0) this.add(s, NOBLE_KEYS[i]!, n);
     }
     if (!this.rich) {
-      if (C > 0) add("CO2(g)", C);
-      if (H > 0) add("H2O(g)", H / 2);
+      if (C > 0) this.add(s, "CO2(g)", C);
+      if (H > 0) this.add(s, "H2O(g)", H / 2);
       const o2 = (oFree - 2 * C - H / 2) / 2;
-      if (o2 > 0) add("O2(g)", o2);
+      if (o2 > 0) this.add(s, "O2(g)", o2);
     } else {
       if (C > 0) {
         this.shift[0] = cached(s, "CO2(g)");
@@ -460,14 +565,21 @@ class CompleteBalance {
     }
     let lo = -Infinity;
     let hi = Infinity;
-    for (const sp of [...this.species, ...this.shift]) {
+    for (let k = 0; k < this.species.length + 4; k++) {
+      const sp = k < this.species.length ? this.species[k]! : this.shift[k - this.species.length]!;
       if (sp === null) continue;
-      lo = Math.max(lo, sp.range[0]);
-      hi = Math.min(hi, sp.range[1]);
+      if (sp.range[0] > lo) lo = sp.range[0];
+      if (sp.range[1] < hi) hi = sp.range[1];
     }
     this.range = [lo, hi];
     this.limits = s.lim.extrapolate ? [Math.min(lo, 200), Math.max(hi, 6000)] : [lo, hi];
     this.opts = s.lim.extrapolate ? EXTRAPOLATE : STRICT;
+  }
+
+  private add(s: FlameSetup, key: string, n: number): void {
+    this.keys.push(key);
+    this.amounts.push(n);
+    this.species.push(cached(s, key));
   }
 
   /** Energy of the products at T minus the target (J) and its slope (J/K, composition frozen). */
