@@ -94,6 +94,62 @@ export function integerNullSpaceNumber(rows: readonly (readonly number[])[], piv
   return out;
 }
 
+/** One null-space vector held sparsely: its non-zero columns (ascending) and their values. */
+export interface SparseIntegerVector {
+  readonly columns: number[];
+  readonly values: number[];
+}
+
+/**
+ * Sparse float64-integer version of {@link integerNullSpaceNumber}: the vector of free column f
+ * is non-zero only at f and at the pivot columns of rows with a non-zero entry in column f, so
+ * each vector costs O(rank) instead of O(cols) and a whole basis is linear in the column count
+ * for a fixed number of rows. Null when a value would leave the safe-integer range.
+ */
+export function integerNullSpaceSparseNumber(rows: readonly (readonly number[])[], pivots: readonly number[], cols: number): SparseIntegerVector[] | null {
+  const out: SparseIntegerVector[] = [];
+  const free = complement(pivots, cols);
+  for (let q = 0; q < free.length; q++) {
+    const f = free[q]!;
+    let l = 1;
+    for (let r = 0; r < pivots.length; r++) {
+      if (rows[r]![f] !== 0) {
+        const d = rows[r]![pivots[r]!]!;
+        l = (l / gcdNum(l, d)) * d;
+        if (!Number.isSafeInteger(l)) return null;
+      }
+    }
+    const columns: number[] = [];
+    const values: number[] = [];
+    let placed = false;
+    let g = 0;
+    for (let r = 0; r < pivots.length; r++) {
+      const pc = pivots[r]!;
+      if (!placed && f < pc) {
+        columns.push(f);
+        values.push(l);
+        g = gcdNum(g, l);
+        placed = true;
+      }
+      const a = rows[r]![f]!;
+      if (a === 0) continue;
+      const v = (-a * l) / rows[r]![pc]!;
+      if (!Number.isSafeInteger(v)) return null;
+      columns.push(pc);
+      values.push(v);
+      g = gcdNum(g, v);
+    }
+    if (!placed) {
+      columns.push(f);
+      values.push(l);
+      g = gcdNum(g, l);
+    }
+    if (g > 1) for (let k = 0; k < values.length; k++) values[k] = values[k]! / g;
+    out.push({ columns, values });
+  }
+  return out;
+}
+
 /** Columns 0..cols-1 that are not pivots, ascending. */
 export function complement(pivots: readonly number[], cols: number): number[] {
   const isPivot = new Array<boolean>(cols).fill(false);

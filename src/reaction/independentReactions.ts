@@ -5,9 +5,9 @@ import {
   integerGaussJordan,
   integerGaussJordanNumber,
   integerNullSpaceFromEchelon,
-  integerNullSpaceNumber,
+  integerNullSpaceSparseNumber,
 } from "../numeric/integerElimination.js";
-import { integerElementMatrix, numberElementMatrix, reactionFromSigned, type SpeciesEntry } from "./internal/reactionTerms.js";
+import { integerElementMatrix, numberElementMatrix, reactionFromSigned, reactionFromSparse, type SpeciesEntry } from "./internal/reactionTerms.js";
 import type { Reaction } from "./types.js";
 
 /**
@@ -65,11 +65,12 @@ export function independentReactions(species: readonly string[]): Reaction[] {
   });
   const n = entries.length;
   const formulas = entries.map((e) => e.formula);
-  // fast path: integer counts, exact float64-integer elimination (overflow-checked)
+  // fast path: integer counts, exact float64-integer elimination (overflow-checked), sparse
+  // basis vectors (each touches only the pivot columns and its own species: linear in n)
   const small = numberElementMatrix(formulas);
   const echSmall = small ? integerGaussJordanNumber(small.rows, n) : null;
-  const basisSmall = echSmall ? integerNullSpaceNumber(echSmall.rows, echSmall.pivots, n) : null;
-  if (basisSmall) return basisSmall.map((v) => reactionFromSigned(entries, v.map((x) => BigInt(x))));
+  const basisSmall = echSmall ? integerNullSpaceSparseNumber(echSmall.rows, echSmall.pivots, n) : null;
+  if (basisSmall) return basisSmall.map((v) => reactionFromSparse(entries, v.columns, v.values));
   const { rows } = integerElementMatrix(formulas);
   const ech = integerGaussJordan(rows, n);
   return integerNullSpaceFromEchelon(ech.rows, ech.pivots, n).map((v) => reactionFromSigned(entries, v));

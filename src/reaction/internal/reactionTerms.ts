@@ -129,3 +129,19 @@ export function reactionFromSigned(entries: readonly SpeciesEntry[], v: readonly
   });
   return makeReaction(reactants, products);
 }
+
+/**
+ * A reaction from a sparse signed integer vector over species (columns ascending, safe-integer
+ * values): negative entries become reactants, positive entries products, species order kept.
+ */
+export function reactionFromSparse(entries: readonly SpeciesEntry[], columns: readonly number[], values: readonly number[]): Reaction {
+  const reactants: Term[] = [];
+  const products: Term[] = [];
+  for (let k = 0; k < columns.length; k++) {
+    const x = values[k]!;
+    const e = entries[columns[k]!]!;
+    if (x < 0) reactants.push(makeIntegerTerm(e, -x));
+    else if (x > 0) products.push(makeIntegerTerm(e, x));
+  }
+  return makeReaction(reactants, products);
+}
