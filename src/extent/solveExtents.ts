@@ -6,6 +6,8 @@ import {
   rationalAdd,
   rationalDiv,
   rationalFromNumber,
+  rational,
+  lcmBigInt,
   rationalIsZero,
   rationalMul,
   rationalNeg,
@@ -380,7 +382,54 @@ interface Lane<T> {
   specRow(sys: StoichSystem, r: SpecRow): { a: T[]; b: T };
   /** Solve A ξ = b (A and b not mutated); null when A is singular (exact lanes) or ill-conditioned (float). */
   solve(A: T[][], b: T[]): T[] | null;
+  /** feed + change (exact lanes may leave it unreduced: it is only signed, rounded and printed). */
+  offset(feed: T, change: T): T;
+  /** Net change Σⱼ νⱼₛ ξⱼ of each of the S species. */
+  changes(nu: readonly (readonly T[])[], xi: readonly T[], S: number): T[];
 }
+
+/** Σⱼ νⱼₛ ξⱼ in any lane, term by term. */
+function laneChanges<T>(L: Lane<T>, nu: readonly (readonly T[])[], xi: readonly T[], S: number): T[] {
+  const out = new Array<T>(S);
+  for (let s = 0; s < S; s++) {
+    let d = L.zero;
+    for (let j = 0; j < xi.length; j++) {
+      const c = (nu[j] as readonly T[])[s] as T;
+      if (!L.isZero(c)) d = L.add(d, L.mul(c, xi[j] as T));
+    }
+    out[s] = d;
+  }
+  return out;
+}
+
+/**
+ * Σⱼ νⱼₛ ξⱼ in BigInt rationals over one common denominator: the extents and stoichiometric
+ * numbers are brought to a common denominator once (R + R·S lcm steps only where a ν is
+ * fractional), the sums are then plain BigInt products and additions, and each species' sum is
+ * reduced once — instead of one gcd-normalised rational product and sum per (species, reaction).
+ */
+function bigChanges(nu: readonly (readonly Rational[])[], xi: readonly Rational[], S: number): Rational[] {
+  let D = 1n;
+  for (const x of xi) if (x.den !== 1n && D % x.den !== 0n) D = lcmBigInt(D, x.den);
+  let N = 1n;
+  for (const row of nu) for (const c of row) if (c.den !== 1n && N % c.den !== 0n) N = lcmBigInt(N, c.den);
+  const X = xi.map((x) => x.num * (D / x.den));
+  const den = N * D;
+  const out = new Array<Rational>(S);
+  for (let s = 0; s < S; s++) {
+    let acc = 0n;
+    for (let j = 0; j < X.length; j++) {
+      const c = (nu[j] as readonly Rational[])[s] as Rational;
+      if (c.num === 0n) continue;
+      acc += (c.den === 1n ? c.num * N : c.num * (N / c.den)) * (X[j] as bigint);
+    }
+    // left unreduced: only its sign, its sum with the feed and its rounded value are needed
+    out[s] = acc === 0n ? BIG_ZERO : { num: acc, den };
+  }
+  return out;
+}
+
+const BIG_ZERO = rationalFromNumber(0);
 
 const BIG: Lane<Rational> = {
   exact: true,
@@ -395,7 +444,6 @@ const BIG: Lane<Rational> = {
   isZero: rationalIsZero,
   fromNumber: rationalFromNumber,
   toNumber: rationalToNumber,
-  text: rationalToString,
   nu: (sys) => sys.nu,
   feed: (sys) => sys.feedQ,
   yieldRatio(sys, p, a) {
@@ -409,6 +457,10 @@ const BIG: Lane<Rational> = {
     const sol = solveLinearSystem(A, b);
     return sol.kind === "unique" ? sol.solution : null;
   },
+  changes: bigChanges,
+  offset: (f, d) => (d.num === 0n ? f : { num: f.num * d.den + d.num * f.den, den: f.den * d.den }),
+  // values may arrive unreduced from bigChanges/offset: reduce before printing
+  text: (a) => rationalToString(rational(a.num, a.den)),
 };
 
 const SAFE: Lane<SafeQ> = {
@@ -467,6 +519,8 @@ const SAFE: Lane<SafeQ> = {
     }
     return x;
   },
+  changes: (nu, xi, S) => laneChanges(SAFE, nu, xi, S),
+  offset: sqAdd,
 };
 
 const FLOAT: Lane<number> = {
@@ -493,6 +547,8 @@ const FLOAT: Lane<number> = {
   pairRatio: (pair) => pair.ratioF,
   specRow: (_sys, r) => ({ a: r.aF, b: r.bF }),
   solve: solveFloatSystem,
+  changes: (nu, xi, S) => laneChanges(FLOAT, nu, xi, S),
+  offset: (a, b) => a + b,
 };
 
 function checkedSafe(v: number): number {
@@ -589,13 +645,10 @@ function solveIn<T>(L: Lane<T>, sys: StoichSystem, rows: SpecRow[], fn: string):
   const change = new Array<T>(S);
   const outlet = new Array<number>(S);
   const roundOffZeros: string[] = [];
+  const net = L.changes(nu, xi, S);
   for (let s = 0; s < S; s++) {
-    let d = L.zero;
-    for (let j = 0; j < R; j++) {
-      const c = (nu[j] as readonly T[])[s] as T;
-      if (!L.isZero(c)) d = L.add(d, L.mul(c, xi[j] as T));
-    }
-    const v = L.add(feed[s] as T, d);
+    const d = net[s] as T;
+    const v = L.offset(feed[s] as T, d);
     if (L.isNegative(v)) {
       // round-off rule: a negative outlet within ROUND_OFF_RELATIVE of the species' throughput is 0
       let scale = sys.feed[s] as number;
@@ -700,7 +753,12 @@ function noNegZero(v: number): number {
   return v === 0 ? 0 : v;
 }
 
-/** Build the result from the lane's exact (or float) extents and changes out − in. */
+/**
+ * Build the result from the lane's exact (or float) extents and changes out − in. Extents,
+ * outlet and change are computed now; the conversion, per-reaction conversion, yield and
+ * selectivity tables (the last grows with the square of the species count) are computed on
+ * first access and then kept, so a caller who reads only the flows never pays for them.
+ */
 function assemble<T>(
   L: Lane<T>,
   sys: StoichSystem,
@@ -712,50 +770,76 @@ function assemble<T>(
 ): SolveExtentsResult {
   const S = sys.species.length;
   const R = sys.reactions.length;
-  const nu = L.nu(sys);
-  const feed = L.feed(sys);
-  const ratio = (a: T, b: T): number => L.quotient(a, b);
   const outletFlows: Flows = {};
   const changeFlows: Flows = {};
+  for (let s = 0; s < S; s++) {
+    const key = sys.species[s] as string;
+    outletFlows[key] = noNegZero(outlet[s] as number);
+    if (sys.reacting[s]) changeFlows[key] = noNegZero(L.toNumber(change[s] as T));
+  }
+  const ext = new Array<number>(R);
+  for (let j = 0; j < R; j++) ext[j] = noNegZero(extents[j] as number);
+  let conversions: { conversion: Record<string, number>; conversionByReaction: Record<string, number>[] } | null = null;
+  const conversionTables = () => (conversions ??= conversionTablesOf(L, sys, xi, change));
+  let yields: Record<string, Record<string, number>> | null = null;
+  let selectivity: Record<string, Record<string, number>> | null = null;
+  const result = { extents: ext, outlet: outletFlows, change: changeFlows, roundOffZeros } as SolveExtentsResult;
+  Object.defineProperties(result, {
+    conversion: { enumerable: true, get: () => conversionTables().conversion },
+    conversionByReaction: { enumerable: true, get: () => conversionTables().conversionByReaction },
+    yield: { enumerable: true, get: () => (yields ??= yieldTableOf(L, sys, change)) },
+    selectivity: { enumerable: true, get: () => (selectivity ??= selectivityTableOf(L, sys, change)) },
+  });
+  return result;
+}
+
+function conversionTablesOf<T>(L: Lane<T>, sys: StoichSystem, xi: readonly T[], change: readonly T[]): { conversion: Record<string, number>; conversionByReaction: Record<string, number>[] } {
+  const S = sys.species.length;
+  const R = sys.reactions.length;
+  const nu = L.nu(sys);
+  const feed = L.feed(sys);
   const conversion: Record<string, number> = {};
   const conversionByReaction: Record<string, number>[] = [];
   for (let j = 0; j < R; j++) conversionByReaction.push({});
   for (let s = 0; s < S; s++) {
+    if (!sys.reacting[s] || !sys.consumed[s] || sys.feed[s] === 0) continue;
     const key = sys.species[s] as string;
-    outletFlows[key] = noNegZero(outlet[s] as number);
-    if (!sys.reacting[s]) continue;
-    const ch = change[s] as T;
-    changeFlows[key] = noNegZero(L.toNumber(ch));
-    if (sys.consumed[s] && sys.feed[s] !== 0) {
-      const fed = feed[s] as T;
-      conversion[key] = noNegZero(-ratio(ch, fed));
-      for (let j = 0; j < R; j++) {
-        const c = (nu[j] as readonly T[])[s] as T;
-        if (L.isNegative(c)) (conversionByReaction[j] as Record<string, number>)[key] = noNegZero(-ratio(L.mul(c, xi[j] as T), fed));
-      }
+    const fed = feed[s] as T;
+    conversion[key] = noNegZero(-L.quotient(change[s] as T, fed));
+    for (let j = 0; j < R; j++) {
+      const c = (nu[j] as readonly T[])[s] as T;
+      if (L.isNegative(c)) (conversionByReaction[j] as Record<string, number>)[key] = noNegZero(-L.quotient(L.mul(c, xi[j] as T), fed));
     }
   }
+  return { conversion, conversionByReaction };
+}
+
+function yieldTableOf<T>(L: Lane<T>, sys: StoichSystem, change: readonly T[]): Record<string, Record<string, number>> {
+  const feed = L.feed(sys);
   const yields: Record<string, Record<string, number>> = {};
   for (const yp of sys.yieldPairs) {
     if (sys.feed[yp.a] === 0) continue;
     const ideal = L.mul(feed[yp.a] as T, L.pairRatio(yp));
-    (yields[sys.species[yp.p] as string] ??= {})[sys.species[yp.a] as string] = noNegZero(ratio(change[yp.p] as T, ideal));
+    (yields[sys.species[yp.p] as string] ??= {})[sys.species[yp.a] as string] = noNegZero(L.quotient(change[yp.p] as T, ideal));
   }
+  return yields;
+}
+
+function selectivityTableOf<T>(L: Lane<T>, sys: StoichSystem, change: readonly T[]): Record<string, Record<string, number>> {
+  const S = sys.species.length;
   const selectivity: Record<string, Record<string, number>> = {};
-  if (R > 1) {
+  if (sys.reactions.length > 1) {
     for (let d = 0; d < S; d++) {
       if (!sys.produced[d]) continue;
       for (let u = 0; u < S; u++) {
         if (u === d || !sys.produced[u] || (sys.proportional[d] as boolean[])[u]) continue;
         const cu = change[u] as T;
         if (L.isNegative(cu) || L.isZero(cu)) continue;
-        (selectivity[sys.species[d] as string] ??= {})[sys.species[u] as string] = noNegZero(ratio(change[d] as T, cu));
+        (selectivity[sys.species[d] as string] ??= {})[sys.species[u] as string] = noNegZero(L.quotient(change[d] as T, cu));
       }
     }
   }
-  const ext = new Array<number>(R);
-  for (let j = 0; j < R; j++) ext[j] = noNegZero(extents[j] as number);
-  return { extents: ext, outlet: outletFlows, change: changeFlows, conversion, conversionByReaction, yield: yields, selectivity, roundOffZeros };
+  return selectivity;
 }
 
 /** Float64 Gauss elimination with partial pivoting; null when a pivot is tiny (defer to exact). */

@@ -420,6 +420,14 @@ function roundedQuotient(an: bigint, den: bigint): number {
   return Number(q) * 2 ** e1 * 2 ** (e - e1);
 }
 
+/** Number of bits of a non-negative BigInt (0 for 0), from its double's exponent, corrected exactly. */
 function bitLength(n: bigint): number {
-  return n === 0n ? 0 : n.toString(2).length;
+  if (n === 0n) return 0;
+  const x = Number(n);
+  if (x === Infinity) return n.toString(16).length * 4 - Math.clz32(Number.parseInt(n.toString(16)[0] as string, 16)) + 28;
+  // Number(n) rounds to nearest, so its exponent can exceed the true one by 1 at a power of two
+  let bits = Math.floor(Math.log2(x)) + 1;
+  if (bits > 1 && n < 1n << BigInt(bits - 1)) bits--;
+  else if (n >= 1n << BigInt(bits)) bits++;
+  return bits;
 }

@@ -149,6 +149,41 @@ describe("rational arithmetic", () => {
     const v = rationalToNumber(a);
     expect(Math.abs(v - approx)).toBeLessThanOrEqual(Math.abs(approx) * 1e-15);
   });
+  test.prop([
+    fc.bigInt({ min: 1n, max: 1n << 300n }),
+    fc.bigInt({ min: 1n, max: 1n << 300n }),
+    fc.integer({ min: 0, max: 300 }),
+  ])("toNumber is correctly rounded: no neighbouring double is closer to the exact value (round half to even)", (n0, d, k) => {
+    // bring numerator and denominator near powers of two, where the bit length is easiest to get wrong
+    const n = k % 3 === 0 ? (1n << BigInt(k)) - 1n : k % 3 === 1 ? 1n << BigInt(k) : n0;
+    const q = rational(n, d);
+    const v = rationalToNumber(q);
+    const exact = (x: number): Rational => {
+      // a finite positive double as an exact dyadic rational
+      const view = new DataView(new ArrayBuffer(8));
+      view.setFloat64(0, x);
+      const bits = view.getBigUint64(0);
+      const e = Number((bits >> 52n) & 0x7ffn);
+      const frac = bits & ((1n << 52n) - 1n);
+      const m = e === 0 ? frac : frac | (1n << 52n);
+      const p = (e === 0 ? 1 : e) - 1075;
+      return p >= 0 ? rational(m << BigInt(p), 1n) : rational(m, 1n << BigInt(-p));
+    };
+    const dist = (x: number): Rational => {
+      const diff = rationalSub(q, exact(x));
+      return diff.num < 0n ? rationalNeg(diff) : diff;
+    };
+    const view = new DataView(new ArrayBuffer(8));
+    view.setFloat64(0, v);
+    const up = view.getBigUint64(0) + 1n;
+    const down = view.getBigUint64(0) - 1n;
+    view.setBigUint64(0, up);
+    const next = view.getFloat64(0);
+    view.setBigUint64(0, down);
+    const prev = view.getFloat64(0);
+    expect(rationalCompare(dist(v), dist(next))).toBeLessThanOrEqual(0);
+    if (prev > 0) expect(rationalCompare(dist(v), dist(prev))).toBeLessThanOrEqual(0);
+  });
   it("rationalToNumber of huge numerator and denominator does not overflow", () => {
     const big = 10n ** 400n;
     expect(rationalToNumber(rational(3n * big, 4n * big + 1n))).toBeCloseTo(0.75, 15);
