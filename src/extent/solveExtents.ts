@@ -1,6 +1,6 @@
 import { RxthermError } from "../errors.js";
 import type { Reaction } from "../reaction/types.js";
-import { matrixRank, nullSpace, solveLinearSystem } from "../numeric/linearAlgebra.js";
+import { matrixRank, nullSpace } from "../numeric/linearAlgebra.js";
 import {
   type Rational,
   rationalAdd,
@@ -15,7 +15,7 @@ import {
   rationalToNumber,
   rationalToString,
 } from "../numeric/rational.js";
-import { integerGaussJordanNumber } from "../numeric/integerElimination.js";
+import { integerGaussJordan, integerGaussJordanNumber } from "../numeric/integerElimination.js";
 import {
   type SafeQ,
   S0,
@@ -431,6 +431,37 @@ function bigChanges(nu: readonly (readonly Rational[])[], xi: readonly Rational[
 
 const BIG_ZERO = rationalFromNumber(0);
 
+/**
+ * Solve A ξ = b exactly: each row [a | b] scaled to integers by the lcm of its denominators,
+ * then fraction-free Gauss–Jordan in BigInt; ξᵢ is returned unreduced (last column over the
+ * pivot), as the later sums bring everything to one denominator anyway. Null when singular.
+ */
+function solveBigSystem(A: Rational[][], b: Rational[]): Rational[] | null {
+  const R = A.length;
+  const ints: bigint[][] = [];
+  for (let i = 0; i < R; i++) {
+    const row = A[i] as Rational[];
+    const rhs = b[i] as Rational;
+    let l = rhs.den;
+    for (const v of row) if (v.den !== 1n && l % v.den !== 0n) l = lcmBigInt(l, v.den);
+    const out = new Array<bigint>(R + 1);
+    for (let j = 0; j < R; j++) {
+      const v = row[j] as Rational;
+      out[j] = v.num === 0n ? 0n : v.den === 1n ? v.num * l : v.num * (l / v.den);
+    }
+    out[R] = rhs.num * (l / rhs.den);
+    ints.push(out);
+  }
+  const ech = integerGaussJordan(ints, R);
+  if (ech.pivots.length < R) return null;
+  const x = new Array<Rational>(R);
+  for (let i = 0; i < R; i++) {
+    const row = ech.rows[i] as bigint[];
+    x[ech.pivots[i] as number] = { num: row[R] as bigint, den: row[ech.pivots[i] as number] as bigint };
+  }
+  return x;
+}
+
 const BIG: Lane<Rational> = {
   exact: true,
   zero: rationalFromNumber(0),
@@ -453,10 +484,7 @@ const BIG: Lane<Rational> = {
   quotient: (a, b) => rationalToNumber(rationalDiv(a, b)),
   pairRatio: (pair) => pair.ratio,
   specRow: (sys, r) => laneRow(BIG, sys, r),
-  solve(A, b) {
-    const sol = solveLinearSystem(A, b);
-    return sol.kind === "unique" ? sol.solution : null;
-  },
+  solve: solveBigSystem,
   changes: bigChanges,
   offset: (f, d) => (d.num === 0n ? f : { num: f.num * d.den + d.num * f.den, den: f.den * d.den }),
   // values may arrive unreduced from bigChanges/offset: reduce before printing
