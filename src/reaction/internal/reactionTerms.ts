@@ -65,18 +65,39 @@ export function integerElementMatrix(
  * magnitude below 2^31 (the common case); null otherwise.
  */
 export function numberElementMatrix(formulas: readonly Formula[], signs?: readonly number[]): { rows: number[][]; rowNames: string[] } | null {
-  const elements = elementOrder(formulas);
-  const charged = formulas.some((f) => f.charge !== 0);
-  const rowNames = charged ? [...elements, CHARGE_ROW] : elements;
+  // one pass over each formula's own elements (no lookups of absent elements per row)
+  const n = formulas.length;
+  const index = new Map<string, number>();
+  const rowNames: string[] = [];
   const rows: number[][] = [];
-  for (const name of rowNames) {
-    const row: number[] = [];
-    for (let j = 0; j < formulas.length; j++) {
-      const f = formulas[j] as Formula;
-      const v = name === CHARGE_ROW ? f.charge : (f.elements[name] ?? 0);
+  let charged = false;
+  for (let j = 0; j < n; j++) {
+    const f = formulas[j] as Formula;
+    const sign = (signs?.[j] ?? 1) < 0 ? -1 : 1;
+    const els = f.elements;
+    for (const el in els) {
+      if (!Object.prototype.hasOwnProperty.call(els, el)) continue;
+      const v = els[el] as number;
       if (!Number.isInteger(v) || Math.abs(v) >= 2 ** 31) return null;
-      row.push((signs?.[j] ?? 1) < 0 ? -v || 0 : v);
+      let r = index.get(el);
+      if (r === undefined) {
+        r = rows.length;
+        index.set(el, r);
+        rowNames.push(el);
+        rows.push(new Array<number>(n).fill(0));
+      }
+      (rows[r] as number[])[j] = sign < 0 ? -v || 0 : v;
     }
+    if (f.charge !== 0) charged = true;
+  }
+  if (charged) {
+    const row = new Array<number>(n);
+    for (let j = 0; j < n; j++) {
+      const q = (formulas[j] as Formula).charge;
+      if (!Number.isInteger(q) || Math.abs(q) >= 2 ** 31) return null;
+      row[j] = (signs?.[j] ?? 1) < 0 ? -q || 0 : q;
+    }
+    rowNames.push(CHARGE_ROW);
     rows.push(row);
   }
   return { rows, rowNames };
