@@ -57,6 +57,28 @@ function handSolve(): number[] {
   return x;
 }
 
+// invented 16-reaction network (reforming, shift, cracking, methanol, sulfur and nitrogen side reactions)
+const FEED16: Record<string, number> = {
+  CH4: 30, H2O: 90, CO: 2, CO2: 3, H2: 10, N2: 20, NH3: 0, O2: 6, SO2: 1, SO3: 0, C2H6: 4, C2H4: 0, C3H8: 5, C3H6: 0,
+  C4H10: 3, C4H8: 0, CH3OH: 0, CH3OCH3: 0, C2H5OH: 0, H2S: 0.5, COS: 0.2, HCN: 0.3, C2H2: 0.4, Ar: 0.3,
+};
+const REACTIONS16 = [
+  "CH4 + H2O -> CO + 3 H2", "CO + H2O -> CO2 + H2", "C2H6 -> C2H4 + H2", "N2 + 3 H2 -> 2 NH3", "2 SO2 + O2 -> 2 SO3",
+  "C3H8 -> C3H6 + H2", "C3H8 -> C2H4 + CH4", "C4H10 -> C4H8 + H2", "C4H10 -> C2H6 + C2H4", "CO + 2 H2 -> CH3OH",
+  "2 CH3OH -> CH3OCH3 + H2O", "C2H4 + H2O -> C2H5OH", "2 H2S + 3 O2 -> 2 SO2 + 2 H2O", "COS + H2O -> CO2 + H2S",
+  "HCN + 3 H2 -> CH4 + NH3", "C2H2 + H2 -> C2H4",
+];
+const SPECS16 = [
+  { of: "CH4", conversion: 0.3 }, { reaction: 1, extent: 4 }, { reaction: 2, extent: 0.5 }, { of: "N2", conversion: 0.05 },
+  { of: "SO2", conversion: 0.9 }, { reaction: 5, extent: 1.5 }, { reaction: 6, extent: 1.2 }, { reaction: 7, extent: 1 },
+  { reaction: 8, extent: 0.7 }, { reaction: 9, extent: 0.4 }, { reaction: 10, extent: 0.1 }, { reaction: 11, extent: 0.2 },
+  { of: "H2S", conversion: 0.8 }, { of: "COS", conversion: 0.6 }, { of: "HCN", conversion: 0.5 }, { of: "C2H2", conversion: 0.95 },
+] as const;
+/** The same specs as a user's float arithmetic leaves them: each value one or two ulps off its decimal (0.30000000000000004). */
+const SPECS16_ROUNDOFF = SPECS16.map((s) =>
+  Object.fromEntries(Object.entries(s).map(([k, v]) => [k, typeof v === "number" && k !== "reaction" ? v * (1 + 2 ** -52) : v])),
+) as unknown as typeof SPECS16;
+
 const GAS = {
   "CH4(g)": 0.87, "C2H6(g)": 0.05, "C3H8(g)": 0.02, "C4H10(g)": 0.005, "H2(g)": 0.01,
   "CO(g)": 0.005, "CO2(g)": 0.015, "N2(g)": 0.02, "H2S(g)": 0.0001, "He(g)": 0.0049,
@@ -105,6 +127,14 @@ export function run(): void {
   report("solveExtents", exact, base, "median < 20 µs");
   report("solveExtents", exactNewFeed, base, "median < 20 µs");
   report("solveExtents", float, base, "median < 20 µs");
+  const rounded16 = measure("solveExtents 16 rx, rounded specs", () => solveExtents({ feed: FEED16, reactions: REACTIONS16, specs: SPECS16 }));
+  const roundoff16 = measure("solveExtents 16 rx, specs with float round-off", () => solveExtents({ feed: FEED16, reactions: REACTIONS16, specs: SPECS16_ROUNDOFF }));
+  const roundoff16y = measure("the same, reading the yield and selectivity tables", () => {
+    const r = solveExtents({ feed: FEED16, reactions: REACTIONS16, specs: SPECS16_ROUNDOFF });
+    return [r.yield, r.selectivity];
+  });
+  report("solveExtents round-off specs", roundoff16, rounded16, "ratio ≤ 1.5× the rounded case");
+  report("solveExtents round-off specs", roundoff16y, rounded16, "(tables are computed on first access)");
   const comb = measure("combustion 10-component gas, 15 % excess", () => combustion({ fuel: GAS, excessAir: 0.15 }));
   const cbase = measure("hand element tally", handCombustion);
   report("combustion", comb, cbase, "median < 10 µs");

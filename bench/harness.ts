@@ -4,6 +4,9 @@
  * Never used by tests; speed targets are checked here, not in unit tests.
  */
 
+import { spawnSync } from "node:child_process";
+import { fileURLToPath } from "node:url";
+
 /** Result of one measured case. */
 export interface BenchResult {
   name: string;
@@ -75,4 +78,66 @@ function fmtRate(r: number): string {
   if (r >= 1e6) return `${(r / 1e6).toFixed(2)} M`;
   if (r >= 1e3) return `${(r / 1e3).toFixed(1)} k`;
   return r.toFixed(0);
+}
+
+/** One point of a cost-growth curve: problem size and median time per call. */
+export interface GrowthPoint {
+  size: number;
+  medianNs: number;
+}
+
+/**
+ * Least-squares slope of log(time) against log(size): the empirical exponent k of time ∝ sizeᵏ
+ * (1 is linear, 2 quadratic). Needs at least two points of different size.
+ * @param points - sizes and median times
+ */
+export function growthSlope(points: readonly GrowthPoint[]): number {
+  const xs = points.map((p) => Math.log(p.size));
+  const ys = points.map((p) => Math.log(p.medianNs));
+  const mx = xs.reduce((a, b) => a + b, 0) / xs.length;
+  const my = ys.reduce((a, b) => a + b, 0) / ys.length;
+  let sxy = 0;
+  let sxx = 0;
+  for (let i = 0; i < xs.length; i++) {
+    sxy += (xs[i]! - mx) * (ys[i]! - my);
+    sxx += (xs[i]! - mx) ** 2;
+  }
+  return sxy / sxx;
+}
+
+/**
+ * Measure `make(size)` for each size and print the curve with its fitted exponent and the ratio
+ * of the largest to the smallest case.
+ * @param title - heading
+ * @param sizes - problem sizes, ascending
+ * @param make - builds the work of one size (called once per size, outside the timing)
+ * @param target - human-readable target for the exponent or the end-to-end ratio
+ * @param unit - what the size counts, e.g. "species"
+ */
+export function reportGrowth(title: string, sizes: readonly number[], make: (size: number) => () => unknown, target: string, unit: string): GrowthPoint[] {
+  const points: GrowthPoint[] = sizes.map((size) => ({ size, medianNs: measure(`${title} ${size}`, make(size), { batches: 11 }).medianNs }));
+  const first = points[0]!;
+  const last = points[points.length - 1]!;
+  console.log(
+    `${title}: ${points.map((p) => `${p.size} ${unit} ${formatTime(p.medianNs)}`).join(" | ")} | ${last.size}/${first.size} ${unit}: ${(last.medianNs / first.medianNs).toFixed(2)}× | fitted exponent ${growthSlope(points).toFixed(2)} | target ${target}`,
+  );
+  return points;
+}
+
+/**
+ * Run a peer script of bench/peers/ (Python, from the system's packages) with a JSON case on stdin
+ * and return its JSON answer, or null (with the reason printed) when the interpreter or its
+ * packages are not installed. Peers are optional: `apt-get install python3-scipy python3-sympy`.
+ * @param script - file name under bench/peers/
+ * @param input - the case, serialised to JSON
+ */
+export function runPeer<T>(script: string, input: unknown): T | null {
+  const path = fileURLToPath(new URL(`../../bench/peers/${script}`, import.meta.url));
+  const r = spawnSync("/usr/bin/python3", [path], { input: JSON.stringify(input), encoding: "utf8", timeout: 300_000 });
+  if (r.status !== 0) {
+    const why = r.error ? r.error.message : (r.stderr.trim().split("\n").pop() ?? `exit ${r.status}`);
+    console.log(`  (peer ${script} not run: ${why})`);
+    return null;
+  }
+  return JSON.parse(r.stdout) as T;
 }
