@@ -196,6 +196,27 @@ function flowsKey(flows: Flows): string | null {
  * cached). The species keys are parsed and looked up only on the first call with these streams.
  */
 function reactantsOf(fn: string, fuelIn: string | Flows, oxFlows: Flows, diluentIn: Flows | undefined, library: Library | undefined): Reactants {
+  // the same immutable inputs as the last call (species keys, frozen objects): no key to build
+  const m = lastReactants;
+  if (m !== null && m.fuel === fuelIn && m.oxidizer === oxFlows && m.diluent === diluentIn && m.library === library) return m.reactants;
+  const r = reactantsByContent(fn, fuelIn, oxFlows, diluentIn, library);
+  const immutable = (x: unknown): boolean => x === undefined || typeof x === "string" || (typeof x === "object" && x !== null && Object.isFrozen(x));
+  lastReactants = immutable(fuelIn) && immutable(oxFlows) && immutable(diluentIn) && immutable(library)
+    ? { fuel: fuelIn, oxidizer: oxFlows, diluent: diluentIn, library, reactants: r }
+    : null;
+  return r;
+}
+
+/** The last reactants resolved from immutable inputs, by identity. */
+let lastReactants: {
+  readonly fuel: string | Flows;
+  readonly oxidizer: Flows;
+  readonly diluent: Flows | undefined;
+  readonly library: Library | undefined;
+  readonly reactants: Reactants;
+} | null = null;
+
+function reactantsByContent(fn: string, fuelIn: string | Flows, oxFlows: Flows, diluentIn: Flows | undefined, library: Library | undefined): Reactants {
   const kf = streamKey(fuelIn);
   const ko = streamKey(oxFlows);
   const kd = streamKey(diluentIn);
