@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { test, fc } from "@fast-check/vitest";
+import { test, fc } from "../_helpers/property.js";
 import { adiabaticReactionTemperature, adiabaticTemperatureRise } from "../../src/energy/adiabaticReactionTemperature.js";
 import { heatDuty } from "../../src/energy/heatDuty.js";
 import { caught } from "../enthalpy/_helpers.js";

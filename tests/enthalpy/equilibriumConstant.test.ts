@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { test, fc } from "@fast-check/vitest";
+import { test, fc } from "../_helpers/property.js";
 import { equilibriumConstant } from "../../src/enthalpy/equilibriumConstant.js";
 import { reactionGibbs } from "../../src/enthalpy/reactionGibbs.js";
 import { GAS_CONSTANT_J_PER_MOL_K as R } from "../../src/units.js";

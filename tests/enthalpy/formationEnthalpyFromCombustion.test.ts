@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { test, fc } from "@fast-check/vitest";
+import { test, fc } from "../_helpers/property.js";
 import { formationEnthalpyFromCombustion } from "../../src/enthalpy/formationEnthalpyFromCombustion.js";
 import { heatingValue } from "../../src/enthalpy/heatingValue.js";
 import { species } from "../../src/species/species.js";

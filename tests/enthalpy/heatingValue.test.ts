@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { test, fc } from "@fast-check/vitest";
+import { test, fc } from "../_helpers/property.js";
 import { heatingValue, NORMAL_MOLAR_VOLUME_M3_PER_MOL } from "../../src/enthalpy/heatingValue.js";
 import { reactionEnthalpy } from "../../src/enthalpy/reactionEnthalpy.js";
 import { caught } from "./_helpers.js";

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { test, fc } from "@fast-check/vitest";
+import { test, fc } from "../_helpers/property.js";
 import { hessCombine } from "../../src/enthalpy/hessCombine.js";
 import { reactionEnthalpy } from "../../src/enthalpy/reactionEnthalpy.js";
 import { caught } from "./_helpers.js";

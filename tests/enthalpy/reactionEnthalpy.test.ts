@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { test, fc } from "@fast-check/vitest";
+import { test, fc } from "../_helpers/property.js";
 import { reactionEnthalpy } from "../../src/enthalpy/reactionEnthalpy.js";
 import { parseReaction } from "../../src/reaction/parseReaction.js";
 import { scaleReaction, reverseReaction } from "../../src/reaction/scaleReaction.js";

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { test, fc } from "@fast-check/vitest";
+import { test, fc } from "../_helpers/property.js";
 import { reactionGibbs } from "../../src/enthalpy/reactionGibbs.js";
 import { reactionEnthalpy } from "../../src/enthalpy/reactionEnthalpy.js";
 import { reactionEntropy } from "../../src/enthalpy/reactionEntropy.js";

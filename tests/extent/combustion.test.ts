@@ -1,4 +1,4 @@
-import { fc, test } from "@fast-check/vitest";
+import { fc, test } from "../_helpers/property.js";
 import { describe, expect, it } from "vitest";
 import { AIR_21_79, DRY_AIR, combustion } from "../../src/extent/combustion.js";
 import type { Flows } from "../../src/extent/types.js";

@@ -1,4 +1,4 @@
-import { fc, test } from "@fast-check/vitest";
+import { fc, test } from "../_helpers/property.js";
 import { describe, expect, it } from "vitest";
 import { AIR_21_79, combustion } from "../../src/extent/combustion.js";
 import { excessAirFromFlueCO2, excessAirFromFlueO2 } from "../../src/extent/excessAirFromFlueO2.js";

@@ -1,4 +1,4 @@
-import { fc, test } from "@fast-check/vitest";
+import { fc, test } from "../_helpers/property.js";
 import { describe, expect, it } from "vitest";
 import { limitingReactant } from "../../src/extent/limitingReactant.js";
 import { parseReaction } from "../../src/reaction/parseReaction.js";

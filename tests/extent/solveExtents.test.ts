@@ -1,4 +1,4 @@
-import { fc, test } from "@fast-check/vitest";
+import { fc, test } from "../_helpers/property.js";
 import { describe, expect, it } from "vitest";
 import { RxthermError } from "../../src/errors.js";
 import { parseFormula } from "../../src/formula/parseFormula.js";

@@ -1,4 +1,4 @@
-import { fc, test } from "@fast-check/vitest";
+import { fc, test } from "../_helpers/property.js";
 import { describe, expect, it } from "vitest";
 import { massFractions, massToMolarFlows, molarToMassFlows, moleFractions, totalFlow, totalMassFlow } from "../../src/extent/streams.js";
 import { caught } from "../_helpers/caught.js";

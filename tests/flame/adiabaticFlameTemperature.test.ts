@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { test, fc } from "@fast-check/vitest";
+import { test, fc } from "../_helpers/property.js";
 import { readFileSync } from "node:fs";
 import { adiabaticFlameTemperature } from "../../src/flame/adiabaticFlameTemperature.js";
 import { DEFAULT_FLAME_PRODUCTS } from "../../src/flame/flameDefaults.js";

@@ -1,4 +1,4 @@
-import { test } from "@fast-check/vitest";
+import { test } from "../_helpers/property.js";
 import { describe, expect, it } from "vitest";
 import { elementMassFractions } from "../../src/formula/elementMassFractions.js";
 import { errorOf, generatedFormula } from "./helpers.js";

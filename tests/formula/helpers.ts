@@ -1,5 +1,5 @@
 /** Shared test helpers for the formula tests: error capture and formula-text generators. */
-import { fc } from "@fast-check/vitest";
+import { fc } from "../_helpers/property.js";
 import Decimal from "decimal.js";
 import { ATOMIC_WEIGHTS } from "../../src/formula/atomicWeights.js";
 

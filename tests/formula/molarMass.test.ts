@@ -1,4 +1,4 @@
-import { fc, test } from "@fast-check/vitest";
+import { fc, test } from "../_helpers/property.js";
 import { describe, expect, it } from "vitest";
 import { ELECTRON_MOLAR_MASS_G_PER_MOL, molarMass } from "../../src/formula/molarMass.js";
 import { parseFormula } from "../../src/formula/parseFormula.js";

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { test, fc } from "@fast-check/vitest";
+import { test, fc } from "../_helpers/property.js";
 import { boundaryJumps } from "../../src/heat-capacity/boundaryJumps.js";
 import { createHeatCapacity } from "../../src/heat-capacity/createHeatCapacity.js";
 import { nasa7Ranges, shomateRanges } from "./fixtures.js";

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { test, fc } from "@fast-check/vitest";
+import { test, fc } from "../_helpers/property.js";
 import { createHeatCapacity, type HeatCapacity } from "../../src/heat-capacity/createHeatCapacity.js";
 import type { CpRange } from "../../src/heat-capacity/types.js";
 import { RxthermError } from "../../src/errors.js";

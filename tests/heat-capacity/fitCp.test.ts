@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { test, fc } from "@fast-check/vitest";
+import { test, fc } from "../_helpers/property.js";
 import { fitCp, type CpPoint } from "../../src/heat-capacity/fitCp.js";
 import { createHeatCapacity } from "../../src/heat-capacity/createHeatCapacity.js";
 import type { CpRange, Nasa7Form, ShomateForm } from "../../src/heat-capacity/types.js";

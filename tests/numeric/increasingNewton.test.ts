@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { test, fc } from "@fast-check/vitest";
+import { test, fc } from "../_helpers/property.js";
 import { increasingNewton } from "../../src/numeric/increasingNewton.js";
 import { RxthermError } from "../../src/errors.js";
 

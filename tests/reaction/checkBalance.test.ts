@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { test, fc } from "@fast-check/vitest";
+import { test, fc } from "../_helpers/property.js";
 import { checkBalance } from "../../src/reaction/checkBalance.js";
 import { balanceReaction } from "../../src/reaction/balanceReaction.js";
 import { parseReaction } from "../../src/reaction/parseReaction.js";

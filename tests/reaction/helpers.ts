@@ -3,7 +3,7 @@
  * parseFormula's counts, rounded to 1e-9 — it does not use the exact code under test) and a
  * generator of random balanced reactions.
  */
-import { fc } from "@fast-check/vitest";
+import { fc } from "../_helpers/property.js";
 import { parseFormula } from "../../src/formula/parseFormula.js";
 import type { Reaction } from "../../src/reaction/types.js";
 

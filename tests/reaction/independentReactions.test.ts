@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { test, fc } from "@fast-check/vitest";
+import { test, fc } from "../_helpers/property.js";
 import { independentReactions } from "../../src/reaction/independentReactions.js";
 import { checkBalance } from "../../src/reaction/checkBalance.js";
 import { formatReaction } from "../../src/reaction/formatReaction.js";

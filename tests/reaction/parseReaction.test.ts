@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { test, fc } from "@fast-check/vitest";
+import { test, fc } from "../_helpers/property.js";
 import { MAX_REACTION_COEFFICIENT, MAX_REACTION_LENGTH, parseReaction } from "../../src/reaction/parseReaction.js";
 import { formatReaction } from "../../src/reaction/formatReaction.js";
 import { RxthermError } from "../../src/errors.js";

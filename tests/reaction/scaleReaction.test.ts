@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { test, fc } from "@fast-check/vitest";
+import { test, fc } from "../_helpers/property.js";
 import { reverseReaction, scaleReaction } from "../../src/reaction/scaleReaction.js";
 import { formatReaction } from "../../src/reaction/formatReaction.js";
 import { parseReaction } from "../../src/reaction/parseReaction.js";

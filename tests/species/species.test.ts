@@ -1,6 +1,6 @@
 import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
-import { test, fc } from "@fast-check/vitest";
+import { test, fc } from "../_helpers/property.js";
 import { species } from "../../src/species/species.js";
 import { GAS_CONSTANT_J_PER_MOL_K } from "../../src/units.js";
 import { caught } from "../_helpers/caught.js";

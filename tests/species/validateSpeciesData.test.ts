@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { test, fc } from "@fast-check/vitest";
+import { test, fc } from "../_helpers/property.js";
 import { validateSpeciesData } from "../../src/species/validateSpeciesData.js";
 import { RxthermError } from "../../src/errors.js";
 import { clone, demoData } from "./helpers.js";
