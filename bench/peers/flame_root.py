@@ -5,7 +5,9 @@ Reads from stdin a JSON object {"species": {key: [[Tmin, Tmax, a1..a7], ...]}, "
 "products": {key: n}, "T0": K, "repeat": N}; prints {"T": K, "usPerSolve": µs}. The coefficients are the
 library's own GRI-Mech 3.0 sets, passed in by the bench, so both sides evaluate the same data.
 """
-import json, sys, time
+import json, sys
+
+from timing import best_microseconds
 from scipy.optimize import brentq
 
 R = 8.31446261815324
@@ -29,11 +31,5 @@ def solve():
     return brentq(f, 300.0, 3500.0, xtol=1e-6)
 
 T = solve()
-n = case["repeat"]
-best = float("inf")
-for _ in range(7):
-    t0 = time.perf_counter()
-    for _ in range(n):
-        solve()
-    best = min(best, (time.perf_counter() - t0) / n)
-print(json.dumps({"T": T, "usPerSolve": best * 1e6}))
+us = best_microseconds(solve, case["repeat"], 7)
+print(json.dumps({"T": T, "usPerSolve": us}))

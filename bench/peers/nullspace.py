@@ -4,7 +4,9 @@ general-purpose computer-algebra system (rational arithmetic), scaled to whole n
 Reads from stdin {"matrix": [[int, ...], ...], "repeat": N}; prints {"vector": [...], "usPerSolve": µs}.
 The matrix is built by the bench from the library's own parsed formulas.
 """
-import json, sys, time
+import json, sys
+
+from timing import best_microseconds
 from sympy import Matrix, ilcm
 
 case = json.load(sys.stdin)
@@ -16,11 +18,5 @@ def solve():
     return [int(x * l) for x in v]
 
 vec = solve()
-n = case["repeat"]
-best = float("inf")
-for _ in range(5):
-    t0 = time.perf_counter()
-    for _ in range(n):
-        solve()
-    best = min(best, (time.perf_counter() - t0) / n)
-print(json.dumps({"vector": vec, "usPerSolve": best * 1e6}))
+us = best_microseconds(solve, case["repeat"], 5)
+print(json.dumps({"vector": vec, "usPerSolve": us}))
