@@ -45,7 +45,7 @@ export interface JanafDeviation {
 
 const fixture = (name: string): any => JSON.parse(readFileSync(new URL(`../../tests/fixtures/${name}`, import.meta.url), "utf8"));
 
-const GAS_KEYS: Record<string, string> = { "C(gr)": "C(cr)" };
+const GAS_KEYS: Record<string, string> = { "C(cr)": "C(cr)" };
 
 /** Every NIST-JANAF table the project holds rows of, mapped to built-in keys. */
 export function janafTables(): JanafTable[] {
