@@ -45,17 +45,17 @@ export interface JanafDeviation {
 
 const fixture = (name: string): any => JSON.parse(readFileSync(new URL(`../../tests/fixtures/${name}`, import.meta.url), "utf8"));
 
-const GAS_KEYS: Record<string, string> = { "C(cr)": "C(cr)" };
+const GAS_KEYS: Record<string, string> = { "C(gr)": "C(cr)" }; // the JANAF fixtures name graphite C(gr)
 
 /** Every NIST-JANAF table the project holds rows of, mapped to built-in keys. */
 export function janafTables(): JanafTable[] {
   const byKey = new Map<string, { tables: string[]; rows: JanafRow[]; upper: boolean[] }>();
-  const add = (key: string, table: string, rows: JanafRow[], shiftKJ = 0): void => {
+  const add = (key: string, table: string, rows: JanafRow[], shiftKJ = 0, firstUpper = false): void => {
     const t = byKey.get(key) ?? { tables: [], rows: [], upper: [] };
     if (!t.tables.includes(table)) t.tables.push(table);
     rows.forEach((r, i) => {
       if (r.Cp == null && r.H_minus_H298 == null) return;
-      const upper = i > 0 && rows[i - 1]!.T === r.T;
+      const upper = i === 0 ? firstUpper : rows[i - 1]!.T === r.T;
       if (t.rows.some((x, j) => x.T === r.T && t.upper[j] === upper)) return; // same row in two files
       t.rows.push({ ...r, ...(r.H_minus_H298 != null ? { H_minus_H298: r.H_minus_H298 + shiftKJ } : {}) });
       t.upper.push(upper);
@@ -69,13 +69,9 @@ export function janafTables(): JanafTable[] {
   for (const [key, blocks] of Object.entries<any[]>(fixture("janaf-condensed.json").species)) {
     for (const b of blocks) {
       // NaOH(cr): the liquid table continues the crystal from its melting point, on the crystal's H scale
+      // the liquid's first row sits just above the melting point
       const rows = b.melting !== undefined ? b.rows.filter((r: JanafRow) => r.T >= b.melting.T_K) : b.rows;
-      const shifted = b.melting !== undefined ? rows.map((r: JanafRow, i: number) => (i === 0 ? { ...r, note: "melting" } : r)) : rows;
-      add(key, b.table, shifted, b.H_shift_kJ_per_mol ?? 0);
-      if (b.melting !== undefined) {
-        const t = byKey.get(key)!;
-        t.upper[t.rows.length - rows.length] = true; // the liquid's first row sits above the melting point
-      }
+      add(key, b.table, rows, b.H_shift_kJ_per_mol ?? 0, b.melting !== undefined);
     }
   }
   return [...byKey].map(([key, t]) => ({ key, ...t })).sort((a, b) => (a.key < b.key ? -1 : 1));

@@ -1749,140 +1749,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "note": "Burcat-Ruscic 2005 records CODA 89A, crystal 200-933.61 K chained to the liquid (933.61-6000 K) with the melting enthalpy the records imply; the crystal Cp deviates from NIST-JANAF table Al-001 by up to 2.9 % near 900 K per the reference self-check. Above 933.61 K the entry is the liquid although keyed (cr)"
   },
   {
-    "key": "Fe(cr)",
-    "formula": "Fe",
-    "phase": "cr",
-    "name": "iron",
-    "cas": "7439-89-6",
-    "dataset": "burcat-ruscic-2005",
-    "hf298KJPerMol": -0.0,
-    "hf298Source": "burcat-ruscic-2005",
-    "s298JPerMolK": 27.321,
-    "s298Source": "burcat-ruscic-2005",
-    "heatCapacity": {
-      "source": "burcat-ruscic-2005",
-      "ranges": [
-        {
-          "TminK": 200.0,
-          "TmaxK": 1000.0,
-          "cp": {
-            "form": "nasa7",
-            "a": [
-              2.41337476,
-              -0.00157780744,
-              2.14701339e-05,
-              -3.80171438e-08,
-              2.20426984e-11,
-              -774.380998,
-              -10.6560296
-            ]
-          }
-        },
-        {
-          "TminK": 1000.0,
-          "TmaxK": 1042.0,
-          "cp": {
-            "form": "nasa7",
-            "a": [
-              4690.80173,
-              -9.90659991,
-              0.00269427446,
-              5.54445321e-06,
-              -3.01659823e-09,
-              -1415475.86,
-              -24929.4387
-            ]
-          }
-        },
-        {
-          "TminK": 1042.0,
-          "TmaxK": 1184.0,
-          "cp": {
-            "form": "nasa7",
-            "a": [
-              659.678809,
-              -1.14058217,
-              0.000496306997,
-              0.0,
-              0.0,
-              -252106.802,
-              -3656.65236
-            ]
-          }
-        },
-        {
-          "TminK": 1184.0,
-          "TmaxK": 1665.0,
-          "cp": {
-            "form": "nasa7",
-            "a": [
-              61.010999,
-              -0.160945061,
-              0.000168369493,
-              -7.74563702e-08,
-              1.3309129e-11,
-              -16533.5454,
-              -313.710668
-            ]
-          }
-        },
-        {
-          "TminK": 1665.0,
-          "TmaxK": 1809.0,
-          "cp": {
-            "form": "nasa7",
-            "a": [
-              -435.904698,
-              0.768489448,
-              -0.000446898892,
-              8.67070913e-08,
-              0.0,
-              187925.534,
-              2450.57619
-            ]
-          }
-        },
-        {
-          "TminK": 1809.0,
-          "TmaxK": 6000.0,
-          "cp": {
-            "form": "nasa7",
-            "a": [
-              5.53538332,
-              0.0,
-              0.0,
-              0.0,
-              0.0,
-              -1274.28941,
-              -29.4772271
-            ]
-          }
-        }
-      ]
-    },
-    "transitions": [
-      {
-        "TK": 1184.0,
-        "dHKJPerMol": 0.899969,
-        "label": "Fe(c)",
-        "source": "burcat-ruscic-2005"
-      },
-      {
-        "TK": 1665.0,
-        "dHKJPerMol": 0.837005,
-        "label": "Fe(d)",
-        "source": "burcat-ruscic-2005"
-      },
-      {
-        "TK": 1809.0,
-        "dHKJPerMol": 13.806914,
-        "label": "Fe(L)",
-        "source": "burcat-ruscic-2005"
-      }
-    ],
-    "note": "Burcat-Ruscic 2005 records J 3/78 (the NIST-JANAF reference-state table Fe-003): alpha to 1042 K, beta (paramagnetic bcc) to 1184 K, gamma to 1665 K, delta to 1809 K, liquid to 6000 K, chained with the transition enthalpies the records imply. The polynomials smooth the Cp peak at the Curie point (1042 K): Cp is 3.3 % under NIST-JANAF at 1000 K while H - H298 stays within 0.24 kJ/mol. The NIST WebBook Shomate fit of bcc iron was not used: it has no gamma range. Above 1809 K the entry is the liquid although keyed (cr)"
-  },
-  {
     "key": "MgCO3(cr)",
     "formula": "MgCO3",
     "phase": "cr",
@@ -2398,5 +2264,155 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
       ]
     },
     "note": "Burcat-Ruscic 2005 record T 06/02, NASA-7 200-6000 K; the default methanol vapour: its Cp(298.15 K) is 44.0 J/(mol K), close to the NIST-JANAF value (about 44.1, from memory), where the GRI-Mech 3.0 set gives 2.5 % less"
+  },
+  {
+    "key": "Fe(cr)",
+    "formula": "Fe",
+    "phase": "cr",
+    "name": "iron",
+    "cas": "7439-89-6",
+    "dataset": "burcat-ruscic-2005",
+    "hf298KJPerMol": 0,
+    "hf298Source": "common practice",
+    "s298JPerMolK": 27.321,
+    "s298Source": "nist-webbook",
+    "heatCapacity": {
+      "source": "burcat-ruscic-2005",
+      "ranges": [
+        {
+          "TminK": 298,
+          "TmaxK": 600.0,
+          "cp": {
+            "form": "shomate",
+            "A": 18.42868,
+            "B": 24.64301,
+            "C": -8.91372,
+            "D": 9.664706,
+            "E": -0.012643,
+            "F": -6.573022,
+            "G": 42.51488,
+            "H": 0.0
+          },
+          "source": "nist-webbook"
+        },
+        {
+          "TminK": 600.0,
+          "TmaxK": 1000.0,
+          "cp": {
+            "form": "nasa7",
+            "a": [
+              2.41337476,
+              -0.00157780744,
+              2.14701339e-05,
+              -3.80171438e-08,
+              2.20426984e-11,
+              -774.380998,
+              -10.6560296
+            ]
+          }
+        },
+        {
+          "TminK": 1000.0,
+          "TmaxK": 1042.0,
+          "cp": {
+            "form": "nasa7",
+            "a": [
+              4690.80173,
+              -9.90659991,
+              0.00269427446,
+              5.54445321e-06,
+              -3.01659823e-09,
+              -1415475.86,
+              -24929.4387
+            ]
+          }
+        },
+        {
+          "TminK": 1042.0,
+          "TmaxK": 1184.0,
+          "cp": {
+            "form": "nasa7",
+            "a": [
+              659.678809,
+              -1.14058217,
+              0.000496306997,
+              0.0,
+              0.0,
+              -252106.802,
+              -3656.65236
+            ]
+          }
+        },
+        {
+          "TminK": 1184.0,
+          "TmaxK": 1665.0,
+          "cp": {
+            "form": "nasa7",
+            "a": [
+              61.010999,
+              -0.160945061,
+              0.000168369493,
+              -7.74563702e-08,
+              1.3309129e-11,
+              -16533.5454,
+              -313.710668
+            ]
+          }
+        },
+        {
+          "TminK": 1665.0,
+          "TmaxK": 1809.0,
+          "cp": {
+            "form": "nasa7",
+            "a": [
+              -435.904698,
+              0.768489448,
+              -0.000446898892,
+              8.67070913e-08,
+              0.0,
+              187925.534,
+              2450.57619
+            ]
+          }
+        },
+        {
+          "TminK": 1809.0,
+          "TmaxK": 6000.0,
+          "cp": {
+            "form": "nasa7",
+            "a": [
+              5.53538332,
+              0.0,
+              0.0,
+              0.0,
+              0.0,
+              -1274.28941,
+              -29.4772271
+            ]
+          }
+        }
+      ]
+    },
+    "transitions": [
+      {
+        "TK": 1184.0,
+        "dHKJPerMol": 0.899969,
+        "label": "alpha-gamma",
+        "source": "burcat-ruscic-2005"
+      },
+      {
+        "TK": 1665.0,
+        "dHKJPerMol": 0.837005,
+        "label": "gamma-delta",
+        "source": "burcat-ruscic-2005"
+      },
+      {
+        "TK": 1809.0,
+        "dHKJPerMol": 13.806914,
+        "label": "melting",
+        "source": "burcat-ruscic-2005"
+      }
+    ],
+    "note": "alpha iron to 600 K: the first range of the NIST WebBook Shomate fit of NIST-JANAF table Fe-004 (the Burcat-Ruscic alpha polynomial is 1.3 % high in Cp at 500 K); from 600 K the Burcat-Ruscic 2005 records J 3/78 (the NIST-JANAF reference-state table Fe-003): alpha to 1042 K, beta (paramagnetic bcc) to 1184 K, gamma to 1665 K, delta to 1809 K, liquid to 6000 K, chained with the transition enthalpies those records imply. The polynomials smooth the Cp peak at the Curie point (1042 K): Cp is 3.3 % under NIST-JANAF at 1000 K while H - H298 stays within 0.25 kJ/mol. Above 1809 K the entry is the liquid although keyed (cr); reference state of iron (ΔfH° = 0)"
   }
 ];

@@ -1115,6 +1115,7 @@ export const WEBBOOK_SHOMATE_SPECIES: readonly SpeciesEntryInput[] = [
       "ethene"
     ],
     "dataset": "nist-janaf",
+    "alternative": true,
     "hf298KJPerMol": 52.46694,
     "hf298Source": "nist-webbook",
     "s298JPerMolK": 219.33,
