@@ -50,6 +50,6 @@ export function run(): void {
   });
   console.log("\nPeroxide dosing tank — 1 kg of 8 wt % H2O2 in water at 25 °C, full decomposition (invented batch)");
   console.log(`  adiabatic temperature rise ΔT_ad = ${rise.deltaT.toFixed(1)} K → ${rise.T.toFixed(1)} K, with ${(rise.outlet.flows["O2(g)"] ?? 0).toFixed(3)} mol O2 released`);
-  console.log("  CAUTION: a screening estimate (ideal data, H2O2(l) values from memory, no vaporisation, no vessel heat capacity).");
+  console.log("  CAUTION: a screening estimate (ideal data, H2O2(l) from the Burcat–Ruscic 2005 liquid record, no vaporisation, no vessel heat capacity).");
   console.log("  It is no substitute for calorimetry of the real mixture or a hazard study; follow local codes and licensed engineering practice.");
 }

@@ -11,6 +11,7 @@ const sections: string[] = [
   "./species.js",
   "./heat-capacity.js",
   "./energy.js",
+  "./speciesData.js",
   "./flame.js",
 ];
 

@@ -1,6 +1,7 @@
 import { RxthermError } from "../errors.js";
 import { GAS_CONSTANT_J_PER_MOL_K } from "../units.js";
 import type { Library, Species } from "../species/types.js";
+import { noteExtrapolation, type ExtrapolatedPoint } from "../species/noteExtrapolation.js";
 import type { Reaction } from "../reaction/types.js";
 import type { ExtentSpec, Flows, Stream } from "../extent/types.js";
 import { solveExtents } from "../extent/solveExtents.js";
@@ -70,6 +71,12 @@ export interface AdiabaticReactionResult {
   readonly inletEnthalpy: number;
   /** The balance used: `"constant-pressure"` (H conserved) or `"constant-volume"` (U conserved). */
   readonly vessel: "constant-pressure" | "constant-volume";
+  /**
+   * Each species evaluated outside its data range, with the temperature: inlet species at their
+   * stream temperatures, outlet species at the solution T (possible only with `extrapolate: true`);
+   * empty when every species was inside its range.
+   */
+  readonly extrapolated: readonly ExtrapolatedPoint[];
 }
 
 /**
@@ -171,8 +178,10 @@ function solveAdiabatic(fn: string, input: AdiabaticReactionInput, options: Adia
   let uIn = 0; // Σ n·(H − R·T) over the gases, Σ n·H over condensed phases
   let nTotal = 0;
   let weightedT = 0;
+  const extrapolated: ExtrapolatedPoint[] = [];
   for (const r of resolved) {
     for (let i = 0; i < r.species.length; i++) {
+      noteExtrapolation(extrapolated, r.species[i]!, r.T);
       const h = r.flows[i]! * r.species[i]!.enthalpy(r.T, ro);
       hIn += h;
       uIn += r.species[i]!.phase === "g" ? h - r.flows[i]! * GAS_CONSTANT_J_PER_MOL_K * r.T : h;
@@ -220,8 +229,9 @@ function solveAdiabatic(fn: string, input: AdiabaticReactionInput, options: Adia
   outKeys.forEach((k, i) => { outletFlows[k] = outFlows[i]!; });
   const P = inlets[0]!.P;
   const outlet: Stream = P === undefined ? { T: root.root, flows: outletFlows } : { T: root.root, flows: outletFlows, P };
+  noteExtrapolation(extrapolated, outSpecies, root.root);
   const result: AdiabaticReactionResult = {
-    T: root.root, outlet, extents: [...ext.extents], iterations: root.iterations, residual: root.residual, inletEnthalpy: hIn, vessel,
+    T: root.root, outlet, extents: [...ext.extents], iterations: root.iterations, residual: root.residual, inletEnthalpy: hIn, vessel, extrapolated,
   };
   // starting temperature: the batch T, or the adiabatic mixing temperature of the inlet streams
   let startT = resolved[0]!.T;
@@ -238,6 +248,7 @@ function solveAdiabatic(fn: string, input: AdiabaticReactionInput, options: Adia
       return h - target;
     }, [Math.min(...resolved.map((r) => r.T)), Math.max(...resolved.map((r) => r.T))], { toleranceX: toleranceK, limits: mixLimits });
     startT = mix.root;
+    noteExtrapolation(extrapolated, mixSpecies, startT);
   }
   return { result, startT };
 }

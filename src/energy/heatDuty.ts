@@ -1,6 +1,7 @@
 import { RxthermError } from "../errors.js";
 import { GAS_CONSTANT_J_PER_MOL_K } from "../units.js";
 import type { Library, Species } from "../species/types.js";
+import { noteExtrapolation, type ExtrapolatedPoint } from "../species/noteExtrapolation.js";
 import type { Reaction } from "../reaction/types.js";
 import type { Stream } from "../extent/types.js";
 import { resolveStream, type Entry, type ResolvedStream } from "./internal/energyStreams.js";
@@ -118,6 +119,11 @@ export interface HeatDutyResult {
   readonly pvTerm: number;
   /** Sanity warnings (only with `warnings: true`). */
   readonly warnings: readonly string[];
+  /**
+   * Each species evaluated outside its data range, with the stream temperature (possible only with
+   * `extrapolate: true`); empty when every species was inside its range.
+   */
+  readonly extrapolated: readonly ExtrapolatedPoint[];
 }
 
 /**
@@ -187,13 +193,15 @@ export function heatDuty(input: HeatDutyInput, options: HeatDutyOptions = {}): H
   }
 
   // ── stream enthalpies ──
+  const extrapolated: ExtrapolatedPoint[] = [];
   const streamHeat = (r: ResolvedStream): StreamHeat => {
     let h = 0;
     let sensible = 0;
     for (let i = 0; i < r.species.length; i++) {
       const s = r.species[i]!;
       const n = r.flows[i]!;
-      const H = s.enthalpy(r.T, ro);
+      const H = s.enthalpy(r.T, ro); // throws OUT_OF_RANGE outside the range unless extrapolating
+      noteExtrapolation(extrapolated, s, r.T);
       h += n * H;
       sensible += n * (H - s.hf298);
     }
@@ -235,6 +243,7 @@ export function heatDuty(input: HeatDutyInput, options: HeatDutyOptions = {}): H
     phaseChanges,
     pvTerm: clean(pvTerm),
     warnings,
+    extrapolated,
   };
 }
 

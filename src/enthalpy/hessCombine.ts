@@ -56,8 +56,8 @@ export interface HessCombination {
  * @throws RxthermError `INVALID_ARGUMENT` when `known` is empty or an enthalpy is not a finite number or decimal text
  * @category Enthalpy
  * @example
- * hessCombine("C(gr) + 0.5 O2(g) -> CO(g)", [
- *   { reaction: "C(gr) + O2(g) -> CO2(g)", enthalpy: -393510 },
+ * hessCombine("C(cr) + 0.5 O2(g) -> CO(g)", [
+ *   { reaction: "C(cr) + O2(g) -> CO2(g)", enthalpy: -393510 },
  *   { reaction: "CO(g) + 0.5 O2(g) -> CO2(g)", enthalpy: -282980 },
  * ]) // => { multipliers: [1, -1], enthalpy: -110530, ... }
  * @see G. H. Hess, Pogg. Ann. 50 (1840) 385 (law of constant heat summation).

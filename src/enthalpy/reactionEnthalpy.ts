@@ -1,6 +1,7 @@
 import { RxthermError } from "../errors.js";
 import { STANDARD_TEMPERATURE_K } from "../units.js";
 import type { Library } from "../species/types.js";
+import { noteExtrapolation, type ExtrapolatedPoint } from "../species/noteExtrapolation.js";
 import type { Reaction } from "../reaction/types.js";
 import type Decimal from "decimal.js";
 import type { Rational } from "../numeric/rational.js";
@@ -28,7 +29,7 @@ export interface ReactionEnthalpyOptions {
   per?: string;
   /**
    * Evaluate species enthalpies outside their data range by extending the nearest Cp form
-   * instead of throwing `OUT_OF_RANGE`; the result then says `extrapolated: true`.
+   * instead of throwing `OUT_OF_RANGE`; the result's `extrapolated` then lists each species and T outside its data.
    * @defaultValue false
    */
   extrapolate?: boolean;
@@ -71,8 +72,11 @@ export interface ReactionEnthalpyResult {
   readonly exact?: string;
   /** Species the result is expressed per mol of, or null for per mol of reaction as written. */
   readonly per: string | null;
-  /** True when some species was evaluated outside its data range. */
-  readonly extrapolated: boolean;
+  /**
+   * Each species evaluated outside its data range, with the temperature (possible only with
+   * `extrapolate: true`); empty when every species was inside its range.
+   */
+  readonly extrapolated: readonly ExtrapolatedPoint[];
   /** The contribution of each species. */
   readonly terms: readonly ReactionEnthalpyTerm[];
 }
@@ -117,7 +121,7 @@ export function reactionEnthalpy(reaction: Reaction | string, options: ReactionE
   const n = p.species.length;
   const terms: ReactionEnthalpyTerm[] = new Array(n);
   let value = 0;
-  let extrapolated = false;
+  const extrapolated: ExtrapolatedPoint[] = [];
   let exact: string | undefined;
   if (T === STANDARD_TEMPERATURE_K) {
     const sum = standardEnthalpyExact(p);
@@ -131,13 +135,12 @@ export function reactionEnthalpy(reaction: Reaction | string, options: ReactionE
   } else {
     for (let i = 0; i < n; i++) {
       const s = p.species[i]!;
-      if (T < s.range[0] || T > s.range[1]) extrapolated = true;
-      const h = s.enthalpy(T, rangeOptions);
+      const h = s.enthalpy(T, rangeOptions); // throws OUT_OF_RANGE outside the range unless extrapolating
+      noteExtrapolation(extrapolated, s, T);
       value += p.nu[i]! * h;
       terms[i] = { species: p.keys[i]!, coefficient: p.nu[i]! / divisor, enthalpy: h };
     }
     value = zeroToPositive(value / divisor);
-    extrapolated = extrapolated && extrapolate;
   }
   const uncertainty = propagatedUncertainty(p, divisor);
   const result: ReactionEnthalpyResult = {

@@ -2,6 +2,7 @@ import { RxthermError } from "../errors.js";
 import { ATMOSPHERE_PA } from "../units.js";
 import type { Flows } from "../extent/types.js";
 import type { Library, Species } from "../species/types.js";
+import { noteExtrapolation, type ExtrapolatedPoint } from "../species/noteExtrapolation.js";
 import { flameSpecies } from "./internal/flameLinks.js";
 import {
   amount,
@@ -53,7 +54,7 @@ export interface EquilibriumOptions {
   toleranceK?: number;
   /**
    * Evaluate species data outside their temperature range (and search the temperature in
-   * [200, 6000] K at least) instead of throwing; the result then says `extrapolated: true`.
+   * [200, 6000] K at least) instead of throwing; the result's `extrapolated` then lists each species and T outside its data.
    * @defaultValue false
    */
   extrapolate?: boolean;
@@ -95,8 +96,11 @@ export interface EquilibriumResult {
   readonly elementPotentials: Readonly<Record<string, number>>;
   /** Product species left out because they hold an element absent from the feed. */
   readonly excluded: readonly string[];
-  /** True when some species was evaluated outside its data range (only with `extrapolate`). */
-  readonly extrapolated: boolean;
+  /**
+   * Each product species outside its data range at the result temperature, with that temperature
+   * (possible only with `extrapolate: true`); empty when every species was inside its range.
+   */
+  readonly extrapolated: readonly ExtrapolatedPoint[];
 }
 
 /**
@@ -213,7 +217,7 @@ function buildResult(e: Engine, T: number, P: number, temperatureIterations: num
     energyResidual,
     elementPotentials,
     excluded: [...e.excluded],
-    extrapolated: e.extrapolated,
+    extrapolated: noteExtrapolation([], e.species, T),
   };
 }
 

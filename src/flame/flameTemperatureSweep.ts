@@ -1,3 +1,4 @@
+import type { ExtrapolatedPoint } from "../species/noteExtrapolation.js";
 import { RxthermError } from "../errors.js";
 import { solveFlamePoint, type FlamePoint } from "./internal/flameProblem.js";
 import { flamePointOf, prepareFlameInput, toFlameResult } from "./internal/flameInput.js";
@@ -42,8 +43,11 @@ export interface FlameSweepResult {
   readonly iterations: readonly number[];
   /** Energy residual at each value, J. */
   readonly residual: readonly number[];
-  /** True where the temperature lies outside the products' data range (only with `extrapolate`). */
-  readonly extrapolated: readonly boolean[];
+  /**
+   * For each point, the species evaluated outside their data range with the temperature (see
+   * {@link AdiabaticFlameResult.extrapolated}); empty arrays when none (possible only with `extrapolate: true`).
+   */
+  readonly extrapolated: readonly (readonly ExtrapolatedPoint[])[];
 }
 
 /**
@@ -106,7 +110,7 @@ export function flameTemperatureSweep(input: AdiabaticFlameInput, sweep: FlameSw
   const phi: number[] = [];
   const iterations: number[] = [];
   const residual: number[] = [];
-  const extrapolated: boolean[] = [];
+  const extrapolated: (readonly ExtrapolatedPoint[])[] = [];
   const products: Record<string, number[]> = {};
   points.forEach((pt, index) => {
     let r;

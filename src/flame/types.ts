@@ -3,6 +3,7 @@
  *
  * @module
  */
+import type { ExtrapolatedPoint } from "../species/noteExtrapolation.js";
 import type { Flows } from "../extent/types.js";
 import type { Library } from "../species/types.js";
 
@@ -56,7 +57,7 @@ export interface AdiabaticFlameOptions {
   elementTolerance?: number;
   /**
    * Evaluate species data outside their temperature range (search in [200, 6000] K at least)
-   * instead of throwing `NO_BRACKET`/`OUT_OF_RANGE`; the result then says whether it extrapolated.
+   * instead of throwing `NO_BRACKET`/`OUT_OF_RANGE`; the result's `extrapolated` then lists each species and T outside its data.
    * @defaultValue false
    */
   extrapolate?: boolean;
@@ -100,6 +101,10 @@ export interface AdiabaticFlameResult {
   readonly equilibriumIterations: number;
   /** Relative element balance of the equilibrium products (0 in mode "complete", exact by construction). */
   readonly elementResidual: number;
-  /** True when the temperature lies outside the products' data range (only with `extrapolate`). */
-  readonly extrapolated: boolean;
+  /**
+   * Each species evaluated outside its data range, with the temperature: reactants at their stream
+   * temperatures, products at the flame temperature (possible only with `extrapolate: true`); empty
+   * when every species was inside its range.
+   */
+  readonly extrapolated: readonly ExtrapolatedPoint[];
 }

@@ -10,19 +10,22 @@ let cached: SpeciesLibrary | undefined;
  * The built-in species library, created on first use and then shared (it is immutable).
  *
  * It holds, with a source id on every value: the NIST Chemistry WebBook Shomate set (gas-phase fits
- * from NIST-JANAF, 4th ed. 1998; data set `"nist-janaf"`, the default wherever it has the species);
- * the GRI-Mech 3.0 NASA-7 polynomials (data set `"gri-mech-3.0"`, the default only for species the Shomate
- * set lacks, selectable for the others: `library.get("CH4(g)", { dataset: "gri-mech-3.0" })`; GRI-Mech CH4,
- * NO2, N2O and high-T H2O deviate 1–4 % in Cp from NIST-JANAF); and ΔfH°, S° and a constant Cp° over a
- * narrow stated range for common fuels, solvents, process chemicals and minerals, written from memory
- * of the published tables (source id `memory`: check them before design use).
+ * from NIST-JANAF, 4th ed. 1998; data set `"nist-janaf"`, the default wherever it has the species) and
+ * its condensed-phase fits (lime, periclase, rock salt, iron oxides); the Burcat–Ruscic 2005 NASA-7
+ * polynomials (`"burcat-ruscic-2005"`: fuels, solvents, atomic O to 6000 K, graphite `C(cr)`, sulfur,
+ * iron and aluminium through their phase changes, organic liquids); Cp polynomials fitted to NIST-JANAF
+ * rows for salts and hydroxides (`"nist-janaf"`); published Cp equations (calcite, anhydrite, urea,
+ * three liquids); the GRI-Mech 3.0 NASA-7 polynomials (data set `"gri-mech-3.0"`, the default only for
+ * species no other set has, selectable for the others: `library.get("CH4(g)", { dataset: "gri-mech-3.0" })`;
+ * GRI-Mech CH4, NO2, N2O and high-T H2O deviate 1–4 % in Cp from NIST-JANAF). A few values no source
+ * was found for are marked `memory` (see docs/species.md): check them before design use.
  *
  * Nothing is computed at import: the data are validated and compiled on the first call (a few ms).
  *
  * @returns the built-in library
  * @category Species
  * @example
- * builtInLibrary().keys().length // => 73
+ * builtInLibrary().keys().length // => 95
  * builtInLibrary().get("methane").key // => "CH4(g)"
  * builtInLibrary().datasets("CH4(g)") // => ["nist-janaf", "gri-mech-3.0"]
  * @see {@link SOURCES} for the full citations

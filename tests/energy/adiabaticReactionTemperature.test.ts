@@ -87,3 +87,23 @@ describe("adiabaticReactionTemperature in a rigid vessel", () => {
     expect(caught(() => adiabaticReactionTemperature(METHANE_AIR, { vessel: "sealed" as never })).code).toBe("INVALID_ARGUMENT");
   });
 });
+
+describe("adiabaticReactionTemperature / adiabaticTemperatureRise: extrapolation is reported", () => {
+  // propane burnt lean from a cold feed (an invented case): the GRI-Mech 3.0 propane data start at 300 K,
+  // read down to 298.15 K, so a 250 K feed is outside them
+  const input = {
+    inlet: { T: 250, flows: { "C3H8(g)": 0.01, "O2(g)": 0.1, "N2(g)": 0.89 } },
+    reactions: ["C3H8(g) + 5 O2(g) -> 3 CO2(g) + 4 H2O(g)"],
+    specs: [{ of: "C3H8(g)", conversion: 1 }],
+  };
+
+  it("lists the feed species outside its data at the inlet T; empty when none", () => {
+    expect(caught(() => adiabaticReactionTemperature(input)).code).toBe("OUT_OF_RANGE");
+    const r = adiabaticReactionTemperature(input, { extrapolate: true });
+    expect(r.extrapolated).toEqual([{ species: "C3H8(g)", T: 250, range: [298.15, 5000] }]);
+    const rise = adiabaticTemperatureRise(input, { extrapolate: true });
+    expect(rise.extrapolated).toEqual(r.extrapolated);
+    const warm = adiabaticReactionTemperature({ ...input, inlet: { ...input.inlet, T: 300 } }, { extrapolate: true });
+    expect(warm.extrapolated).toEqual([]);
+  });
+});

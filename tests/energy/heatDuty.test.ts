@@ -146,3 +146,21 @@ describe("heatDuty", () => {
     expect(heatDuty(input).duty).toBeGreaterThan(0);
   });
 });
+
+describe("heatDuty: extrapolation is reported", () => {
+  // a calciner-type duty of our own: 1 mol/s limestone, 95 % calcined, solids and gas leave at 1150 K
+  const calciner = {
+    inlet: { T: 298.15, flows: { "CaCO3(cr)": 1 } },
+    outlet: { T: 1150, flows: { "CaCO3(cr)": 0.05, "CaO(cr)": 0.95, "CO2(g)": 0.95 } },
+  };
+
+  it("heatDuty lists each species outside its data with the stream T (empty when none)", () => {
+    // the calcite Cp equation (Jacobs, Kerrick and Krupka 1981) holds 298–775 K: unreacted CaCO3 at 1150 K is outside
+    const e = caught(() => heatDuty(calciner));
+    expect(e.code).toBe("OUT_OF_RANGE");
+    const r = heatDuty(calciner, { extrapolate: true });
+    expect(r.extrapolated).toEqual([{ species: "CaCO3(cr)", T: 1150, range: [298, 775] }]);
+    const inside = heatDuty({ inlet: { T: 298.15, flows: { "N2(g)": 1 } }, outlet: { T: 500, flows: { "N2(g)": 1 } } }, { extrapolate: true });
+    expect(inside.extrapolated).toEqual([]);
+  });
+});

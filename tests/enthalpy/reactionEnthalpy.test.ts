@@ -32,7 +32,7 @@ describe("reactionEnthalpy", () => {
       // NIST Chemistry WebBook (from memory): ΔfH° SO2(g) −296.84, SO3(g) −395.77 kJ/mol → 2 SO2 + O2 −197.86 kJ/mol
       ["2 SO2(g) + O2(g) -> 2 SO3(g)", -197.86 * kJ, "NIST WebBook"],
       // CODATA Key Values 1989 (from memory): ΔfH°(CO, g) = −110.53 kJ/mol (graphite burning to CO)
-      ["C(gr) + 0.5 O2(g) -> CO(g)", -110.53 * kJ, "CODATA 1989"],
+      ["C(cr) + 0.5 O2(g) -> CO(g)", -110.53 * kJ, "CODATA 1989"],
     ];
     for (const [text, published, source] of cases) {
       const v = reactionEnthalpy(text).value;
@@ -150,6 +150,8 @@ describe("reactionEnthalpy", () => {
     expect(e.details).toMatchObject({ per: "CO2(g)" });
     expect(caught(() => reactionEnthalpy("H2(g) + 0.5 O2(g) -> H2O(l)", { T: 900 })).code).toBe("OUT_OF_RANGE");
     const x = reactionEnthalpy("H2(g) + 0.5 O2(g) -> H2O(l)", { T: 600, extrapolate: true });
-    expect(x.extrapolated).toBe(true);
+    // NIST WebBook liquid-water Shomate range ends at 500 K: only H2O(l) is listed
+    expect(x.extrapolated).toEqual([{ species: "H2O(l)", T: 600, range: [273.16, 500] }]);
+    expect(reactionEnthalpy("H2(g) + 0.5 O2(g) -> H2O(g)", { T: 600, extrapolate: true }).extrapolated).toEqual([]);
   });
 });

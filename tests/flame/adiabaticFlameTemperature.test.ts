@@ -6,6 +6,11 @@ import { DEFAULT_FLAME_PRODUCTS } from "../../src/flame/flameDefaults.js";
 import { species } from "../../src/species/species.js";
 import { GAS_CONSTANT_J_PER_MOL_K } from "../../src/units.js";
 import { caught } from "../_helpers/caught.js";
+import { createLibrary } from "../../src/species/createLibrary.js";
+import { GRI_MECH_30_NASA7_SPECIES } from "../../src/species/data/griMech30Nasa7.js";
+
+/** The GRI-Mech 3.0 atomic-oxygen entry (200–3500 K), as the built-in data hold it. */
+const griO = () => GRI_MECH_30_NASA7_SPECIES.find((e) => e.key === "O(g)")!;
 
 // Rows copied from NIST-JANAF Thermochemical Tables, 4th ed. (Chase 1998); see the fixture's description.
 interface Row { T: number; Cp: number | null; H_minus_H298: number | null; dfH: number | null }
@@ -188,10 +193,12 @@ describe("adiabaticFlameTemperature", () => {
     const e = caught(() => adiabaticFlameTemperature({ fuel: "C3H8(g)", fuelT: 250 }));
     expect(e).toMatchObject({ code: "OUT_OF_RANGE", details: { species: "C3H8(g)", T: 250, stream: "fuel" } });
     const r = adiabaticFlameTemperature({ fuel: "C3H8(g)", fuelT: 250 }, { extrapolate: true });
-    expect(r.extrapolated).toBe(true);
+    // the GRI-Mech 3.0 propane data start at 300 K (read down to 298.15 K): the fuel is listed at its stream T
+    expect(r.extrapolated).toEqual([{ species: "C3H8(g)", T: 250, range: [298.15, 5000] }]);
+    expect(adiabaticFlameTemperature({ fuel: "C3H8(g)" }, { extrapolate: true }).extrapolated).toEqual([]);
   });
 
-  it("adiabaticFlameTemperature throws ELEMENTS_NOT_COVERED when the gases cannot hold the carbon (no C(gr))", () => {
+  it("adiabaticFlameTemperature throws ELEMENTS_NOT_COVERED when the gases cannot hold the carbon (no C(cr))", () => {
     // acetylene at φ = 2.6: fewer O than C atoms, and the default products hold carbon only as CO/CO2
     const e = caught(() => adiabaticFlameTemperature({ fuel: "C2H2(g)", equivalenceRatio: 2.6 }));
     expect(e.code).toBe("ELEMENTS_NOT_COVERED");
@@ -204,15 +211,25 @@ describe("adiabaticFlameTemperature", () => {
     expect(e.details.elements).toEqual(["N"]);
   });
 
-  it("adiabaticFlameTemperature throws NO_BRACKET above the product data range, and extrapolates only on request", () => {
-    // CH4–O2 in a closed vessel: the explosion temperature passes 3500 K, the upper limit of the O(g) data
+  it("adiabaticFlameTemperature holds above 3500 K with the default products (atomic O to 6000 K)", () => {
+    // CH4–O2 in a closed vessel: the explosion temperature passes 3500 K, where the GRI-Mech 3.0 O(g)
+    // data stop; the default O(g) (Burcat–Ruscic 2005) reaches 6000 K, so nothing is extrapolated
     const input = { fuel: "CH4(g)", oxidizer: "oxygen", process: "constant-volume" } as const;
+    const r = adiabaticFlameTemperature(input);
+    expect(r.T).toBeGreaterThan(3500);
+    expect(r.extrapolated).toEqual([]);
+  });
+
+  it("adiabaticFlameTemperature throws NO_BRACKET above the product data range, and lists what it extrapolated on request", () => {
+    // a product set whose O(g) is the GRI-Mech 3.0 entry (to 3500 K), through a user library
+    const gri = createLibrary({ sources: {}, species: [{ ...griO(), alternative: false }] });
+    const input = { fuel: "CH4(g)", oxidizer: "oxygen", process: "constant-volume", library: gri } as const;
     const e = caught(() => adiabaticFlameTemperature(input));
     expect(e.code).toBe("NO_BRACKET");
     expect(e.details.rangeK).toEqual([298, 3500]);
     const r = adiabaticFlameTemperature(input, { extrapolate: true });
     expect(r.T).toBeGreaterThan(3500);
-    expect(r.extrapolated).toBe(true);
+    expect(r.extrapolated).toEqual([{ species: "O(g)", T: r.T, range: [200, 3500] }]);
   });
 
   it("adiabaticFlameTemperature reads a fuel object edited in place afresh (the reactant cache is keyed by content)", () => {

@@ -75,17 +75,17 @@ describe("equilibriumComposition", () => {
 
   it("equilibriumComposition deposits graphite from a carbon-rich feed and puts its potential at g°/RT", () => {
     const T = 900;
-    const r = equilibriumComposition({ feed: { "CH4(g)": 1, "O2(g)": 0.3 }, species: ["CH4(g)", "CO(g)", "CO2(g)", "H2(g)", "H2O(g)", "C(gr)"], T });
-    expect(r.condensed["C(gr)"]).toBeGreaterThan(0.1);
+    const r = equilibriumComposition({ feed: { "CH4(g)": 1, "O2(g)": 0.3 }, species: ["CH4(g)", "CO(g)", "CO2(g)", "H2(g)", "H2O(g)", "C(cr)"], T });
+    expect(r.condensed["C(cr)"]).toBeGreaterThan(0.1);
     // a pure condensed phase present at equilibrium has μ = g° (stationarity; common practice)
-    expect(r.elementPotentials.C).toBeCloseTo(species("C(gr)").gibbs(T) / (R * T), 9);
+    expect(r.elementPotentials.C).toBeCloseTo(species("C(cr)").gibbs(T) / (R * T), 9);
     expect(r.elementResidual).toBeLessThanOrEqual(1e-12);
   });
 
   it("equilibriumComposition leaves graphite out when the feed has oxygen to spare", () => {
-    const r = equilibriumComposition({ feed: { "CH4(g)": 1, "O2(g)": 2 }, species: ["CH4(g)", "CO(g)", "CO2(g)", "H2(g)", "H2O(g)", "O2(g)", "C(gr)"], T: 900 });
+    const r = equilibriumComposition({ feed: { "CH4(g)": 1, "O2(g)": 2 }, species: ["CH4(g)", "CO(g)", "CO2(g)", "H2(g)", "H2O(g)", "O2(g)", "C(cr)"], T: 900 });
     expect(r.condensed).toEqual({});
-    expect(r.moles["C(gr)"]).toBe(0);
+    expect(r.moles["C(cr)"]).toBe(0);
   });
 
   it("equilibriumComposition({ elements }) equals the same feed given as species", () => {
@@ -161,13 +161,16 @@ describe("equilibriumComposition", () => {
   });
 
   it("equilibriumComposition throws OUT_OF_RANGE beyond the data range unless asked to extrapolate", () => {
-    const e = caught(() => equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET, T: 4000 }));
+    // NIST WebBook Shomate ranges of H2O, H2, O2, OH, H end at 6000 K; Burcat–Ruscic 2005 O(g) too
+    expect(equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET, T: 4000 }).extrapolated).toEqual([]);
+    const e = caught(() => equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET, T: 6500 }));
     expect(e.code).toBe("OUT_OF_RANGE");
-    expect(e.details.range).toEqual([298, 3500]);
-    const r = equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET, T: 4000 }, { extrapolate: true });
-    expect(r.extrapolated).toBe(true);
-    // a condensed product counts too: the built-in C(gr) data end at 1000 K
-    const g = caught(() => equilibriumComposition({ feed: { "CH4(g)": 1 }, species: ["CH4(g)", "H2(g)", "C(gr)"], T: 1100 }));
-    expect(g).toMatchObject({ code: "OUT_OF_RANGE", details: { species: "C(gr)" } });
+    expect(e.details.range).toEqual([298, 6000]);
+    const r = equilibriumComposition({ feed: { "H2O(g)": 1 }, species: WATER_SET, T: 6500 }, { extrapolate: true });
+    expect(r.extrapolated.map((x) => x.species).sort()).toEqual([...WATER_SET].sort());
+    expect(r.extrapolated.every((x) => x.T === 6500)).toBe(true);
+    // a condensed product counts too: the built-in C(cr) data (Burcat–Ruscic 2005) end at 5000 K
+    const g = caught(() => equilibriumComposition({ feed: { "CH4(g)": 1 }, species: ["CH4(g)", "H2(g)", "C(cr)"], T: 5200 }));
+    expect(g).toMatchObject({ code: "OUT_OF_RANGE", details: { species: "C(cr)" } });
   });
 });

@@ -75,3 +75,15 @@ describe("flameTemperatureSweep", () => {
     expect(caught(() => flameTemperatureSweep({ fuel: "N2(g)" }, { parameter: "T", values: [300] })).code).toBe("NOTHING_TO_BURN");
   });
 });
+
+describe("flameTemperatureSweep: extrapolation per point", () => {
+  it("flameTemperatureSweep gives each point its own extrapolation list (empty inside the data)", () => {
+    const s = flameTemperatureSweep({ fuel: "C3H8(g)", fuelT: 250 }, { parameter: "equivalenceRatio", values: [0.9, 1] }, { extrapolate: true });
+    // GRI-Mech 3.0 propane starts at 300 K (read down to 298.15 K): the 250 K fuel is listed at both points
+    expect(s.extrapolated).toEqual([
+      [{ species: "C3H8(g)", T: 250, range: [298.15, 5000] }],
+      [{ species: "C3H8(g)", T: 250, range: [298.15, 5000] }],
+    ]);
+    expect(flameTemperatureSweep({ fuel: "CH4(g)" }, { parameter: "equivalenceRatio", values: [1] }).extrapolated).toEqual([[]]);
+  });
+});

@@ -13,6 +13,7 @@ import { GAS_CONSTANT_J_PER_MOL_K, STANDARD_PRESSURE_PA } from "../../units.js";
 import { increasingNewton } from "../../numeric/increasingNewton.js";
 import type { Flows } from "../../extent/types.js";
 import type { Library, Species } from "../../species/types.js";
+import { noteExtrapolation, type ExtrapolatedPoint } from "../../species/noteExtrapolation.js";
 import { flameSpecies } from "./flameLinks.js";
 import {
   amount,
@@ -90,7 +91,8 @@ export interface FlamePointResult {
   iterations: number;
   equilibriumIterations: number;
   elementResidual: number;
-  extrapolated: boolean;
+  /** Reactants outside their data at their stream T, products outside theirs at the flame T. */
+  extrapolated: ExtrapolatedPoint[];
   completeT: number | null;
 }
 
@@ -340,11 +342,11 @@ function oxidizerUnits(s: FlameSetup, phi: number): number {
 export function solveFlamePoint(s: FlameSetup, pt: FlamePoint): FlamePointResult {
   const units = oxidizerUnits(s, pt.phi);
   // reactant enthalpy and Σ n R T of the gases (for the vessel volume)
-  const acc: StreamSums = { H: 0, nRT: 0, extrapolated: false };
+  const acc: StreamSums = { H: 0, nRT: 0, extrapolated: [] };
   addStream(s.fn, "fuel", acc, s.fuel, 1, pt.fuelT, s.lim.extrapolate);
   addStream(s.fn, "oxidizer", acc, s.oxidizer, units, pt.oxidizerT, s.lim.extrapolate);
   addStream(s.fn, "diluent", acc, s.diluent, 1, pt.diluentT, s.lim.extrapolate);
-  const reactantsExtrapolated = acc.extrapolated;
+
   // constant volume: V = Σ n R T_in / P; the balance is on U = H − (n R T) for gases
   const volume = acc.nRT / pt.P;
   const target = s.constantVolume ? acc.H - acc.nRT : acc.H;
@@ -386,7 +388,7 @@ export function solveFlamePoint(s: FlameSetup, pt: FlamePoint): FlamePointResult
       iterations: c.iterations,
       equilibriumIterations: 0,
       elementResidual: 0,
-      extrapolated: c.extrapolated || reactantsExtrapolated,
+      extrapolated: noteExtrapolation(acc.extrapolated, Object.keys(c.moles).map((k) => cached(s, k)), c.T),
       completeT,
     };
   }
@@ -435,7 +437,7 @@ export function solveFlamePoint(s: FlameSetup, pt: FlamePoint): FlamePointResult
     iterations: sol.outerIterations,
     equilibriumIterations: engine.iterations,
     elementResidual: fullElementResidual(engine),
-    extrapolated: engine.extrapolated || reactantsExtrapolated,
+    extrapolated: noteExtrapolation(acc.extrapolated, engine.species, sol.T),
     completeT,
   };
 }
@@ -459,7 +461,7 @@ function gasMolesOf(s: FlameSetup, moles: Record<string, number>): number {
 interface StreamSums {
   H: number;
   nRT: number;
-  extrapolated: boolean;
+  extrapolated: ExtrapolatedPoint[];
 }
 
 function addStream(fn: string, what: string, acc: StreamSums, members: readonly Member[], factor: number, T: number, extrapolate: boolean): void {
@@ -475,7 +477,7 @@ function addStream(fn: string, what: string, acc: StreamSums, members: readonly 
           { species: m.key, T, range: [m.species.range[0], m.species.range[1]], stream: what },
         );
       }
-      acc.extrapolated = true;
+      noteExtrapolation(acc.extrapolated, m.species, T);
     }
     acc.H += n * m.species.enthalpy(T, opts);
     if (m.species.phase === "g") acc.nRT += n * R * T;
@@ -559,7 +561,7 @@ class CompleteBalance {
     if (this.rich && oFree < C) {
       throw new RxthermError(
         "INVALID_ARGUMENT",
-        `${s.fn} in mode "complete" needs at least one O per C beyond the sulphur (it would otherwise deposit carbon); this mixture has ${oFree} O for ${C} C — use mode "equilibrium" with C(gr) among the products`,
+        `${s.fn} in mode "complete" needs at least one O per C beyond the sulphur (it would otherwise deposit carbon); this mixture has ${oFree} O for ${C} C — use mode "equilibrium" with C(cr) among the products`,
         { equivalenceRatio: pt.phi, oxygen: oFree, carbon: C },
       );
     }

@@ -1,7 +1,10 @@
 /**
  * Built-in species from the GRI-Mech 3.0 thermodynamic data (NASA 7-coefficient polynomials),
  * copied digit for digit from the project's reference file. Where the WebBook Shomate set covers
- * the same species these entries are alternatives (`dataset: "gri-mech-3.0"`); otherwise they are the default.
+ * the same species these entries are alternatives (`dataset: "gri-mech-3.0"`), and so are atomic oxygen
+ * (the Burcat–Ruscic set reaches 6000 K, this one 3500 K) and methanol vapour (the Burcat–Ruscic Cp is
+ * the one close to NIST-JANAF near 298 K); otherwise they are the default, and so is ethylene, whose
+ * WebBook set stops at 1200 K.
  *
  * @module
  */
@@ -465,6 +468,7 @@ export const GRI_MECH_30_NASA7_SPECIES: readonly SpeciesEntryInput[] = [
     "phase": "g",
     "name": "atomic oxygen",
     "dataset": "gri-mech-3.0",
+    "alternative": true,
     "hf298KJPerMol": 249.1736,
     "hf298Source": "gri-mech-3.0",
     "s298JPerMolK": 161.06,
@@ -712,7 +716,6 @@ export const GRI_MECH_30_NASA7_SPECIES: readonly SpeciesEntryInput[] = [
     "phase": "g",
     "name": "ethylene",
     "dataset": "gri-mech-3.0",
-    "alternative": true,
     "hf298KJPerMol": 52.4997,
     "hf298Source": "gri-mech-3.0",
     "s298JPerMolK": 219.321,
@@ -812,6 +815,7 @@ export const GRI_MECH_30_NASA7_SPECIES: readonly SpeciesEntryInput[] = [
     "phase": "g",
     "name": "methanol",
     "dataset": "gri-mech-3.0",
+    "alternative": true,
     "hf298KJPerMol": -200.9389,
     "hf298Source": "gri-mech-3.0",
     "s298JPerMolK": 239.809,

@@ -2,6 +2,7 @@
  * Built-in species from the NIST Chemistry WebBook Shomate fits (gas-phase data derived from
  * NIST-JANAF 4th ed., Chase 1998), copied digit for digit from the project's reference file.
  * These are the default data set (`"nist-janaf"`) wherever GRI-Mech 3.0 covers the same species.
+ * Hematite (Fe2O3) with all three WebBook ranges is in `webbookCondensedShomate.ts`.
  *
  * @module
  */
@@ -1114,6 +1115,7 @@ export const WEBBOOK_SHOMATE_SPECIES: readonly SpeciesEntryInput[] = [
       "ethene"
     ],
     "dataset": "nist-janaf",
+    "alternative": true,
     "hf298KJPerMol": 52.46694,
     "hf298Source": "nist-webbook",
     "s298JPerMolK": 219.33,
@@ -1140,42 +1142,6 @@ export const WEBBOOK_SHOMATE_SPECIES: readonly SpeciesEntryInput[] = [
       ]
     },
     "note": "WebBook 1200-6000 K range omitted (F, G not confirmed)"
-  },
-  {
-    "key": "Fe2O3(cr)",
-    "formula": "Fe2O3",
-    "phase": "cr",
-    "name": "hematite",
-    "aliases": [
-      "iron(III) oxide"
-    ],
-    "dataset": "nist-janaf",
-    "hf298KJPerMol": -825.5032,
-    "hf298Source": "nist-webbook",
-    "s298JPerMolK": 87.332,
-    "s298Source": "nist-webbook",
-    "heatCapacity": {
-      "source": "nist-webbook",
-      "ranges": [
-        {
-          "TminK": 298,
-          "TmaxK": 950,
-          "cp": {
-            "form": "shomate",
-            "A": 93.43834,
-            "B": 108.3577,
-            "C": -50.86447,
-            "D": 25.58683,
-            "E": -1.61133,
-            "F": -863.2094,
-            "G": 161.0719,
-            "H": -825.5032
-          },
-          "note": "higher ranges (950-1050 K, 1050-2500 K) omitted: not confirmed"
-        }
-      ]
-    },
-    "note": "S298 evaluated from the WebBook Shomate fit (its G constant) at 298.15 K; WebBook ranges above 950 K omitted (not confirmed); the magnetic transition near 950 K is outside the kept range"
   },
   {
     "key": "Al2O3(cr)",

@@ -120,6 +120,9 @@ export class SpeciesLibrary implements Library {
     const q = query.trim();
     const exact = this.records.get(q);
     if (exact !== undefined) return exact;
+    // an alias written like a key (e.g. "C(gr)" for C(cr)) names one species
+    const alias = this.names.get(q.toLowerCase());
+    if (alias !== undefined && alias.length === 1 && PHASE_SUFFIX.test(q)) return this.records.get(alias[0]!)!;
     const m = PHASE_SUFFIX.exec(q);
     let candidates: string[];
     if (m !== null) {
