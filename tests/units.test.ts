@@ -1,5 +1,8 @@
 import { describe, expect, it } from "vitest";
-import { fromKelvin, toJoule, toKelvin, toMol, toPascal } from "../src/units.js";
+import {
+  fromJoule, fromJoulePerMol, fromKelvin, fromMolPerSecond, fromPascal, fromWatt, toJoule, toKelvin, toMol, toMolPerSecond, toPascal, toWatt,
+} from "../src/units.js";
+import { caught } from "./_helpers/caught.js";
 import { isRxthermError } from "../src/errors.js";
 
 // Conversion factors: NIST SP 811 (2008) Appendix B; 0 °C = 273.15 K by definition of the Celsius scale.
@@ -22,5 +25,61 @@ describe("units", () => {
     expect(toJoule(1, "kcal")).toBe(4184);
     expect(toJoule(1, "Btu")).toBeCloseTo(1055.056, 3);
     expect(toMol(1, "lbmol")).toBe(453.59237);
+  });
+});
+
+describe("flow, power and specific-energy units", () => {
+  it("toMolPerSecond(flow) reads molar, mass and normal-volume flows", () => {
+    expect(toMolPerSecond({ value: 36, unit: "kmol/h" })).toBeCloseTo(10, 12); // 1 h = 3600 s, common practice
+    // 1 lbmol = 453.59237 mol exactly (NIST SP 811 Appendix B)
+    expect(toMolPerSecond({ value: 1, unit: "lbmol/h" })).toBeCloseTo(0.12599788055555556, 15);
+    expect(toMolPerSecond({ value: 57.753, unit: "kg/h", molarMassGPerMol: 16.0425 })).toBeCloseTo(1, 12);
+    // 1 lb = 0.45359237 kg exactly (NIST SP 811 Appendix B)
+    expect(toMolPerSecond({ value: 3600, unit: "lb/h", molarMassGPerMol: 453.59237 })).toBeCloseTo(1, 12);
+    // molar volume of an ideal gas at 273.15 K, 101.325 kPa: 22.413 969 54 L/mol (CODATA 2018)
+    expect(toMolPerSecond({ value: 3600 * 0.02241396954, unit: "Nm3/h" })).toBeCloseTo(1, 9);
+    expect(toMolPerSecond({ value: 3600 * 0.02241396954, unit: "Nm³/h" })).toBeCloseTo(1, 9);
+  });
+  it("fromMolPerSecond(value, unit) is the inverse of toMolPerSecond", () => {
+    expect(fromMolPerSecond(10, "kmol/h")).toBe(36);
+    expect(fromMolPerSecond(1, "Nm3/h")).toBeCloseTo(80.6902903606, 9);
+    for (const unit of ["mol/h", "kmol/s", "lbmol/h", "kg/s", "t/h", "g/s", "lb/h"] as const) {
+      const back = toMolPerSecond({ value: fromMolPerSecond(2.5, unit, { molarMassGPerMol: 44.0095 }), unit, molarMassGPerMol: 44.0095 });
+      expect(back).toBeCloseTo(2.5, 10);
+    }
+  });
+  it("a mass unit without a molar mass is an INVALID_ARGUMENT naming the function", () => {
+    const e = caught(() => toMolPerSecond({ value: 1, unit: "kg/h" }));
+    expect(e.code).toBe("INVALID_ARGUMENT");
+    expect(e.message).toMatch(/toMolPerSecond requires a positive molarMassGPerMol for the mass unit kg\/h/);
+    expect(caught(() => fromJoulePerMol(1, "kJ/kg", { molarMassGPerMol: -2 })).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => toMolPerSecond({ value: 1, unit: "gal/min" as never })).message).toMatch(/does not know the unit gal\/min/);
+    expect(caught(() => fromWatt(Number.NaN, "kW")).code).toBe("INVALID_ARGUMENT");
+  });
+  it("toWatt / fromWatt (NIST SP 811 Appendix B: 1 Btu_IT/h = 0.293 071 1 W)", () => {
+    expect(toWatt(1, "Btu/h")).toBeCloseTo(0.2930711, 7);
+    expect(toWatt(1, "MMBtu/h")).toBeCloseTo(293071.0701722222, 6);
+    expect(fromWatt(-521756.75, "kW")).toBe(-521.75675);
+    expect(fromWatt(2.5e6, "MW")).toBe(2.5);
+    expect(fromWatt(4184, "kcal/h")).toBe(3600); // thermochemical calorie = 4.184 J (NIST SP 811)
+  });
+  it("fromJoulePerMol(value, unit) per amount, per mass and per Nm³", () => {
+    expect(fromJoulePerMol(-890310.1, "kJ/mol")).toBe(-890.3101);
+    expect(fromJoulePerMol(4184, "kcal/mol")).toBe(1);
+    // 1 Btu_IT/lb = 2.326 kJ/kg exactly (NIST SP 811 Appendix B)
+    expect(fromJoulePerMol(2326 * 16, "Btu/lb", { molarMassGPerMol: 16 })).toBe(1000);
+    expect(fromJoulePerMol(890310.1, "MJ/kg", { molarMassGPerMol: 16.0425 })).toBeCloseTo(55.497, 3);
+    expect(fromJoulePerMol(1000, "kJ/kmol")).toBe(1000);
+    expect(fromJoulePerMol(1, "Btu/lbmol")).toBeCloseTo(453.59237 / 1055.05585262, 12);
+    // 1 mol per 22.413 969 54 L (CODATA 2018) → kJ/Nm³
+    expect(fromJoulePerMol(22413.96954, "kJ/Nm3")).toBeCloseTo(1000, 6);
+    expect(fromJoulePerMol(22413.96954, "MJ/Nm³")).toBeCloseTo(1, 9);
+  });
+  it("fromPascal and fromJoule invert toPascal and toJoule", () => {
+    expect(fromPascal(250000, "bar")).toBe(2.5);
+    expect(fromPascal(101325, "atm")).toBe(1);
+    expect(fromJoule(1055.05585262, "Btu")).toBe(1);
+    expect(fromJoule(toJoule(3.7, "kcal"), "kcal")).toBe(3.7);
+    expect(caught(() => fromPascal(1, "torr" as never)).code).toBe("INVALID_ARGUMENT");
   });
 });

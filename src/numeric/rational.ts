@@ -9,6 +9,11 @@
  * Numbers are turned into rationals from their shortest decimal text (`String(x)`), never
  * from the binary double: `rationalFromNumber(0.1)` is exactly 1/10.
  *
+ * Every rational built by these functions is JSON-safe: `JSON.stringify` writes it as its
+ * text (`"25/2"`, `"-3"`) through a `toJSON` method on its prototype (not an own property,
+ * so `Object.keys` still gives `num`, `den`). Plain BigInts (from {@link gcdBigInt},
+ * {@link scaleToCoprimeIntegers}...) are JSON-safe through {@link jsonReplacer}.
+ *
  * @module
  */
 import { RxthermError } from "../errors.js";
@@ -182,7 +187,7 @@ export function rationalFromNumber(x: number): Rational {
  * @category Numeric
  */
 export function rationalFrom(value: RationalLike): Rational {
-  if (typeof value === "bigint") return Object.freeze({ num: value, den: 1n });
+  if (typeof value === "bigint") return Object.freeze(new ExactRational(value, 1n));
   if (typeof value === "number") return rationalFromNumber(value);
   if (typeof value === "string") return rationalFromDecimalString(value);
   return normalise(value.num, value.den);
@@ -379,13 +384,31 @@ function normalise(num: bigint, den: bigint): Rational {
     num = -num;
     den = -den;
   }
-  if (num === 0n) return Object.freeze({ num: 0n, den: 1n });
+  if (num === 0n) return Object.freeze(new ExactRational(0n, 1n));
   const g = gcdBigInt(num, den);
   if (g !== 1n) {
     num /= g;
     den /= g;
   }
-  return Object.freeze({ num, den });
+  return Object.freeze(new ExactRational(num, den));
+}
+
+/**
+ * The runtime shape of a {@link Rational}: two own fields and, on the prototype, `toJSON`
+ * giving the exact text, so results holding rationals survive `JSON.stringify` (a bare BigInt
+ * makes it throw).
+ */
+class ExactRational implements Rational {
+  readonly num: bigint;
+  readonly den: bigint;
+  constructor(num: bigint, den: bigint) {
+    this.num = num;
+    this.den = den;
+  }
+  /** Exact text for JSON, e.g. `"25/2"`. */
+  toJSON(): string {
+    return rationalToString(this);
+  }
 }
 
 function toBigIntStrict(v: bigint | number, name: string): bigint {
