@@ -54,11 +54,11 @@ export function caseFileSchema(): z.ZodType {
   if (schema !== undefined) return schema;
   const temperature = z.union([
     z.number().positive().describe("temperature in K"),
-    z.string().regex(new RegExp(TEMPERATURE_PATTERN)).describe("temperature with unit: K, C, °C, F, °F or R, e.g. \"25C\""),
+    z.string().regex(new RegExp(TEMPERATURE_PATTERN), "expected a temperature such as \"25C\", \"77F\" or \"298.15K\" (a bare number is K)").describe("temperature with unit: K, C, °C, F, °F or R, e.g. \"25C\""),
   ]);
   const pressure = z.union([
     z.number().positive().describe("pressure in Pa"),
-    z.string().regex(new RegExp(PRESSURE_PATTERN)).describe("pressure with unit: Pa, kPa, MPa, bar, atm or psi, e.g. \"2bar\""),
+    z.string().regex(new RegExp(PRESSURE_PATTERN), "expected a pressure such as \"2bar\", \"1atm\", \"30psi\" or \"250kPa\" (a bare number is Pa)").describe("pressure with unit: Pa, kPa, MPa, bar, atm or psi, e.g. \"2bar\""),
   ]);
   const flowUnit = z.enum(FLOW_UNITS as [FlowUnit, ...FlowUnit[]]);
   const stream = z.strictObject({
@@ -121,7 +121,7 @@ export function readCaseFile(text: string, library?: Library): CaseFile {
   }
   const parsed = caseFileSchema().safeParse(data);
   if (!parsed.success) {
-    throw invalid(parsed.error.issues.map((i) => ({ path: jsonPath(i.path), message: i.message.toLowerCase() })));
+    throw invalid(parsed.error.issues.map((i) => ({ path: jsonPath(i.path), message: i.message.charAt(0).toLowerCase() + i.message.slice(1) })));
   }
   const c = parsed.data as CaseData;
   const lib = library ?? builtInLibrary();

@@ -38,8 +38,8 @@ export const CLI_EXIT_CODES = EXIT;
  * Run the `rxtherm` command line on `argv` (the arguments after the program name) and return its exit code.
  *
  * Output goes through `io`: the result as an aligned table (or JSON with `--json`) on stdout, errors on
- * stderr as `rxtherm <command>: <message>` — with the error code, and for case files each bad field's
- * JSON path. Nothing is printed to stdout when a command fails.
+ * stderr as `rxtherm <command>: <message>`, or `rxtherm <command> [CODE]: <message>` for an error of the
+ * library (its {@link RxthermError} code; for case files each bad field's JSON path on its own line). Nothing is printed to stdout when a command fails.
  *
  * @param argv - arguments, e.g. `["balance", "C3H8 + O2 -> CO2 + H2O"]`
  * @param io - standard output and error, file reading, the optional database loader and the version
@@ -56,8 +56,13 @@ export async function runCli(argv: readonly string[], io: CliIO): Promise<number
     const topic = name === "help" ? rest[0] : undefined;
     const command = topic === undefined ? undefined : COMMANDS.find((c) => c.name === topic);
     if (topic !== undefined && command === undefined) return usageFailure(io, "rxtherm", `unknown command "${topic}"`);
+    // no command at all is a usage error: the help goes to stderr with exit code 2
+    if (name === undefined) {
+      io.stderr(mainHelp());
+      return EXIT.usage;
+    }
     io.stdout(command ? commandHelp(command) : mainHelp());
-    return name === undefined ? EXIT.usage : EXIT.ok;
+    return EXIT.ok;
   }
   if (name === "--version" || name === "-V") {
     io.stdout(`rxtherm ${io.version ?? "(version unknown)"}\n`);
@@ -82,7 +87,7 @@ export async function runCli(argv: readonly string[], io: CliIO): Promise<number
     if (e instanceof UsageError) return usageFailure(io, label, e.message);
     if (e instanceof RxthermError) {
       const message = e.message.replace(/^\[rxtherm\] /, "");
-      io.stderr(`${label}: ${message} [${e.code}]\n`);
+      io.stderr(`${label} [${e.code}]: ${message}\n`);
       return e.code === "NO_CONVERGENCE" || e.code === "NO_BRACKET" ? EXIT.noConvergence : EXIT.input;
     }
     io.stderr(`${label}: internal error: ${e instanceof Error ? e.stack ?? e.message : String(e)}\nplease report this with the command line that caused it\n`);

@@ -42,7 +42,9 @@ export const dutyCommand: Command = {
     try {
       text = ctx.io.readTextFile(file!);
     } catch (e) {
-      throw new RxthermError("INVALID_CASE", `cannot read the case file ${file}: ${(e as Error).message}`, {
+      const code = (e as { code?: unknown }).code;
+      const reason = code === "ENOENT" ? "no such file" : typeof code === "string" ? code : (e as Error).message;
+      throw new RxthermError("INVALID_CASE", `cannot read the case file ${file} (${reason})`, {
         issues: [{ path: "$", message: "file not readable" }],
       });
     }
