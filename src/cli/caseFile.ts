@@ -30,7 +30,7 @@ export interface CaseFile {
   /** Title from the file, or `""`. */
   readonly title: string;
   /** Inlet and outlet streams in K, Pa and mol/s, with reactions and extents (mol/s) when given. */
-  readonly input: HeatDutyInput;
+  readonly input: HeatDutyInput & { readonly inlet: readonly Stream[]; readonly outlet: readonly Stream[] };
   /** Method and extrapolation. */
   readonly options: HeatDutyOptions;
   /** Unit the duty is printed in. */
@@ -153,7 +153,7 @@ export function readCaseFile(text: string, library?: Library): CaseFile {
     issues.push({ path: "$.extents", message: `${c.extents.length} extents for ${c.reactions.length} reactions` });
   }
   if (issues.length > 0) throw invalid(issues);
-  const input: HeatDutyInput = { inlet, outlet, ...(library ? { library } : {}) };
+  const input: HeatDutyInput & { inlet: Stream[]; outlet: Stream[] } = { inlet, outlet, ...(library ? { library } : {}) };
   if (c.reactions !== undefined) input.reactions = c.reactions;
   if (c.extents !== undefined) {
     const unit = c.extentUnit ?? "mol/s";

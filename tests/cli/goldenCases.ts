@@ -43,6 +43,7 @@ export const GOLDEN_CASES: readonly GoldenCase[] = [
   { name: "flame-methane-equilibrium", args: ["flame", "CH4", "--excess-air", "15%"] },
   { name: "flame-biogas-complete-preheat", args: ["flame", "CH4:0.6,CO2:0.4", "--excess-air", "20%", "--air-T", "200C", "--mode", "complete"] },
   { name: "flame-unknown-option", args: ["flame", "CH4", "--excess", "15%"] },
+  { name: "flame-no-bracket", args: ["flame", "C2H2", "--oxidizer", "oxygen", "--mode", "complete", "--T", "3000K"] },
   { name: "species-co2", args: ["species", "CO2", "--T", "25C,500C,1000C"] },
   { name: "species-search", args: ["species", "--search", "meth"] },
   { name: "species-water-ambiguous", args: ["species", "H2O"] },

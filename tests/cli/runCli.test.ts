@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { CLI_EXIT_CODES, runCli } from "../../src/cli/runCli.js";
 import type { CliIO } from "../../src/cli/types.js";
 import { createLibrary } from "../../src/species/createLibrary.js";
+import { RxthermError } from "../../src/errors.js";
 
 interface Run { code: number; out: string; err: string }
 
@@ -61,17 +62,23 @@ describe("runCli(argv, io)", () => {
       expect(r.out).toBe("");
       expect(r.err).toMatch(/^rxtherm \S+ \[[A-Z_]+\]: /);
     }
-    // a flame whose product data cannot close the balance below the 6000 K limit is refused without extrapolation
+    // acetylene–oxygen from 3000 K burned completely cannot close its balance below the 6000 K data limit: NO_BRACKET
     const hot = await run(["flame", "C2H2", "--oxidizer", "oxygen", "--mode", "complete", "--T", "3000K"]);
-    expect([3, 4]).toContain(hot.code);
-    const internal = await run(["duty", "x.json"], { readTextFile: () => "{}", stdout: () => { throw new TypeError("broken pipe"); } });
+    expect(hot.code).toBe(4);
+    expect(hot.err).toMatch(/^rxtherm flame \[NO_BRACKET\]/);
+    const heater = JSON.stringify({ inlet: [{ T: "25C", flows: { "N2(g)": 1 } }], outlet: [{ T: "200C", flows: { "N2(g)": 1 } }] });
+    const internal = await run(["duty", "x.json"], { readTextFile: () => heater, stdout: () => { throw new TypeError("broken pipe"); } });
     expect(internal.code).toBe(CLI_EXIT_CODES.internal);
     expect(internal.err).toMatch(/internal error/);
   });
 
-  it("no convergence maps to exit code 4", async () => {
-    const { EXIT } = await import("../../src/cli/internal/usage.js");
-    expect(EXIT.noConvergence).toBe(4);
+  it("NO_CONVERGENCE and NO_BRACKET from the library map to exit code 4", async () => {
+    for (const code of ["NO_CONVERGENCE", "NO_BRACKET"] as const) {
+      const failing = { get: () => { throw new RxthermError(code, "solver gave up", {}); } };
+      const r = await run(["species", "CO2", "--database"], { loadDatabase: async () => ({ speciesDatabase: () => failing }) });
+      expect(r.code).toBe(4);
+      expect(r.err).toBe(`rxtherm species [${code}]: solver gave up\n`);
+    }
   });
 
   it("--version prints the version given by the host", async () => {

@@ -54,8 +54,7 @@ export const dutyCommand: Command = {
     const r = heatDuty(c.input, c.options);
     const q = (w: number) => num(fromWatt(w, unit), 7);
     const streamRows = (side: "inlet" | "outlet") => {
-      const list = ([] as typeof c.input.inlet[]).concat(c.input[side]) as { T: number; flows: Record<string, number> }[];
-      return list.map((s, i) => [
+      return c.input[side].map((s, i) => [
         side, c.names[side][i]!, fixed(fromKelvin(s.T, "C"), 2), num(fromMolPerSecond(totalFlow(s.flows), "kmol/h"), 6),
         q(r.streams[side][i]!.sensible),
       ]);
