@@ -109,7 +109,7 @@ export function rational(num: bigint | number, den: bigint | number = 1n): Ratio
  * @category Numeric
  */
 export function rationalFromInteger(n: bigint | number): Rational {
-  return Object.freeze({ num: toBigIntStrict(n, "value"), den: 1n });
+  return Object.freeze(new ExactRational(toBigIntStrict(n, "value"), 1n));
 }
 
 /**
@@ -171,7 +171,7 @@ export function rationalFromNumber(x: number): Rational {
   if (!Number.isFinite(x)) {
     throw new RxthermError("INVALID_ARGUMENT", `rationalFromNumber requires a finite number, got ${x}`, { value: x });
   }
-  if (Number.isSafeInteger(x)) return Object.freeze({ num: BigInt(x), den: 1n });
+  if (Number.isSafeInteger(x)) return Object.freeze(new ExactRational(BigInt(x), 1n));
   return rationalFromDecimalString(String(x));
 }
 
@@ -204,7 +204,7 @@ export function rationalFrom(value: RationalLike): Rational {
  * @category Numeric
  */
 export function rationalAdd(a: Rational, b: Rational): Rational {
-  if (a.den === 1n && b.den === 1n) return Object.freeze({ num: a.num + b.num, den: 1n });
+  if (a.den === 1n && b.den === 1n) return Object.freeze(new ExactRational(a.num + b.num, 1n));
   return normalise(a.num * b.den + b.num * a.den, a.den * b.den);
 }
 
@@ -219,7 +219,7 @@ export function rationalAdd(a: Rational, b: Rational): Rational {
  * @category Numeric
  */
 export function rationalSub(a: Rational, b: Rational): Rational {
-  if (a.den === 1n && b.den === 1n) return Object.freeze({ num: a.num - b.num, den: 1n });
+  if (a.den === 1n && b.den === 1n) return Object.freeze(new ExactRational(a.num - b.num, 1n));
   return normalise(a.num * b.den - b.num * a.den, a.den * b.den);
 }
 
@@ -234,7 +234,7 @@ export function rationalSub(a: Rational, b: Rational): Rational {
  * @category Numeric
  */
 export function rationalMul(a: Rational, b: Rational): Rational {
-  if (a.den === 1n && b.den === 1n) return Object.freeze({ num: a.num * b.num, den: 1n });
+  if (a.den === 1n && b.den === 1n) return Object.freeze(new ExactRational(a.num * b.num, 1n));
   return normalise(a.num * b.num, a.den * b.den);
 }
 
@@ -266,7 +266,7 @@ export function rationalDiv(a: Rational, b: Rational): Rational {
  * @category Numeric
  */
 export function rationalNeg(a: Rational): Rational {
-  return Object.freeze({ num: a.num === 0n ? 0n : -a.num, den: a.den });
+  return Object.freeze(new ExactRational(a.num === 0n ? 0n : -a.num, a.den));
 }
 
 /**
