@@ -83,3 +83,47 @@ describe("flow, power and specific-energy units", () => {
     expect(caught(() => fromPascal(1, "torr" as never)).code).toBe("INVALID_ARGUMENT");
   });
 });
+
+describe("docs/units.md: one example per function family (invented demo scenarios; values printed in the guide)", () => {
+  it("prints the values the guide shows", async () => {
+    const rx = await import("../src/index.js");
+    const { molarMass } = rx;
+    expect(toMolPerSecond({ value: 250, unit: "kg/h", molarMassGPerMol: molarMass("CH4") })).toBeCloseTo(4.3286, 4);
+    const r = rx.balanceReaction("C3H8 + O2 -> CO2 + H2O");
+    const o2 = toMolPerSecond({ value: 50, unit: "kg/h", molarMassGPerMol: molarMass("C3H8") }) * r.reactants[1]!.coefficient;
+    expect(fromMolPerSecond(o2, "kg/h", { molarMassGPerMol: molarMass("O2") })).toBeCloseTo(181.41, 2);
+    expect(fromMolPerSecond(o2, "Nm3/h")).toBeCloseTo(127.07, 2);
+    const ex = rx.solveExtents({
+      feed: { CH4: toMolPerSecond({ value: 36, unit: "kmol/h" }), H2O: toMolPerSecond({ value: 108, unit: "kmol/h" }) },
+      reactions: ["CH4 + H2O -> CO + 3 H2"], specs: [{ of: "CH4", conversion: 0.8 }],
+    });
+    expect(fromMolPerSecond(ex.outlet["H2"]!, "kmol/h")).toBeCloseTo(86.4, 9);
+    expect(fromMolPerSecond(ex.outlet["H2"]!, "Nm3/h")).toBeCloseTo(1936.6, 1);
+    const co2 = rx.species("CO2(g)");
+    const dH = co2.enthalpy(toKelvin(500, "C")) - co2.enthalpy(toKelvin(25, "C"));
+    // NIST-JANAF 4th ed. 1998: CO2 H°−H°298 at 800 K is 22.806 kJ/mol, at 700 K 17.754 — 773.15 K lies between
+    expect(dH).toBeGreaterThan(17754);
+    expect(dH).toBeLessThan(22806);
+    expect(fromJoulePerMol(dH, "kJ/kg", { molarMassGPerMol: molarMass("CO2") })).toBeCloseTo(487.07, 2);
+    expect(fromJoulePerMol(dH, "Btu/lb", { molarMassGPerMol: molarMass("CO2") })).toBeCloseTo(209.40, 2);
+    const dHr = rx.reactionEnthalpy("CO(g) + 2 H2(g) -> CH3OH(g)", { T: toKelvin(250, "C") }).value;
+    expect(fromJoulePerMol(dHr, "kJ/mol")).toBeCloseTo(-98.359, 3);
+    expect(fromJoulePerMol(dHr, "Btu/lbmol")).toBeCloseTo(-42287, 0);
+    expect(fromJoulePerMol(rx.heatingValue("C3H8(g)"), "Btu/lb", { molarMassGPerMol: molarMass("C3H8") })).toBeCloseTo(21644, 0);
+    expect(fromJoulePerMol(rx.heatingValue("C3H8(g)", { basis: "lower" }), "MJ/Nm3")).toBeCloseTo(91.194, 3);
+    const n2 = toMolPerSecond({ value: 500, unit: "Nm3/h" });
+    const q = rx.heatDuty({ inlet: { T: toKelvin(25, "C"), flows: { "N2(g)": n2 } }, outlet: { T: toKelvin(350, "C"), flows: { "N2(g)": n2 } } });
+    expect(fromWatt(q.duty, "kW")).toBeCloseTo(59.435, 3);
+    expect(fromWatt(q.duty, "Btu/h")).toBeCloseTo(202802, -1);
+    const f = rx.adiabaticFlameTemperature({ fuel: "CH4(g)", excessAir: 0.15, oxidizerT: toKelvin(200, "C"), P: toPascal(2, "bar") });
+    expect(fromKelvin(f.T, "C")).toBeCloseTo(1924.0, 1);
+    expect(fromKelvin(f.T, "F")).toBeCloseTo(3495.2, 1);
+  });
+
+  it("the @examples of the converters", () => {
+    expect(toWatt(1, "MMBtu/h")).toBe(293071.0701722222);
+    expect(toMolPerSecond({ value: 57.753, unit: "kg/h", molarMassGPerMol: 16.0425 })).toBeCloseTo(1, 12);
+    expect(fromMolPerSecond(1, "Nm3/h")).toBeCloseTo(80.6903, 4);
+    expect(fromJoulePerMol(890310.1, "MJ/kg", { molarMassGPerMol: 16.0425 })).toBeCloseTo(55.497, 3);
+  });
+});
