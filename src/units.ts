@@ -143,10 +143,7 @@ export function fromKelvin(kelvin: number, unit: TemperatureUnit): number {
  * toPascal(1, "atm") // => 101325
  */
 export function toPascal(value: number, unit: PressureUnit): number {
-  finite(value, "toPascal");
-  const f = PRESSURE_PA[unit];
-  if (f === undefined) throw badUnit("toPascal", unit);
-  return value * f;
+  return value * factorOf(PRESSURE_PA, unit, value, "toPascal");
 }
 
 /**
@@ -160,10 +157,7 @@ export function toPascal(value: number, unit: PressureUnit): number {
  * toJoule(1, "kcal") // => 4184
  */
 export function toJoule(value: number, unit: EnergyUnit): number {
-  finite(value, "toJoule");
-  const f = ENERGY_J[unit];
-  if (f === undefined) throw badUnit("toJoule", unit);
-  return value * f;
+  return value * factorOf(ENERGY_J, unit, value, "toJoule");
 }
 
 /**
@@ -177,10 +171,7 @@ export function toJoule(value: number, unit: EnergyUnit): number {
  * toMol(1, "lbmol") // => 453.59237
  */
 export function toMol(value: number, unit: AmountUnit): number {
-  finite(value, "toMol");
-  const f = AMOUNT_MOL[unit];
-  if (f === undefined) throw badUnit("toMol", unit);
-  return value * f;
+  return value * factorOf(AMOUNT_MOL, unit, value, "toMol");
 }
 
 /**
@@ -195,10 +186,7 @@ export function toMol(value: number, unit: AmountUnit): number {
  * fromPascal(250000, "bar") // => 2.5
  */
 export function fromPascal(pascal: number, unit: PressureUnit): number {
-  finite(pascal, "fromPascal");
-  const f = PRESSURE_PA[unit];
-  if (f === undefined) throw badUnit("fromPascal", unit);
-  return roundOff(pascal / f);
+  return roundOff(pascal / factorOf(PRESSURE_PA, unit, pascal, "fromPascal"));
 }
 
 /**
@@ -213,10 +201,7 @@ export function fromPascal(pascal: number, unit: PressureUnit): number {
  * fromJoule(1055.05585262, "Btu") // => 1
  */
 export function fromJoule(joule: number, unit: EnergyUnit): number {
-  finite(joule, "fromJoule");
-  const f = ENERGY_J[unit];
-  if (f === undefined) throw badUnit("fromJoule", unit);
-  return roundOff(joule / f);
+  return roundOff(joule / factorOf(ENERGY_J, unit, joule, "fromJoule"));
 }
 
 /**
@@ -231,10 +216,7 @@ export function fromJoule(joule: number, unit: EnergyUnit): number {
  * toWatt(1, "MMBtu/h") // => 293071.0701722222 (W)
  */
 export function toWatt(value: number, unit: PowerUnit): number {
-  finite(value, "toWatt");
-  const f = POWER_W[unit];
-  if (f === undefined) throw badUnit("toWatt", unit);
-  return value * f;
+  return value * factorOf(POWER_W, unit, value, "toWatt");
 }
 
 /**
@@ -249,10 +231,7 @@ export function toWatt(value: number, unit: PowerUnit): number {
  * fromWatt(-521756.75, "kW") // => -521.75675
  */
 export function fromWatt(watt: number, unit: PowerUnit): number {
-  finite(watt, "fromWatt");
-  const f = POWER_W[unit];
-  if (f === undefined) throw badUnit("fromWatt", unit);
-  return roundOff(watt / f);
+  return roundOff(watt / factorOf(POWER_W, unit, watt, "fromWatt"));
 }
 
 /** A flow in some unit, for {@link toMolPerSecond}. @category Units */
@@ -291,9 +270,7 @@ export function toMolPerSecond(flow: FlowQuantity): number {
   if (flow === null || typeof flow !== "object") {
     throw new RxthermError("INVALID_ARGUMENT", "toMolPerSecond requires an object { value, unit }", { flow });
   }
-  finite(flow.value, "toMolPerSecond");
-  const entry = FLOW[flow.unit];
-  if (entry === undefined) throw badUnit("toMolPerSecond", flow.unit);
+  const entry = factorOf(FLOW, flow.unit, flow.value, "toMolPerSecond");
   return flow.value * entry[0] / basisDivisor("toMolPerSecond", entry[1], flow.unit, flow.molarMassGPerMol);
 }
 
@@ -312,9 +289,7 @@ export function toMolPerSecond(flow: FlowQuantity): number {
  * fromMolPerSecond(1, "Nm3/h")   // => 80.6903 (Nm³/h of ideal gas; rounded)
  */
 export function fromMolPerSecond(molPerSecond: number, unit: FlowUnit, options: MolarMassOption = {}): number {
-  finite(molPerSecond, "fromMolPerSecond");
-  const entry = FLOW[unit];
-  if (entry === undefined) throw badUnit("fromMolPerSecond", unit);
+  const entry = factorOf(FLOW, unit, molPerSecond, "fromMolPerSecond");
   return roundOff(molPerSecond * basisDivisor("fromMolPerSecond", entry[1], unit, options.molarMassGPerMol) / entry[0]);
 }
 
@@ -337,12 +312,16 @@ export function fromMolPerSecond(molPerSecond: number, unit: FlowUnit, options: 
  * fromJoulePerMol(890310.1, "MJ/kg", { molarMassGPerMol: 16.0425 }) // => 55.497 (methane HHV; rounded)
  */
 export function fromJoulePerMol(joulePerMol: number, unit: SpecificEnergyUnit, options: MolarMassOption = {}): number {
-  finite(joulePerMol, "fromJoulePerMol");
-  const entry = SPECIFIC[unit];
-  if (entry === undefined) throw badUnit("fromJoulePerMol", unit);
+  const entry = factorOf(SPECIFIC, unit, joulePerMol, "fromJoulePerMol");
   return roundOff(joulePerMol / basisDivisor("fromJoulePerMol", entry[1], unit, options.molarMassGPerMol) / entry[0]);
 }
 
+/** Check the value, then the unit's entry in a factor table (own keys only: "toString" is no unit). */
+function factorOf<U extends string, F>(table: Readonly<Record<U, F>>, unit: U, value: number, fn: string): F {
+  finite(value, fn);
+  if (typeof unit !== "string" || !Object.hasOwn(table, unit)) throw badUnit(fn, unit);
+  return table[unit];
+}
 function finite(value: number, fn: string): void {
   if (typeof value !== "number" || !Number.isFinite(value)) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a finite number, got ${String(value)}`, { value });

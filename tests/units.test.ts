@@ -127,3 +127,11 @@ describe("docs/units.md: one example per function family (invented demo scenario
     expect(fromJoulePerMol(890310.1, "MJ/kg", { molarMassGPerMol: 16.0425 })).toBeCloseTo(55.497, 3);
   });
 });
+
+describe("unknown units", () => {
+  it("a name inherited from Object.prototype is not a unit", () => {
+    expect(caught(() => toPascal(1, "toString" as never)).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => toMolPerSecond({ value: 1, unit: "constructor" as never })).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => toMol(1, "hasOwnProperty" as never)).code).toBe("INVALID_ARGUMENT");
+  });
+});
