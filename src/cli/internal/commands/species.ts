@@ -48,9 +48,9 @@ export const speciesCommand: Command = {
     const text = [
       fields([
         ["key", s.key + (s.name ? `  (${s.name})` : "")],
-        ["formula", `${formatFormula(s.formula)}  M = ${num(info.molarMassGPerMol, 7)} g/mol`],
-        ["ΔfH°(298.15 K)", `${num(h298 / 1000, 7)} kJ/mol` + (s.hf298Uncertainty === undefined ? "" : ` ± ${num(s.hf298Uncertainty / 1000, 2)}`)],
-        ["S°(298.15 K)", `${num(s.s298, 7)} J/(mol·K)`],
+        ["formula", `${formatFormula(s.formula)}  M = ${short(info.molarMassGPerMol)} g/mol`],
+        ["ΔfH°(298.15 K)", `${short(h298 / 1000)} kJ/mol` + (s.hf298Uncertainty === undefined ? "" : ` ± ${num(s.hf298Uncertainty / 1000, 2)}`)],
+        ["S°(298.15 K)", `${short(s.s298)} J/(mol·K)`],
         ["Cp data range", `${short(s.range[0])}–${short(s.range[1])} K`],
         ["data set", s.dataset ?? "(user data)"],
         ["other data sets", library.datasets(s.key).filter((d) => d !== s.dataset).join(", ") || "none"],
