@@ -3,6 +3,7 @@ import {
   fromJoule, fromJoulePerMol, fromKelvin, fromMolPerSecond, fromPascal, fromWatt, toJoule, toKelvin, toMol, toMolPerSecond, toPascal, toWatt,
 } from "../src/units.js";
 import { caught } from "./_helpers/caught.js";
+import { fc, test as fcTest } from "@fast-check/vitest";
 import { isRxthermError } from "../src/errors.js";
 
 // Conversion factors: NIST SP 811 (2008) Appendix B; 0 °C = 273.15 K by definition of the Celsius scale.
@@ -133,5 +134,25 @@ describe("unknown units", () => {
     expect(caught(() => toPascal(1, "toString" as never)).code).toBe("INVALID_ARGUMENT");
     expect(caught(() => toMolPerSecond({ value: 1, unit: "constructor" as never })).code).toBe("INVALID_ARGUMENT");
     expect(caught(() => toMol(1, "hasOwnProperty" as never)).code).toBe("INVALID_ARGUMENT");
+  });
+});
+
+describe("converter invariants (fast-check)", () => {
+  const FLOWS = ["mol/s", "mol/h", "kmol/s", "kmol/h", "lbmol/h", "g/s", "kg/s", "kg/h", "t/h", "lb/h", "Nm3/h", "Nm³/h"] as const;
+  const POWERS = ["W", "kW", "MW", "kcal/h", "Btu/h", "MMBtu/h"] as const;
+  const ENERGIES = ["J/mol", "kJ/mol", "kJ/kmol", "kcal/mol", "Btu/lbmol", "J/g", "kJ/kg", "MJ/kg", "Btu/lb", "kJ/Nm3", "MJ/Nm3"] as const;
+  const value = fc.double({ min: -1e9, max: 1e9, noNaN: true, noDefaultInfinity: true });
+  const molar = fc.double({ min: 1, max: 1000, noNaN: true });
+
+  fcTest.prop([value, fc.constantFrom(...FLOWS), molar])("fromMolPerSecond(toMolPerSecond(x)) = x to 1e-11 relative", (x, unit, M) => {
+    const back = fromMolPerSecond(toMolPerSecond({ value: x, unit, molarMassGPerMol: M }), unit, { molarMassGPerMol: M });
+    expect(Math.abs(back - x)).toBeLessThanOrEqual(1e-11 * Math.abs(x) + 1e-300);
+  });
+  fcTest.prop([value, fc.constantFrom(...POWERS)])("fromWatt(toWatt(x)) = x to 1e-11 relative", (x, unit) => {
+    expect(Math.abs(fromWatt(toWatt(x, unit), unit) - x)).toBeLessThanOrEqual(1e-11 * Math.abs(x) + 1e-300);
+  });
+  fcTest.prop([value, value, fc.constantFrom(...ENERGIES), molar])("fromJoulePerMol is linear: f(a + b) = f(a) + f(b)", (a, b, unit, M) => {
+    const f = (x: number) => fromJoulePerMol(x, unit, { molarMassGPerMol: M });
+    expect(Math.abs(f(a + b) - f(a) - f(b))).toBeLessThanOrEqual(1e-9 * (Math.abs(f(a)) + Math.abs(f(b))) + 1e-9);
   });
 });
