@@ -46,6 +46,11 @@ export function readTemperature(text: string, what: string): number {
   return k;
 }
 
+/** Comma-separated temperatures (`25C,250C,1000K`) → K. */
+export function readTemperatures(text: string, what: string): number[] {
+  return text.split(",").map((t) => readTemperature(t, what));
+}
+
 /** Pressure text → Pa. */
 export function readPressure(text: string, what: string): number {
   const [value, unitText] = split(text, what);

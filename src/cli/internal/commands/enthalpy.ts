@@ -11,7 +11,7 @@ import { molarMass } from "../../../formula/molarMass.js";
 import { STANDARD_TEMPERATURE_K, fromJoulePerMol, fromKelvin, type SpecificEnergyUnit } from "../../../units.js";
 import { flag, optionValue, positionals } from "../args.js";
 import { DATABASE_OPTION, type Command } from "../command.js";
-import { SPECIFIC_ENERGY_UNITS, oneOf, readTemperature } from "../quantity.js";
+import { SPECIFIC_ENERGY_UNITS, oneOf, readTemperatures } from "../quantity.js";
 import { fields, fixed, num, short, table } from "../table.js";
 import { UsageError } from "../usage.js";
 
@@ -41,7 +41,7 @@ export const enthalpyCommand: Command = {
     const library = await ctx.library(args);
     const unit = oneOf(optionValue(args, "unit") ?? "kJ/mol", SPECIFIC_ENERGY_UNITS, "--unit");
     const per = optionValue(args, "per");
-    const temperatures = (optionValue(args, "T") ?? "25C").split(",").map((t) => readTemperature(t, "--T"));
+    const temperatures = readTemperatures(optionValue(args, "T") ?? "25C", "--T");
     const reaction = flag(args, "balance") ? balanceReaction(text!) : parseReaction(text!);
     const extrapolate = flag(args, "extrapolate");
     const results = temperatures.map((T) =>

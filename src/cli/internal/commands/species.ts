@@ -10,7 +10,7 @@ import type { Library, Species } from "../../../species/types.js";
 import { STANDARD_TEMPERATURE_K, fromKelvin, fromPascal } from "../../../units.js";
 import { flag, optionValue, positionals } from "../args.js";
 import { DATABASE_OPTION, type Command } from "../command.js";
-import { readPressure, readTemperature } from "../quantity.js";
+import { readPressure, readTemperatures } from "../quantity.js";
 import { fields, fixed, num, short, table } from "../table.js";
 
 export const speciesCommand: Command = {
@@ -38,7 +38,7 @@ export const speciesCommand: Command = {
     if (flag(args, "search")) return search(library, query!);
     const dataset = optionValue(args, "dataset");
     const s = library.get(query!, dataset === undefined ? undefined : { dataset });
-    const temperatures = (optionValue(args, "T") ?? "25C").split(",").map((t) => readTemperature(t, "--T"));
+    const temperatures = readTemperatures(optionValue(args, "T") ?? "25C", "--T");
     const pText = optionValue(args, "P");
     const P = pText === undefined ? 1e5 : readPressure(pText, "--P");
     const extrapolate = flag(args, "extrapolate");
