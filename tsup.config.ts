@@ -1,14 +1,34 @@
+import { readFileSync } from "node:fs";
 import { defineConfig } from "tsup";
 
+const pkg = JSON.parse(readFileSync(new URL("./package.json", import.meta.url), "utf8")) as { version: string };
+
 // ESM + CJS + .d.ts; no side effects at import (package.json "sideEffects": false).
-export default defineConfig({
-  entry: { index: "src/index.ts" },
-  format: ["esm", "cjs"],
-  dts: true,
-  clean: true,
-  sourcemap: true,
-  treeshake: true,
-  target: "es2022",
-  platform: "neutral",
-  external: ["decimal.js", "zod"],
-});
+export default defineConfig([
+  {
+    entry: { index: "src/index.ts" },
+    format: ["esm", "cjs"],
+    dts: true,
+    // keep the command line built by the second config (the two builds run side by side)
+    clean: ["!cli.js", "!cli.js.map"],
+    sourcemap: true,
+    treeshake: true,
+    target: "es2022",
+    platform: "neutral",
+    external: ["decimal.js", "zod"],
+  },
+  // the command line `rxtherm` (package.json "bin"): Node only, one ESM file with its shebang
+  {
+    entry: { cli: "src/cli/bin.ts" },
+    format: ["esm"],
+    dts: false,
+    clean: false,
+    sourcemap: true,
+    treeshake: true,
+    target: "node20",
+    platform: "node",
+    external: ["decimal.js", "zod"],
+    banner: { js: "#!/usr/bin/env node" },
+    define: { RXTHERM_VERSION: JSON.stringify(pkg.version) },
+  },
+]);

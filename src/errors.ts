@@ -55,6 +55,8 @@ export const ERROR_CODES = {
   NOTHING_TO_BURN: "a fuel with nothing oxidisable in it",
   NO_OXIDIZER: "an oxidizer with no oxygen in it",
   ELEMENTS_NOT_COVERED: "a product set that cannot hold every element of the feed",
+  // command line
+  INVALID_CASE: "a heat-duty case file that fails validation (issues listed with JSON paths)",
 } as const;
 
 /**

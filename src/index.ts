@@ -15,6 +15,8 @@ export {
   STANDARD_TEMPERATURE_K, STANDARD_PRESSURE_PA, ATMOSPHERE_PA, GAS_CONSTANT_J_PER_MOL_K,
 } from "./units.js";
 export type { TemperatureUnit, PressureUnit, EnergyUnit, AmountUnit } from "./units.js";
+export { fromPascal, fromJoule, toWatt, fromWatt, toMolPerSecond, fromMolPerSecond, fromJoulePerMol } from "./units.js";
+export type { FlowUnit, PowerUnit, SpecificEnergyUnit, FlowQuantity, MolarMassOption } from "./units.js";
 
 // ── numeric (layer 0) ─────────────────────────────────────────────────────────
 // (numeric section)
@@ -27,6 +29,7 @@ export type { Rational, RationalLike } from "./numeric/rational.js";
 export { reducedRowEchelon, matrixRank, nullSpace, integerNullSpace, solveLinearSystem } from "./numeric/linearAlgebra.js";
 export type { MatrixLike, RowEchelonResult, LinearSolution } from "./numeric/linearAlgebra.js";
 export { findRoot } from "./numeric/roots.js";
+export { jsonReplacer } from "./numeric/jsonReplacer.js";
 export type { FindRootOptions, RootResult } from "./numeric/roots.js";
 
 // ── formula (layer 1) ─────────────────────────────────────────────────────────

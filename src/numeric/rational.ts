@@ -9,6 +9,11 @@
  * Numbers are turned into rationals from their shortest decimal text (`String(x)`), never
  * from the binary double: `rationalFromNumber(0.1)` is exactly 1/10.
  *
+ * Every rational built by these functions is JSON-safe: `JSON.stringify` writes it as its
+ * text (`"25/2"`, `"-3"`) through a `toJSON` method on its prototype (not an own property,
+ * so `Object.keys` still gives `num`, `den`). Plain BigInts (from {@link gcdBigInt},
+ * {@link scaleToCoprimeIntegers}...) are JSON-safe through {@link jsonReplacer}.
+ *
  * @module
  */
 import { RxthermError } from "../errors.js";
@@ -104,7 +109,7 @@ export function rational(num: bigint | number, den: bigint | number = 1n): Ratio
  * @category Numeric
  */
 export function rationalFromInteger(n: bigint | number): Rational {
-  return Object.freeze({ num: toBigIntStrict(n, "value"), den: 1n });
+  return Object.freeze(new ExactRational(toBigIntStrict(n, "value"), 1n));
 }
 
 /**
@@ -166,7 +171,7 @@ export function rationalFromNumber(x: number): Rational {
   if (!Number.isFinite(x)) {
     throw new RxthermError("INVALID_ARGUMENT", `rationalFromNumber requires a finite number, got ${x}`, { value: x });
   }
-  if (Number.isSafeInteger(x)) return Object.freeze({ num: BigInt(x), den: 1n });
+  if (Number.isSafeInteger(x)) return Object.freeze(new ExactRational(BigInt(x), 1n));
   return rationalFromDecimalString(String(x));
 }
 
@@ -182,7 +187,7 @@ export function rationalFromNumber(x: number): Rational {
  * @category Numeric
  */
 export function rationalFrom(value: RationalLike): Rational {
-  if (typeof value === "bigint") return Object.freeze({ num: value, den: 1n });
+  if (typeof value === "bigint") return Object.freeze(new ExactRational(value, 1n));
   if (typeof value === "number") return rationalFromNumber(value);
   if (typeof value === "string") return rationalFromDecimalString(value);
   return normalise(value.num, value.den);
@@ -199,7 +204,7 @@ export function rationalFrom(value: RationalLike): Rational {
  * @category Numeric
  */
 export function rationalAdd(a: Rational, b: Rational): Rational {
-  if (a.den === 1n && b.den === 1n) return Object.freeze({ num: a.num + b.num, den: 1n });
+  if (a.den === 1n && b.den === 1n) return Object.freeze(new ExactRational(a.num + b.num, 1n));
   return normalise(a.num * b.den + b.num * a.den, a.den * b.den);
 }
 
@@ -214,7 +219,7 @@ export function rationalAdd(a: Rational, b: Rational): Rational {
  * @category Numeric
  */
 export function rationalSub(a: Rational, b: Rational): Rational {
-  if (a.den === 1n && b.den === 1n) return Object.freeze({ num: a.num - b.num, den: 1n });
+  if (a.den === 1n && b.den === 1n) return Object.freeze(new ExactRational(a.num - b.num, 1n));
   return normalise(a.num * b.den - b.num * a.den, a.den * b.den);
 }
 
@@ -229,7 +234,7 @@ export function rationalSub(a: Rational, b: Rational): Rational {
  * @category Numeric
  */
 export function rationalMul(a: Rational, b: Rational): Rational {
-  if (a.den === 1n && b.den === 1n) return Object.freeze({ num: a.num * b.num, den: 1n });
+  if (a.den === 1n && b.den === 1n) return Object.freeze(new ExactRational(a.num * b.num, 1n));
   return normalise(a.num * b.num, a.den * b.den);
 }
 
@@ -261,7 +266,7 @@ export function rationalDiv(a: Rational, b: Rational): Rational {
  * @category Numeric
  */
 export function rationalNeg(a: Rational): Rational {
-  return Object.freeze({ num: a.num === 0n ? 0n : -a.num, den: a.den });
+  return Object.freeze(new ExactRational(a.num === 0n ? 0n : -a.num, a.den));
 }
 
 /**
@@ -379,13 +384,31 @@ function normalise(num: bigint, den: bigint): Rational {
     num = -num;
     den = -den;
   }
-  if (num === 0n) return Object.freeze({ num: 0n, den: 1n });
+  if (num === 0n) return Object.freeze(new ExactRational(0n, 1n));
   const g = gcdBigInt(num, den);
   if (g !== 1n) {
     num /= g;
     den /= g;
   }
-  return Object.freeze({ num, den });
+  return Object.freeze(new ExactRational(num, den));
+}
+
+/**
+ * The runtime shape of a {@link Rational}: two own fields and, on the prototype, `toJSON`
+ * giving the exact text, so results holding rationals survive `JSON.stringify` (a bare BigInt
+ * makes it throw).
+ */
+class ExactRational implements Rational {
+  readonly num: bigint;
+  readonly den: bigint;
+  constructor(num: bigint, den: bigint) {
+    this.num = num;
+    this.den = den;
+  }
+  /** Exact text for JSON, e.g. `"25/2"`. */
+  toJSON(): string {
+    return rationalToString(this);
+  }
 }
 
 function toBigIntStrict(v: bigint | number, name: string): bigint {
