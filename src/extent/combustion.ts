@@ -4,9 +4,11 @@ import { formulaOf, molarMassOf, validateFlows } from "./internal/extentSystem.j
 import type { Flows } from "./types.js";
 import { waterSaturationPressure } from "./waterSaturationPressure.js";
 import { compensatedSum } from "../numeric/compensatedSum.js";
+import { checkMixtureLimits } from "./mixtureLimits.js";
 
 /**
- * Dry air by mole fraction, the default oxidizer of {@link combustion}: O₂ 0.209476 and Ar
+ * Dry air by mole fraction, with its argon and CO₂ (pass it as `oxidizer` where the argon and the
+ * 412 ppm CO₂ of real air matter, e.g. to match an analyser reading to the last 0.1 %): O₂ 0.209476 and Ar
  * 0.00934 from the U.S. Standard Atmosphere 1976 (table 3; values written from memory of that table), CO₂ 0.000412 (≈ 412 ppm, the
  * global mean of about 2020; NOAA Global Monitoring Laboratory — value from memory), and N₂ the
  * balance 0.780772 (the 1976 table's 0.78084 less the CO₂ update; Ne, He, Kr and the other
@@ -25,8 +27,13 @@ export const DRY_AIR: Readonly<Flows> = Object.freeze({
 });
 
 /**
- * The simplified air of combustion calculations: 21 % O₂ and 79 % N₂ by mole (argon and CO₂
- * counted as nitrogen). Pass it as `oxidizer` to compare with tables built on this convention.
+ * The air of combustion calculations: 21 % O₂ and 79 % N₂ by mole (3.762 mol N₂ per mol O₂; argon
+ * and CO₂ counted as nitrogen). It is the one default air of rxtherm — {@link combustion}, the flame
+ * functions and `availableHeat` all use it when no oxidizer is given, so the same fuel gives the
+ * same air and flue gas everywhere. Why this one: it is the convention of published combustion
+ * tables and flame temperatures, so results can be checked against them, and it keeps carbon out
+ * of the air (a hydrogen flame has no trace CO₂ to carry). It differs from {@link DRY_AIR} by 0.24 %
+ * in the air needed (O₂ 0.21 against 0.2095) and by the 0.93 % argon, counted here as nitrogen.
  *
  * @category Combustion
  * @example
@@ -102,14 +109,25 @@ export interface CombustionInput {
   excessAir?: number;
   /** Equivalence ratio φ in (0, 1]; excessAir = 1/φ − 1. Give this or excessAir, not both. */
   equivalenceRatio?: number;
-  /** Dry oxidizer composition (relative mole amounts, normalised here). @defaultValue {@link DRY_AIR} */
-  oxidizer?: Flows;
+  /**
+   * Dry oxidizer: `"air"` ({@link AIR_21_79}, the one default air of rxtherm, shared with the flame
+   * functions and `availableHeat`), `"oxygen"` (pure O₂), or a composition (relative mole amounts,
+   * normalised here), e.g. {@link DRY_AIR} for air with its argon and CO₂.
+   * @defaultValue "air" ({@link AIR_21_79})
+   */
+  oxidizer?: "air" | "oxygen" | Flows;
   /** O₂ mole fraction of the dry oxidizer after enriching it with pure O₂ (between its own O₂ fraction and 1). */
   oxygenEnrichment?: number;
   /** Moisture of the oxidizer. @defaultValue dry */
   humidity?: AirHumidity;
   /** Fraction of the fuel carbon leaving as CO instead of CO₂, 0–1. @defaultValue 0 */
   carbonToCO?: number;
+  /**
+   * Accept excess air above {@link MAX_EXCESS_AIR} (300 %) or an equivalence ratio outside
+   * {@link EQUIVALENCE_RATIO_LIMITS}; without it such values are taken as unit slips and rejected.
+   * @defaultValue false
+   */
+  allowExtremeMixture?: boolean;
 }
 
 /**
@@ -175,6 +193,7 @@ export interface CombustionResult {
  * @param input - fuel, excess air or equivalence ratio, oxidizer, humidity, enrichment, CO fraction
  * @returns theoretical O₂ and air, air fed, flue gas flows (mol or mol/s) and wet and dry mole fractions, masses in kg
  * @throws {@link RxthermError} `INVALID_ARGUMENT` for excess air < 0 or φ > 1 (rich; details: `equivalenceRatio`, `oxygenDeficit`),
+ *   excess air above 3 or φ outside 0.05–20 without `allowExtremeMixture` (a likely unit slip; details: `hint`),
  *   both excessAir and equivalenceRatio, fractions outside their range, an ultimate analysis not summing to 1,
  *   or an oxidizer species other than O₂, N₂, CO₂, H₂O and noble gases
  * @throws {@link RxthermError} `NEGATIVE_FLOW` for a negative fuel or oxidizer flow
@@ -380,6 +399,7 @@ function resolveExcess(input: CombustionInput, theoreticalO2: number, fn: string
     }
     e = excessAir;
   }
+  checkMixtureLimits(fn, { excessAir, equivalenceRatio }, input.allowExtremeMixture);
   if (e < 0 || (equivalenceRatio !== undefined && equivalenceRatio > 1)) {
     const phi = equivalenceRatio ?? 1 / (1 + e);
     const oxygenDeficit = theoreticalO2 * (1 - 1 / phi);
@@ -415,11 +435,15 @@ function canonicalOxidizerKey(f: Formula): string | null {
 
 function oxidizerComposition(input: CombustionInput, fn: string): Flows {
   let comp: Flows;
-  if (input.oxidizer === undefined) comp = { ...DRY_AIR };
-  else {
-    validateFlows(input.oxidizer, fn, "oxidizer");
+  const ox = input.oxidizer;
+  if (ox === undefined || ox === "air") comp = { ...AIR_21_79 };
+  else if (ox === "oxygen") comp = { "O2(g)": 1 };
+  else if (typeof ox === "string") {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires oxidizer "air", "oxygen" or a composition object, got "${ox}"`, { oxidizer: ox });
+  } else {
+    validateFlows(ox, fn, "oxidizer");
     comp = {};
-    for (const [key, v] of Object.entries(input.oxidizer)) {
+    for (const [key, v] of Object.entries(ox)) {
       const canon = canonicalOxidizerKey(formulaOf(key, fn, "oxidizer"));
       if (canon === null) {
         throw new RxthermError("INVALID_ARGUMENT", `${fn}: oxidizer species ${key} is not one of O2, N2, CO2, H2O or a noble gas`, { species: key });

@@ -8,6 +8,7 @@
 import { RxthermError } from "../../errors.js";
 import { ATMOSPHERE_PA, STANDARD_TEMPERATURE_K } from "../../units.js";
 import { AIR_21_79 } from "../../extent/combustion.js";
+import { checkMixtureLimits } from "../../extent/mixtureLimits.js";
 import type { EngineLimits } from "./equilibriumEngine.js";
 import { prepareFlame, type FlamePoint, type FlamePointResult, type FlameSetup } from "./flameProblem.js";
 import { DEFAULT_FLAME_PRODUCTS } from "../flameDefaults.js";
@@ -69,7 +70,7 @@ export function prepareFlameInput(fn: string, input: AdiabaticFlameInput, option
 
 /** The settings of one point (φ, stream temperatures, pressure), checked. */
 export function flamePointOf(fn: string, input: AdiabaticFlameInput): FlamePoint {
-  const phi = equivalenceRatioOf(fn, input.equivalenceRatio, input.excessAir);
+  const phi = equivalenceRatioOf(fn, input.equivalenceRatio, input.excessAir, input.allowExtremeMixture);
   const T = positive(fn, "T", input.T ?? STANDARD_TEMPERATURE_K);
   const fuelT = positive(fn, "fuelT", input.fuelT ?? T);
   const oxidizerT = positive(fn, "oxidizerT", input.oxidizerT ?? T);
@@ -113,10 +114,11 @@ function isCondensedKey(setup: FlameSetup, key: string): boolean {
 }
 
 /** φ from the equivalence ratio or the excess air (exactly one, or neither → 1). */
-export function equivalenceRatioOf(fn: string, equivalenceRatio: number | undefined, excessAir: number | undefined): number {
+export function equivalenceRatioOf(fn: string, equivalenceRatio: number | undefined, excessAir: number | undefined, allowExtremeMixture?: boolean): number {
   if (equivalenceRatio !== undefined && excessAir !== undefined) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} takes either equivalenceRatio or excessAir, not both`, { equivalenceRatio, excessAir });
   }
+  checkMixtureLimits(fn, { excessAir, equivalenceRatio }, allowExtremeMixture);
   if (excessAir !== undefined) {
     if (typeof excessAir !== "number" || !Number.isFinite(excessAir) || !(excessAir > -1)) {
       throw new RxthermError("INVALID_ARGUMENT", `${fn} requires excessAir > −1 (a fraction: 0.2 = 20 % excess), got ${String(excessAir)}`, { excessAir });
