@@ -1,7 +1,8 @@
 import { RxthermError } from "../errors.js";
 import type { Formula } from "../formula/types.js";
+import { molarMass } from "../formula/molarMass.js";
 import { formulaOf, molarMassOf, validateFlows } from "./internal/extentSystem.js";
-import type { Flows } from "./types.js";
+import type { Flows, FormulaLookup } from "./types.js";
 import { waterSaturationPressure } from "./waterSaturationPressure.js";
 import { compensatedSum } from "../numeric/compensatedSum.js";
 import { checkMixtureLimits } from "./mixtureLimits.js";
@@ -128,6 +129,13 @@ export interface CombustionInput {
    * @defaultValue false
    */
   allowExtremeMixture?: boolean;
+  /**
+   * Species library used to read fuel keys that are not formulas (names such as `"methane"`), as the
+   * flame functions and `availableHeat` do; pass `builtInLibrary()` for the built-in names. Keys that
+   * are formulas (`"CH4(g)"`, `"CH4"`) are read directly.
+   * @defaultValue none (formulas only)
+   */
+  library?: FormulaLookup;
 }
 
 /**
@@ -215,7 +223,7 @@ export function combustion(input: CombustionInput): CombustionResult {
   if (input === null || typeof input !== "object") {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object { fuel, ... }`, {});
   }
-  const fuel = fuelElements(input.fuel, fn);
+  const fuel = fuelElements(input.fuel, fn, input.library);
   const C = fuel.atoms.C ?? 0;
   const H = fuel.atoms.H ?? 0;
   const O = fuel.atoms.O ?? 0;
@@ -298,7 +306,7 @@ interface FuelElements {
 const NOBLE = new Set(["He", "Ne", "Ar", "Kr", "Xe"]);
 const BURNABLE = new Set(["C", "H", "O", "N", "S"]);
 
-function fuelElements(fuelIn: CombustionInput["fuel"], fn: string): FuelElements {
+function fuelElements(fuelIn: CombustionInput["fuel"], fn: string, library: FormulaLookup | undefined): FuelElements {
   if (fuelIn === null || typeof fuelIn !== "object") {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires fuel as species flows or { ultimate }`, {});
   }
@@ -306,17 +314,17 @@ function fuelElements(fuelIn: CombustionInput["fuel"], fn: string): FuelElements
     return ultimateElements(fuelIn as UltimateFuel, fn);
   }
   const flows = fuelIn as Flows;
-  validateFlows(flows, fn, "fuel");
+  validateFlows(flows, fn, "fuel", false); // keys are read below (formulas, or names through the library)
   const atoms: Record<string, number> = {};
   const noble: Flows = {};
   const bad = new Set<string>();
   let massG = 0;
   for (const [key, n] of Object.entries(flows)) {
-    const f: Formula = formulaOf(key, fn, "fuel");
+    const f: Formula = fuelFormula(key, fn, library);
     if (f.charge !== 0) {
       throw new RxthermError("INVALID_ARGUMENT", `${fn}: fuel species ${key} is charged`, { species: key, charge: f.charge });
     }
-    massG += n * molarMassOf(key, fn, "fuel");
+    massG += n * molarMass(f);
     const els = Object.entries(f.elements);
     if (els.length === 1 && NOBLE.has((els[0] as [string, number])[0])) {
       const el = (els[0] as [string, number])[0];
@@ -339,6 +347,37 @@ function fuelElements(fuelIn: CombustionInput["fuel"], fn: string): FuelElements
     throw new RxthermError("NOTHING_TO_BURN", `${fn}: the fuel flows are all zero`, { theoreticalO2: 0 });
   }
   return { atoms, moistureMol: 0, noble, massKg: massG / 1000, ashKg: 0 };
+}
+
+/**
+ * The formula of a fuel key: read as a formula, or — when it is not one and a library is given —
+ * looked up there by key, formula or name (as the flame functions do).
+ */
+function fuelFormula(key: string, fn: string, library: FormulaLookup | undefined): Formula {
+  try {
+    return formulaOf(key, fn, "fuel");
+  } catch (e) {
+    if (!(e instanceof RxthermError)) throw e;
+    if (library === undefined) {
+      if (!/^[a-z][a-z0-9 ,'-]*$/.test(key)) throw e; // formula-like text: keep the formula error (UNKNOWN_ELEMENT...)
+      throw new RxthermError(
+        "UNKNOWN_SPECIES",
+        `${fn}: fuel key "${key}" is not a formula; write the formula (e.g. "CH4(g)") or pass library: builtInLibrary() to read names as the flame functions do (${e.message.replace(/^\[rxtherm\] /, "")})`,
+        { ...e.details, species: key, formulaError: e.code },
+      );
+    }
+    if (library === null || typeof library !== "object" || typeof library.get !== "function") {
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires library to be a species library (with get)`, { library: String(library) });
+    }
+    try {
+      return library.get(key).formula;
+    } catch (e2) {
+      if (e2 instanceof RxthermError) {
+        throw new RxthermError(e2.code, `${fn} needs the formula of fuel ${key}: ${e2.message.replace(/^\[rxtherm\] /, "")}`, { ...e2.details, species: key });
+      }
+      throw e2;
+    }
+  }
 }
 
 function ultimateElements(fuel: UltimateFuel, fn: string): FuelElements {
