@@ -101,6 +101,37 @@ describe("combustion", () => {
     expect(r.flueGas["O2(g)"]).toBeCloseTo(0.2 + 0.005, 12);
   });
 
+  it("combustion gives the README example values (21/79 air, the default everywhere)", () => {
+    const gas = { "CH4(g)": 0.9, "C2H6(g)": 0.06, "N2(g)": 0.04 }; // invented natural gas
+    const fire = combustion({ fuel: gas, excessAir: 0.15 });
+    // hand: O2 = 0.9·2 + 0.06·3.5 = 2.01 mol; air = 1.15·2.01/0.21 = 11.00714 mol (21/79 air, common practice)
+    expect(fire.air).toBeCloseTo(1.15 * 2.01 / 0.21, 12);
+    expect(fire.air).toBeCloseTo(11.007, 3);
+    expect(fire.dry["CO2(g)"]).toBeCloseTo(0.1014, 4);
+  });
+
+  it("one default air: omitted, \"air\" and AIR_21_79 give the same flue gas; \"oxygen\" is pure O2", () => {
+    const a = combustion({ fuel: { "CH4(g)": 1 }, excessAir: 0.1 });
+    const b = combustion({ fuel: { "CH4(g)": 1 }, excessAir: 0.1, oxidizer: "air" });
+    const c = combustion({ fuel: { "CH4(g)": 1 }, excessAir: 0.1, oxidizer: AIR_21_79 });
+    expect(a.flueGas).toEqual(b.flueGas);
+    expect(a.flueGas).toEqual(c.flueGas);
+    expect(a.flueGas["Ar(g)"]).toBeUndefined();
+    const o = combustion({ fuel: { "CH4(g)": 1 }, oxidizer: "oxygen" });
+    expect(o.air).toBe(2);
+    expect(caught(() => combustion({ fuel: { "CH4(g)": 1 }, oxidizer: "ozone" as "air" })).code).toBe("INVALID_ARGUMENT");
+  });
+
+  it("fuel names resolve through a library as in the flame functions; without one the error says how", async () => {
+    const { builtInLibrary } = await import("../../src/species/builtInLibrary.js");
+    const byName = combustion({ fuel: { methane: 1, "n-C4H10(g)": 0.5 }, library: builtInLibrary() });
+    expect(byName.theoreticalO2).toBeCloseTo(2 + 0.5 * 6.5, 12);
+    const e = caught(() => combustion({ fuel: { methane: 1 } }));
+    expect(e.code).toBe("UNKNOWN_SPECIES");
+    expect(e.message).toContain("builtInLibrary()");
+    expect(caught(() => combustion({ fuel: { unobtainium: 1 }, library: builtInLibrary() })).code).toBe("UNKNOWN_SPECIES");
+  });
+
   it("a biogas with CO2, N2 and H2S burns by its elements", () => {
     // invented biogas
     const r = combustion({ fuel: { "CH4(g)": 0.6, "CO2(g)": 0.37, "N2(g)": 0.02, "H2S(g)": 0.01 }, excessAir: 0.15 });
