@@ -164,15 +164,37 @@ function flueParts(fn: string, composition: Flows, library: Library | undefined)
       throw new RxthermError("INVALID_ARGUMENT", `${fn} requires finite amounts >= 0, got ${String(n)} for ${key}`, { species: key, amount: n });
     }
     if (n === 0) continue;
-    const f = gasFormula(fn, key, library);
+    const sig = gasSignature(fn, key, library);
     out.total += n;
-    const sig = signature(f);
     if (sig === "H2O1") out.water += n;
     else if (sig === "O2S1") out.so2 += n;
     else if (sig === "O3S1") out.so3 += n;
   }
   if (!(out.total > 0)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a composition with a positive total`, {});
   return out;
+}
+
+/** Element signature of a gas key ("H2O1", "O2S1"...), memoised for formula keys (bounded). */
+function gasSignature(fn: string, key: string, library: Library | undefined): string {
+  const hit = signatureCache.get(key);
+  if (hit !== undefined) return hit;
+  const f = gasFormula(fn, key, library);
+  const sig = signature(f);
+  if (library === undefined && isFormulaKey(key)) {
+    if (signatureCache.size >= 1024) signatureCache.clear();
+    signatureCache.set(key, sig);
+  }
+  return sig;
+}
+const signatureCache = new Map<string, string>();
+
+function isFormulaKey(key: string): boolean {
+  try {
+    parseFormula(key);
+    return true;
+  } catch {
+    return false;
+  }
 }
 
 function gasFormula(fn: string, key: string, library: Library | undefined): Formula {

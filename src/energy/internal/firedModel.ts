@@ -148,8 +148,8 @@ export function prepareFired(fn: string, input: FiredInputBase): FiredModel {
   let lhv = 0, hhv = 0, molarMassG = 0, fuelEnthalpy = 0, fuelSensible = 0, fuelMoistureLatent = 0, fuelCarbon = 0;
   const hfWaterGas = resolveSpeciesCached(fn, "H2O(g)", library).hf298;
   for (const p of fuel) {
-    lhv += p.n * speciesHeatingValue(fn, p.species, "lower", library);
-    hhv += p.n * speciesHeatingValue(fn, p.species, "higher", library);
+    lhv += p.n * heatingValueCached(fn, p.species, "lower", library);
+    hhv += p.n * heatingValueCached(fn, p.species, "higher", library);
     molarMassG += p.n * molarMass(p.species.formula);
     const h = enthalpyAt(p.species, fuelT, extrapolate, extrapolated);
     fuelEnthalpy += p.n * h;
@@ -228,7 +228,7 @@ export function prepareFired(fn: string, input: FiredInputBase): FiredModel {
     water: keys.includes("H2O(g)") ? resolveSpeciesCached(fn, "H2O(g)", library) : null,
     liquid: condensing ? resolveSpeciesCached(fn, "H2O(l)", library) : null,
     lhv, hhv,
-    coHeatingValue: speciesHeatingValue(fn, co, "lower", library),
+    coHeatingValue: heatingValueCached(fn, co, "lower", library),
     carbonHeatingValue: -co2.hf298,
     fuelMoistureLatent, fuelCarbon, unburnedCarbonMol, coPpm,
     fuelT, airT, P, condensing, extrapolate, scale, per,
@@ -237,6 +237,27 @@ export function prepareFired(fn: string, input: FiredInputBase): FiredModel {
     extrapolated,
   };
 }
+
+/**
+ * speciesHeatingValue (an exact decimal Hess sum, the costly part of a call) memoised per library
+ * and species object; libraries and species are immutable, so the value cannot go stale.
+ */
+function heatingValueCached(fn: string, sp: Species, basis: "lower" | "higher", library: Library | undefined): number {
+  const lib: object = library ?? BUILT_IN;
+  let bySpecies = hvCache.get(lib);
+  if (bySpecies === undefined) {
+    bySpecies = new WeakMap();
+    hvCache.set(lib, bySpecies);
+  }
+  let pair = bySpecies.get(sp);
+  if (pair === undefined) {
+    pair = [speciesHeatingValue(fn, sp, "lower", library), speciesHeatingValue(fn, sp, "higher", library)];
+    bySpecies.set(sp, pair);
+  }
+  return basis === "lower" ? pair[0] : pair[1];
+}
+const BUILT_IN = {};
+const hvCache = new WeakMap<object, WeakMap<Species, [number, number]>>();
 
 /** Carbon, IUPAC standard atomic weight (conventional value), g/mol. */
 const CARBON_MOLAR_MASS_G = 12.011;
