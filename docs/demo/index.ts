@@ -11,6 +11,7 @@ const sections: string[] = [
   "./species.js",
   "./heat-capacity.js",
   "./energy.js",
+  "./fired.js",
   "./flame.js",
 ];
 

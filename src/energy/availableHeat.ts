@@ -24,7 +24,7 @@ export interface AvailableHeatInput {
   fuelT?: number;
   /** Combustion-air temperature (after any preheater), K. @defaultValue 298.15 */
   airT?: number;
-  /** Flue-gas temperature leaving the equipment (the stack or economiser outlet), K; ≥ 298.15 K unless `condensing`. */
+  /** Flue-gas temperature leaving the process heat-transfer surfaces (before any air preheater heated by it), K; ≥ 298.15 K unless `condensing`. */
   flueT: number;
   /** Moisture of the combustion air, as for `combustion`. @defaultValue dry */
   humidity?: AirHumidity;
@@ -133,9 +133,12 @@ export interface AvailableHeatResult {
  * the ash neglected). It closes exactly as
  * LHV + sensibleFuel + sensibleAir + latentRecovered = availableHeat + stackLoss + unburnedCO + unburnedCarbon + fuelMoisture,
  * and on the higher-heating-value basis HHV + sensible heats = availableHeat + stackLoss + latentLossHHV + losses.
- * Efficiencies are availableHeat/LHV and availableHeat/HHV: air preheat counts as a gain (the
- * preheat effect equals the air's sensible heat), so with a strong preheat the LHV efficiency can
- * exceed 1 — the heat came back from the flue gas through the preheater. Wall and radiation losses of
+ * Efficiencies are availableHeat/LHV and availableHeat/HHV. `flueT` is the temperature at which the
+ * flue gas leaves the process heat-transfer surfaces; with an air preheater heated by the flue gas,
+ * give the temperature before the preheater and the preheated `airT`: the preheat credit (equal to
+ * the air's sensible heat) is the heat the preheater takes from the flue gas, so the result equals
+ * the overall efficiency on the final stack temperature. Giving the final stack temperature together
+ * with preheated air counts that heat twice (a warning says so when the LHV efficiency exceeds 1). Wall and radiation losses of
  * the casing are not modelled (subtract them yourself, typically 1–3 % of the input for heaters —
  * common practice). Heating values from {@link heatingValue}'s Hess sums. Ideal gases at 1 bar
  * standard state; dew points from {@link flueGasDewPoint}.
@@ -203,7 +206,9 @@ export function availableHeat(input: AvailableHeatInput): AvailableHeatResult {
     }
   }
   const efficiencyLHV = p.availableHeat / m.lhv;
-  if (efficiencyLHV > 1) warnings.push(`efficiency above 1 on the LHV basis: the air or fuel preheat returns heat taken from the flue gas`);
+  if (efficiencyLHV > 1) {
+    warnings.push(`efficiency above 1 on the LHV basis: with a flue-gas air preheater, give flueT before the preheater (the preheat is heat taken from the flue gas)`);
+  }
   return {
     availableHeat: clean(p.availableHeat * k),
     stackLoss: clean(p.stackLoss * k),
