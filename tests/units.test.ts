@@ -41,11 +41,13 @@ describe("celsiusSlipHint", () => {
     const { species } = await import("../src/species/species.js");
     const { adiabaticFlameTemperature } = await import("../src/flame/adiabaticFlameTemperature.js");
     const { heatDuty } = await import("../src/energy/heatDuty.js");
+    const { equilibriumComposition } = await import("../src/flame/equilibriumComposition.js");
     const { caught } = await import("./_helpers/caught.js");
     for (const f of [
       () => species("CO2(g)").enthalpy(25),
       () => adiabaticFlameTemperature({ fuel: "CH4(g)", T: 25 }),
       () => heatDuty({ inlet: { T: 25, flows: { "N2(g)": 1 } }, outlet: { T: 400, flows: { "N2(g)": 1 } } }),
+      () => equilibriumComposition({ feed: { "CO(g)": 1, "H2O(g)": 2 }, species: ["CO(g)", "H2O(g)", "CO2(g)", "H2(g)"], T: 25, P: 1e5 }),
     ]) {
       const e = caught(f);
       expect(e.code).toBe("OUT_OF_RANGE");

@@ -1,6 +1,6 @@
 import { RxthermError } from "../errors.js";
-import { evaluateFired, excessAirOf, flueTemperature, prepareFired, type FiredInputBase } from "./internal/firedModel.js";
-import type { AvailableHeatInput } from "./availableHeat.js";
+import { evaluateFired, excessAirOf, flueTemperature, prepareFired } from "./internal/firedModel.js";
+import type { AvailableHeatInput } from "./firedTypes.js";
 
 /**
  * Which setting {@link efficiencyCurve} varies, and over which values.
@@ -78,7 +78,7 @@ export function efficiencyCurve(input: Omit<AvailableHeatInput, "flueT"> & { flu
   if (parameter === "excessAir" && input?.equivalenceRatio !== undefined) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} varies excessAir; drop equivalenceRatio from the base input`, { equivalenceRatio: input.equivalenceRatio });
   }
-  const m = prepareFired(fn, input as FiredInputBase);
+  const m = prepareFired(fn, input);
   const values = [...sweep.values];
   const fixedE = parameter === "flueT" ? excessAirOf(m, input.excessAir, input.equivalenceRatio) : 0;
   const fixedT = parameter === "excessAir" ? flueTemperature(m, input.flueT as number) : 0;

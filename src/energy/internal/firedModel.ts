@@ -10,7 +10,8 @@
 import { RxthermError } from "../../errors.js";
 import { STANDARD_TEMPERATURE_K, ATMOSPHERE_PA, slipHintDetails, withSlipHint } from "../../units.js";
 import type { Flows } from "../../extent/types.js";
-import { combustion, type AirHumidity } from "../../extent/combustion.js";
+import { combustion } from "../../extent/combustion.js";
+import type { AvailableHeatInput } from "../firedTypes.js";
 import { checkMixtureLimits } from "../../extent/mixtureLimits.js";
 import { waterSaturationPressure } from "../../extent/waterSaturationPressure.js";
 import { molarMass } from "../../formula/molarMass.js";
@@ -19,37 +20,9 @@ import { builtInLibrary } from "../../species/builtInLibrary.js";
 import { resolveSpeciesCached } from "../../enthalpy/resolveInputs.js";
 import { NORMAL_MOLAR_VOLUME_M3_PER_MOL, normalise, speciesHeatingValue } from "../../enthalpy/heatingValue.js";
 
-/** Unburned carbon: a share of the fuel carbon, or a carbon-in-ash reading. */
-export type UnburnedCarbon =
-  | {
-      /** Fraction of the fuel carbon left unburnt (in ash, refuse or soot), 0–1. */
-      fractionOfFuelCarbon: number;
-    }
-  | {
-      /** Carbon-free ash (refuse) collected per kg of fuel, kg/kg. */
-      ashPerFuelMass: number;
-      /** Mass fraction of carbon in the collected ash/refuse, 0 ≤ w < 1 (the "carbon in ash" reading). */
-      carbonInAsh: number;
-    };
 
 /** The inputs of the fired-equipment balance (availableHeat without flueT). */
-export interface FiredInputBase {
-  fuel: string | Flows;
-  excessAir?: number;
-  equivalenceRatio?: number;
-  oxidizer?: "air" | "oxygen" | Flows;
-  fuelT?: number;
-  airT?: number;
-  humidity?: AirHumidity;
-  P?: number;
-  condensing?: boolean;
-  coPpm?: number;
-  unburnedCarbon?: UnburnedCarbon;
-  per?: "mol" | "kg" | "Nm3";
-  library?: Library;
-  allowExtremeMixture?: boolean;
-  extrapolate?: boolean;
-}
+export type FiredInputBase = Omit<AvailableHeatInput, "flueT">;
 
 /** A species with its amount in a stream (mol per mol of fuel, or per unit of excess air). */
 interface Part {
