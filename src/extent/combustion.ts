@@ -186,6 +186,11 @@ export interface CombustionResult {
 /**
  * Air and flue gas of the complete combustion of a fuel at a given excess air.
  *
+ * The default oxidizer is the 21/79 air ({@link AIR_21_79}) shared with the flame functions and
+ * `availableHeat`; pass `oxidizer: DRY_AIR` for air with its argon and CO₂. Excess air above 3
+ * (300 %) or φ outside 0.05–20 is taken as a unit slip unless `allowExtremeMixture: true`. Fuel keys
+ * are formulas, or names looked up in `library`.
+ *
  * The fuel is reduced to its elements (C, H, O, N, S and noble gases); complete combustion makes
  * CO₂, H₂O, SO₂ and N₂ (fuel nitrogen leaves as N₂ — thermal and fuel NOx are trace amounts not
  * modelled here). Theoretical O₂ = C + H/4 + S − O/2 (mol of atoms). The dry oxidizer fed is
@@ -216,7 +221,8 @@ export interface CombustionResult {
  * r.air                 // => 9.5238… (mol air per mol CH4)
  * r.dry["CO2(g)"]       // => 0.11731… (11.7 % dry CO₂)
  * @category Combustion
- * @see U.S. Standard Atmosphere, 1976 (air composition, {@link DRY_AIR}); complete-combustion stoichiometry by elements: common practice
+ * @see the 21/79 air of combustion practice ({@link AIR_21_79}, the default) and the U.S. Standard Atmosphere, 1976 ({@link DRY_AIR});
+ *   complete-combustion stoichiometry by elements: common practice
  */
 export function combustion(input: CombustionInput): CombustionResult {
   const fn = "combustion";
