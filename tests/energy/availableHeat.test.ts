@@ -48,6 +48,7 @@ describe("availableHeat", () => {
     expect(r.efficiencyLHV).toBeCloseTo(0.92993, 5); // @example
     expect(r.efficiencyHHV).toBeCloseTo(0.838, 5); // @example
     expect(r.stackLoss).toBeCloseTo(56220.4, 1); // @example
+    expect(r.waterDewPointK).toBeCloseTo(329.7, 1); // README and docs/fired-equipment.md
   });
 
   for (const [label, fuel] of [["methane", { "CH4(g)": 1 }], ["a refinery fuel gas (invented)", REFINERY_GAS]] as const) {
