@@ -17,6 +17,7 @@ export {
 export type { TemperatureUnit, PressureUnit, EnergyUnit, AmountUnit } from "./units.js";
 export { fromPascal, fromJoule, toWatt, fromWatt, toMolPerSecond, fromMolPerSecond, fromJoulePerMol } from "./units.js";
 export type { FlowUnit, PowerUnit, SpecificEnergyUnit, FlowQuantity, MolarMassOption } from "./units.js";
+export { CELSIUS_SLIP_BELOW_K, celsiusSlipHint } from "./units.js";
 
 // ── numeric (layer 0) ─────────────────────────────────────────────────────────
 // (numeric section)
@@ -74,7 +75,9 @@ export { combustion, DRY_AIR, AIR_21_79 } from "./extent/combustion.js";
 export type { CombustionInput, CombustionResult, UltimateAnalysis, UltimateFuel, AirHumidity } from "./extent/combustion.js";
 export { excessAirFromFlueO2, excessAirFromFlueCO2 } from "./extent/excessAirFromFlueO2.js";
 export type { ExcessAirFromFlueO2Input, ExcessAirFromFlueCO2Input } from "./extent/excessAirFromFlueO2.js";
-export { waterSaturationPressure } from "./extent/waterSaturationPressure.js";
+export { waterSaturationPressure, waterSaturationTemperature } from "./extent/waterSaturationPressure.js";
+export { MAX_EXCESS_AIR, EQUIVALENCE_RATIO_LIMITS, checkMixtureLimits } from "./extent/mixtureLimits.js";
+export type { FormulaLookup } from "./extent/types.js";
 
 // ── heat capacity (layer 3) ───────────────────────────────────────────────────
 // (heat-capacity section)
@@ -135,6 +138,12 @@ export type { WobbeIndexOptions } from "./enthalpy/wobbeIndex.js";
 export { heatDuty } from "./energy/heatDuty.js";
 export type { HeatDutyInput, HeatDutyOptions, HeatDutyResult, StreamHeat, PhaseChange } from "./energy/heatDuty.js";
 export { adiabaticReactionTemperature, adiabaticTemperatureRise } from "./energy/adiabaticReactionTemperature.js";
+export { availableHeat } from "./energy/availableHeat.js";
+export type { AvailableHeatInput, AvailableHeatResult, FiredLosses, UnburnedCarbon } from "./energy/availableHeat.js";
+export { efficiencyCurve } from "./energy/efficiencyCurve.js";
+export type { EfficiencySweep, EfficiencyCurveResult } from "./energy/efficiencyCurve.js";
+export { flueGasDewPoint, DEFAULT_SO3_FRACTION } from "./energy/flueGasDewPoint.js";
+export type { FlueGasDewPointInput, FlueGasDewPointResult } from "./energy/flueGasDewPoint.js";
 export type {
   AdiabaticReactionInput, AdiabaticReactionOptions, AdiabaticReactionResult, AdiabaticTemperatureRiseResult,
 } from "./energy/adiabaticReactionTemperature.js";
@@ -147,4 +156,4 @@ export { adiabaticFlameTemperature } from "./flame/adiabaticFlameTemperature.js"
 export type { AdiabaticFlameInput, AdiabaticFlameOptions, AdiabaticFlameResult } from "./flame/adiabaticFlameTemperature.js";
 export { flameTemperatureSweep } from "./flame/flameTemperatureSweep.js";
 export type { FlameSweep, FlameSweepResult } from "./flame/flameTemperatureSweep.js";
-export { DEFAULT_FLAME_PRODUCTS } from "./flame/flameDefaults.js";
+export { DEFAULT_FLAME_PRODUCTS, SULFUR_FLAME_PRODUCTS } from "./flame/flameDefaults.js";

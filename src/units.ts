@@ -346,3 +346,58 @@ function roundOff(x: number): number {
   const r = Number(x.toPrecision(12));
   return r === 0 ? 0 : r;
 }
+
+/**
+ * Temperatures below this (K) given to the library are likely °C slips (25 meant as 25 °C);
+ * out-of-range errors at such temperatures carry a hint. Cryogenic data ranges below it stay usable.
+ *
+ * @category Units
+ * @example
+ * CELSIUS_SLIP_BELOW_K // => 200
+ * @see common practice (process temperatures in °C are rarely meant as kelvin below 200 K)
+ */
+export const CELSIUS_SLIP_BELOW_K = 200;
+
+/**
+ * The "was °C meant?" hint for a temperature in K that is positive but below
+ * {@link CELSIUS_SLIP_BELOW_K}; `undefined` otherwise. Error sites append `hint` to their message
+ * and put it in `details.hint`.
+ *
+ * @param temperatureK - the temperature given, K
+ * @returns the hint text, or undefined when the temperature does not look like a °C slip
+ * @category Units
+ * @example
+ * celsiusSlipHint(25) // => "was °C meant? 25 °C is 298.15 K"
+ */
+export function celsiusSlipHint(temperatureK: number): string | undefined {
+  if (typeof temperatureK !== "number" || !(temperatureK > 0) || !(temperatureK < CELSIUS_SLIP_BELOW_K)) return undefined;
+  return `was °C meant? ${temperatureK} °C is ${roundOff(temperatureK + 273.15)} K`;
+}
+
+/**
+ * `"; <hint>"` for a message when {@link celsiusSlipHint} has one, else `""`.
+ *
+ * @param temperatureK - the temperature given, K
+ * @returns text to append to an error message
+ * @category Units
+ * @example
+ * withSlipHint(25) // => "; was °C meant? 25 °C is 298.15 K"
+ */
+export function withSlipHint(temperatureK: number): string {
+  const h = celsiusSlipHint(temperatureK);
+  return h === undefined ? "" : `; ${h}`;
+}
+
+/**
+ * `{ hint }` for error details when {@link celsiusSlipHint} has one, else `{}`.
+ *
+ * @param temperatureK - the temperature given, K
+ * @returns details to spread into an error's details
+ * @category Units
+ * @example
+ * slipHintDetails(25).hint // => "was °C meant? 25 °C is 298.15 K"
+ */
+export function slipHintDetails(temperatureK: number): { hint?: string } {
+  const h = celsiusSlipHint(temperatureK);
+  return h === undefined ? {} : { hint: h };
+}

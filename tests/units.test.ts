@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import {
   fromJoule, fromJoulePerMol, fromKelvin, fromMolPerSecond, fromPascal, fromWatt, toJoule, toKelvin, toMol, toMolPerSecond, toPascal, toWatt,
+  CELSIUS_SLIP_BELOW_K, celsiusSlipHint, slipHintDetails, withSlipHint,
 } from "../src/units.js";
 import { caught } from "./_helpers/caught.js";
 import { fc, test as fcTest } from "@fast-check/vitest";
@@ -154,5 +155,37 @@ describe("converter invariants (fast-check)", () => {
   fcTest.prop([value, value, fc.constantFrom(...ENERGIES), molar])("fromJoulePerMol is linear: f(a + b) = f(a) + f(b)", (a, b, unit, M) => {
     const f = (x: number) => fromJoulePerMol(x, unit, { molarMassGPerMol: M });
     expect(Math.abs(f(a + b) - f(a) - f(b))).toBeLessThanOrEqual(1e-9 * (Math.abs(f(a)) + Math.abs(f(b))) + 1e-9);
+  });
+});
+
+describe("celsiusSlipHint", () => {
+  it("celsiusSlipHint gives the documented example values", () => {
+    expect(CELSIUS_SLIP_BELOW_K).toBe(200); // @example
+    expect(celsiusSlipHint(25)).toBe("was °C meant? 25 °C is 298.15 K"); // @example
+    expect(withSlipHint(25)).toBe("; was °C meant? 25 °C is 298.15 K"); // @example
+    expect(slipHintDetails(25).hint).toBe("was °C meant? 25 °C is 298.15 K"); // @example
+  });
+  it("gives no hint at 200 K and above, at 0 K or below, or for non-numbers", () => {
+    for (const T of [200, 298.15, 0, -5, Number.NaN]) expect(celsiusSlipHint(T)).toBeUndefined();
+    expect(withSlipHint(300)).toBe("");
+    expect(slipHintDetails(300)).toEqual({});
+  });
+  it("a species, a flame and an energy balance at 25 K ask whether °C was meant", async () => {
+    const { species } = await import("../src/species/species.js");
+    const { adiabaticFlameTemperature } = await import("../src/flame/adiabaticFlameTemperature.js");
+    const { heatDuty } = await import("../src/energy/heatDuty.js");
+    const { equilibriumComposition } = await import("../src/flame/equilibriumComposition.js");
+    const { caught } = await import("./_helpers/caught.js");
+    for (const f of [
+      () => species("CO2(g)").enthalpy(25),
+      () => adiabaticFlameTemperature({ fuel: "CH4(g)", T: 25 }),
+      () => heatDuty({ inlet: { T: 25, flows: { "N2(g)": 1 } }, outlet: { T: 400, flows: { "N2(g)": 1 } } }),
+      () => equilibriumComposition({ feed: { "CO(g)": 1, "H2O(g)": 2 }, species: ["CO(g)", "H2O(g)", "CO2(g)", "H2(g)"], T: 25, P: 1e5 }),
+    ]) {
+      const e = caught(f);
+      expect(e.code).toBe("OUT_OF_RANGE");
+      expect(e.message).toContain("was °C meant? 25 °C is 298.15 K");
+      expect(e.details.hint).toBe("was °C meant? 25 °C is 298.15 K");
+    }
   });
 });

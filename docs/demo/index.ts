@@ -12,6 +12,7 @@ const sections: string[] = [
   "./heat-capacity.js",
   "./energy.js",
   "./speciesData.js",
+  "./fired.js",
   "./flame.js",
 ];
 

@@ -1,12 +1,15 @@
 import { RxthermError } from "../errors.js";
 import type { Formula } from "../formula/types.js";
+import { molarMass } from "../formula/molarMass.js";
 import { formulaOf, molarMassOf, validateFlows } from "./internal/extentSystem.js";
-import type { Flows } from "./types.js";
+import type { Flows, FormulaLookup } from "./types.js";
 import { waterSaturationPressure } from "./waterSaturationPressure.js";
 import { compensatedSum } from "../numeric/compensatedSum.js";
+import { checkMixtureLimits } from "./mixtureLimits.js";
 
 /**
- * Dry air by mole fraction, the default oxidizer of {@link combustion}: O₂ 0.209476 and Ar
+ * Dry air by mole fraction, with its argon and CO₂ (pass it as `oxidizer` where the argon and the
+ * 412 ppm CO₂ of real air matter, e.g. to match an analyser reading to the last 0.1 %): O₂ 0.209476 and Ar
  * 0.00934 from the U.S. Standard Atmosphere 1976 (table 3; values written from memory of that table), CO₂ 0.000412 (≈ 412 ppm, the
  * global mean of about 2020; NOAA Global Monitoring Laboratory — value from memory), and N₂ the
  * balance 0.780772 (the 1976 table's 0.78084 less the CO₂ update; Ne, He, Kr and the other
@@ -25,8 +28,13 @@ export const DRY_AIR: Readonly<Flows> = Object.freeze({
 });
 
 /**
- * The simplified air of combustion calculations: 21 % O₂ and 79 % N₂ by mole (argon and CO₂
- * counted as nitrogen). Pass it as `oxidizer` to compare with tables built on this convention.
+ * The air of combustion calculations: 21 % O₂ and 79 % N₂ by mole (3.762 mol N₂ per mol O₂; argon
+ * and CO₂ counted as nitrogen). It is the one default air of rxtherm — {@link combustion}, the flame
+ * functions and `availableHeat` all use it when no oxidizer is given, so the same fuel gives the
+ * same air and flue gas everywhere. Why this one: it is the convention of published combustion
+ * tables and flame temperatures, so results can be checked against them, and it keeps carbon out
+ * of the air (a hydrogen flame has no trace CO₂ to carry). It differs from {@link DRY_AIR} by 0.24 %
+ * in the air needed (O₂ 0.21 against 0.2095) and by the 0.93 % argon, counted here as nitrogen.
  *
  * @category Combustion
  * @example
@@ -102,14 +110,32 @@ export interface CombustionInput {
   excessAir?: number;
   /** Equivalence ratio φ in (0, 1]; excessAir = 1/φ − 1. Give this or excessAir, not both. */
   equivalenceRatio?: number;
-  /** Dry oxidizer composition (relative mole amounts, normalised here). @defaultValue {@link DRY_AIR} */
-  oxidizer?: Flows;
+  /**
+   * Dry oxidizer: `"air"` ({@link AIR_21_79}, the one default air of rxtherm, shared with the flame
+   * functions and `availableHeat`), `"oxygen"` (pure O₂), or a composition (relative mole amounts,
+   * normalised here), e.g. {@link DRY_AIR} for air with its argon and CO₂.
+   * @defaultValue "air" ({@link AIR_21_79})
+   */
+  oxidizer?: "air" | "oxygen" | Flows;
   /** O₂ mole fraction of the dry oxidizer after enriching it with pure O₂ (between its own O₂ fraction and 1). */
   oxygenEnrichment?: number;
   /** Moisture of the oxidizer. @defaultValue dry */
   humidity?: AirHumidity;
   /** Fraction of the fuel carbon leaving as CO instead of CO₂, 0–1. @defaultValue 0 */
   carbonToCO?: number;
+  /**
+   * Accept excess air above {@link MAX_EXCESS_AIR} (300 %) or an equivalence ratio outside
+   * {@link EQUIVALENCE_RATIO_LIMITS}; without it such values are taken as unit slips and rejected.
+   * @defaultValue false
+   */
+  allowExtremeMixture?: boolean;
+  /**
+   * Species library used to read fuel keys that are not formulas (names such as `"methane"`), as the
+   * flame functions and `availableHeat` do; pass `builtInLibrary()` for the built-in names. Keys that
+   * are formulas (`"CH4(g)"`, `"CH4"`) are read directly.
+   * @defaultValue none (formulas only)
+   */
+  library?: FormulaLookup;
 }
 
 /**
@@ -160,6 +186,11 @@ export interface CombustionResult {
 /**
  * Air and flue gas of the complete combustion of a fuel at a given excess air.
  *
+ * The default oxidizer is the 21/79 air ({@link AIR_21_79}) shared with the flame functions and
+ * `availableHeat`; pass `oxidizer: DRY_AIR` for air with its argon and CO₂. Excess air above 3
+ * (300 %) or φ outside 0.05–20 is taken as a unit slip unless `allowExtremeMixture: true`. Fuel keys
+ * are formulas, or names looked up in `library`.
+ *
  * The fuel is reduced to its elements (C, H, O, N, S and noble gases); complete combustion makes
  * CO₂, H₂O, SO₂ and N₂ (fuel nitrogen leaves as N₂ — thermal and fuel NOx are trace amounts not
  * modelled here). Theoretical O₂ = C + H/4 + S − O/2 (mol of atoms). The dry oxidizer fed is
@@ -175,6 +206,7 @@ export interface CombustionResult {
  * @param input - fuel, excess air or equivalence ratio, oxidizer, humidity, enrichment, CO fraction
  * @returns theoretical O₂ and air, air fed, flue gas flows (mol or mol/s) and wet and dry mole fractions, masses in kg
  * @throws {@link RxthermError} `INVALID_ARGUMENT` for excess air < 0 or φ > 1 (rich; details: `equivalenceRatio`, `oxygenDeficit`),
+ *   excess air above 3 or φ outside 0.05–20 without `allowExtremeMixture` (a likely unit slip; details: `hint`),
  *   both excessAir and equivalenceRatio, fractions outside their range, an ultimate analysis not summing to 1,
  *   or an oxidizer species other than O₂, N₂, CO₂, H₂O and noble gases
  * @throws {@link RxthermError} `NEGATIVE_FLOW` for a negative fuel or oxidizer flow
@@ -189,14 +221,15 @@ export interface CombustionResult {
  * r.air                 // => 9.5238… (mol air per mol CH4)
  * r.dry["CO2(g)"]       // => 0.11731… (11.7 % dry CO₂)
  * @category Combustion
- * @see U.S. Standard Atmosphere, 1976 (air composition, {@link DRY_AIR}); complete-combustion stoichiometry by elements: common practice
+ * @see the 21/79 air of combustion practice ({@link AIR_21_79}, the default) and the U.S. Standard Atmosphere, 1976 ({@link DRY_AIR});
+ *   complete-combustion stoichiometry by elements: common practice
  */
 export function combustion(input: CombustionInput): CombustionResult {
   const fn = "combustion";
   if (input === null || typeof input !== "object") {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object { fuel, ... }`, {});
   }
-  const fuel = fuelElements(input.fuel, fn);
+  const fuel = fuelElements(input.fuel, fn, input.library);
   const C = fuel.atoms.C ?? 0;
   const H = fuel.atoms.H ?? 0;
   const O = fuel.atoms.O ?? 0;
@@ -279,7 +312,7 @@ interface FuelElements {
 const NOBLE = new Set(["He", "Ne", "Ar", "Kr", "Xe"]);
 const BURNABLE = new Set(["C", "H", "O", "N", "S"]);
 
-function fuelElements(fuelIn: CombustionInput["fuel"], fn: string): FuelElements {
+function fuelElements(fuelIn: CombustionInput["fuel"], fn: string, library: FormulaLookup | undefined): FuelElements {
   if (fuelIn === null || typeof fuelIn !== "object") {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires fuel as species flows or { ultimate }`, {});
   }
@@ -287,17 +320,17 @@ function fuelElements(fuelIn: CombustionInput["fuel"], fn: string): FuelElements
     return ultimateElements(fuelIn as UltimateFuel, fn);
   }
   const flows = fuelIn as Flows;
-  validateFlows(flows, fn, "fuel");
+  validateFlows(flows, fn, "fuel", false); // keys are read below (formulas, or names through the library)
   const atoms: Record<string, number> = {};
   const noble: Flows = {};
   const bad = new Set<string>();
   let massG = 0;
   for (const [key, n] of Object.entries(flows)) {
-    const f: Formula = formulaOf(key, fn, "fuel");
+    const f: Formula = fuelFormula(key, fn, library);
     if (f.charge !== 0) {
       throw new RxthermError("INVALID_ARGUMENT", `${fn}: fuel species ${key} is charged`, { species: key, charge: f.charge });
     }
-    massG += n * molarMassOf(key, fn, "fuel");
+    massG += n * molarMass(f);
     const els = Object.entries(f.elements);
     if (els.length === 1 && NOBLE.has((els[0] as [string, number])[0])) {
       const el = (els[0] as [string, number])[0];
@@ -320,6 +353,37 @@ function fuelElements(fuelIn: CombustionInput["fuel"], fn: string): FuelElements
     throw new RxthermError("NOTHING_TO_BURN", `${fn}: the fuel flows are all zero`, { theoreticalO2: 0 });
   }
   return { atoms, moistureMol: 0, noble, massKg: massG / 1000, ashKg: 0 };
+}
+
+/**
+ * The formula of a fuel key: read as a formula, or — when it is not one and a library is given —
+ * looked up there by key, formula or name (as the flame functions do).
+ */
+function fuelFormula(key: string, fn: string, library: FormulaLookup | undefined): Formula {
+  try {
+    return formulaOf(key, fn, "fuel");
+  } catch (e) {
+    if (!(e instanceof RxthermError)) throw e;
+    if (library === undefined) {
+      if (!/^[a-z][a-z0-9 ,'-]*$/.test(key)) throw e; // formula-like text: keep the formula error (UNKNOWN_ELEMENT...)
+      throw new RxthermError(
+        "UNKNOWN_SPECIES",
+        `${fn}: fuel key "${key}" is not a formula; write the formula (e.g. "CH4(g)") or pass library: builtInLibrary() to read names as the flame functions do (${e.message.replace(/^\[rxtherm\] /, "")})`,
+        { ...e.details, species: key, formulaError: e.code },
+      );
+    }
+    if (library === null || typeof library !== "object" || typeof library.get !== "function") {
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires library to be a species library (with get)`, { library: String(library) });
+    }
+    try {
+      return library.get(key).formula;
+    } catch (e2) {
+      if (e2 instanceof RxthermError) {
+        throw new RxthermError(e2.code, `${fn} needs the formula of fuel ${key}: ${e2.message.replace(/^\[rxtherm\] /, "")}`, { ...e2.details, species: key });
+      }
+      throw e2;
+    }
+  }
 }
 
 function ultimateElements(fuel: UltimateFuel, fn: string): FuelElements {
@@ -380,6 +444,7 @@ function resolveExcess(input: CombustionInput, theoreticalO2: number, fn: string
     }
     e = excessAir;
   }
+  checkMixtureLimits(fn, { excessAir, equivalenceRatio }, input.allowExtremeMixture);
   if (e < 0 || (equivalenceRatio !== undefined && equivalenceRatio > 1)) {
     const phi = equivalenceRatio ?? 1 / (1 + e);
     const oxygenDeficit = theoreticalO2 * (1 - 1 / phi);
@@ -415,11 +480,15 @@ function canonicalOxidizerKey(f: Formula): string | null {
 
 function oxidizerComposition(input: CombustionInput, fn: string): Flows {
   let comp: Flows;
-  if (input.oxidizer === undefined) comp = { ...DRY_AIR };
-  else {
-    validateFlows(input.oxidizer, fn, "oxidizer");
+  const ox = input.oxidizer;
+  if (ox === undefined || ox === "air") comp = { ...AIR_21_79 };
+  else if (ox === "oxygen") comp = { "O2(g)": 1 };
+  else if (typeof ox === "string") {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires oxidizer "air", "oxygen" or a composition object, got "${ox}"`, { oxidizer: ox });
+  } else {
+    validateFlows(ox, fn, "oxidizer");
     comp = {};
-    for (const [key, v] of Object.entries(input.oxidizer)) {
+    for (const [key, v] of Object.entries(ox)) {
       const canon = canonicalOxidizerKey(formulaOf(key, fn, "oxidizer"));
       if (canon === null) {
         throw new RxthermError("INVALID_ARGUMENT", `${fn}: oxidizer species ${key} is not one of O2, N2, CO2, H2O or a noble gas`, { species: key });

@@ -38,9 +38,9 @@ export interface ExcessAirFromFlueCO2Input extends Omit<CombustionInput, "excess
  * @throws {@link RxthermError} `INVALID_ARGUMENT` when the reading is not in [stoichiometric O₂, oxidizer O₂) (details: `dryO2`, `range`)
  * @throws every error of {@link combustion} for the fuel and oxidizer
  * @example
- * excessAirFromFlueO2({ fuel: { C: 1 }, dryO2: 0.03 }) // => 0.16716… (= 0.03/(0.209476 − 0.03))
+ * excessAirFromFlueO2({ fuel: { C: 1 }, dryO2: 0.03 }) // => 0.16667 (= 0.03/(0.21 − 0.03), default 21/79 air)
  * @category Combustion
- * @see common practice (dry flue-gas O₂ balance); air composition from the U.S. Standard Atmosphere, 1976
+ * @see common practice (dry flue-gas O₂ balance; the 21/79 air of {@link AIR_21_79})
  */
 export function excessAirFromFlueO2(input: ExcessAirFromFlueO2Input): number {
   return fromReading(input, "O2(g)", input?.dryO2, "dryO2", "excessAirFromFlueO2");

@@ -1,3 +1,5 @@
+import type { Formula } from "../formula/types.js";
+
 /**
  * Species flows or amounts: species key → mol (batch) or mol/s (flow).
  *
@@ -32,3 +34,15 @@ export type ExtentSpec =
   | { reaction: number; extent: number }
   | { of: string; yield: number; basis: string }
   | { of: string; selectivity: number; over: string };
+
+/**
+ * Anything that resolves a species key, formula or name to its formula — a species `Library`
+ * (`builtInLibrary()`, `createLibrary(...)`) fits. {@link combustion} uses it to read fuel keys that
+ * are names (`"methane"`), the way the flame functions and `availableHeat` resolve them.
+ *
+ * @category Stoichiometry
+ */
+export interface FormulaLookup {
+  /** The entry for a key, formula or name; throws when there is none. */
+  get(key: string): { readonly formula: Formula };
+}

@@ -38,7 +38,7 @@ export type { AdiabaticFlameInput, AdiabaticFlameOptions, AdiabaticFlameResult }
  * @returns flame temperature (K), final pressure (Pa), product mole fractions and amounts (mol), iterations, energy residual (J)
  * @throws RxthermError `NOTHING_TO_BURN` when the fuel has no C, H or S to oxidise beyond its own oxygen (details: `theoreticalO2`)
  * @throws RxthermError `NO_OXIDIZER` when the oxidizer supplies no free oxygen
- * @throws RxthermError `INVALID_ARGUMENT` for φ ≤ 0, excess air ≤ −1, both φ and excess air, T ≤ 0, P ≤ 0, unknown mode/process/oxidizer, a negative amount, or (mode "complete") fewer O than C atoms
+ * @throws RxthermError `INVALID_ARGUMENT` for φ ≤ 0, excess air ≤ −1, excess air above 3 or φ outside 0.05–20 without `allowExtremeMixture` (a likely unit slip), both φ and excess air, T ≤ 0, P ≤ 0, unknown mode/process/oxidizer, a negative amount, or (mode "complete") fewer O than C atoms
  * @throws RxthermError `ELEMENTS_NOT_COVERED` when the product set cannot hold every element of the reactants
  * @throws RxthermError `NO_BRACKET` when no temperature inside the products' data range closes the energy balance (details: `rangeK`)
  * @throws RxthermError `NO_CONVERGENCE` when an equilibrium or temperature iteration does not converge

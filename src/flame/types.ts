@@ -41,6 +41,12 @@ export interface AdiabaticFlameInput {
   diluentT?: number;
   /** Species library. @defaultValue the built-in library */
   library?: Library;
+  /**
+   * Accept excess air above 3 (300 %) or an equivalence ratio outside 0.05–20; without it such values
+   * are taken as unit slips and rejected (`INVALID_ARGUMENT`), as in `combustion`.
+   * @defaultValue false
+   */
+  allowExtremeMixture?: boolean;
 }
 
 /**

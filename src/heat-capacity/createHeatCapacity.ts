@@ -1,4 +1,5 @@
 import { RxthermError } from "../errors.js";
+import { slipHintDetails, withSlipHint } from "../units.js";
 import * as compiled from "./internal/cpCompile.js";
 import type { CpRange, RangeOptions } from "./types.js";
 
@@ -415,8 +416,8 @@ class PiecewiseHeatCapacity implements HeatCapacity {
     const range = [this.TminK, this.TmaxK];
     throw new RxthermError(
       "OUT_OF_RANGE",
-      `${fn}${this.label ? ` (${this.label})` : ""}: ${T} K is outside the data range [${this.TminK}, ${this.TmaxK}] K; pass { extrapolate: true } to extend the nearest range`,
-      index === undefined ? { label: this.label, T, range } : { label: this.label, T, range, index },
+      `${fn}${this.label ? ` (${this.label})` : ""}: ${T} K is outside the data range [${this.TminK}, ${this.TmaxK}] K${withSlipHint(T)}; pass { extrapolate: true } to extend the nearest range`,
+      index === undefined ? { label: this.label, T, range, ...slipHintDetails(T) } : { label: this.label, T, range, index, ...slipHintDetails(T) },
     );
   }
 

@@ -31,9 +31,11 @@ export const MAX_REACTION_COEFFICIENT = 1e9;
  * - Terms are joined by `+`. A `+` written directly after a species and followed by a space,
  *   another `+`, the end of the side or a phase suffix is that species' charge: in
  *   `Na+ + Cl- -> NaCl(s)` the first `+` is the charge of Na⁺ and the second joins the terms.
- *   Elsewhere (`H2+O2`) a `+` joins terms. So write a positive charge with its digits first
- *   (`Fe3+`, `Fe^3+`, `Fe^{3+}`, `Fe³⁺`): `Fe+3 + e-` reads as `Fe`, then `3 ...`. A `+` right
- *   after `^` or right before a closing bracket is never a separator.
+ *   Elsewhere (`H2+O2`) a `+` joins terms. A positive charge is best written digits first
+ *   (`Fe3+`, `Fe^3+`, `Fe^{3+}`, `Fe³⁺`); sign-then-number (`Fe+2`) is read as a charge when the
+ *   side's separators are spaced (`MnO4- + Fe+2 + H+`) or the species stands alone on its side,
+ *   and otherwise (`Fe+2+e-`) as a separator, with a hint (`Fe2+`?) in the error it leads to. A `+`
+ *   right after `^` or right before a closing bracket is never a separator.
  * - Each term is an optional coefficient and a species. The coefficient is an integer (`2`),
  *   a decimal (`6.5`) or a fraction (`13/2`), read exactly; it may be glued to the formula
  *   (`2H2O`, `1/2O2`) because no formula starts with a digit. Exponent notation is not
@@ -61,6 +63,7 @@ export const MAX_REACTION_COEFFICIENT = 1e9;
  * r.products[1].coefficient // => 4
  * parseReaction("MnO4- + 8 H+ + 5 e- -> Mn2+ + 4 H2O").reactants.map((t) => t.species) // => ["MnO4-", "H+", "e-"]
  * parseReaction("C2H6 + 7/2 O2 = 2 CO2 + 3 H2O").reactants[1].exact // => "7/2"
+ * parseReaction("MnO4- + Fe+2 + H+ -> Mn+2 + Fe+3 + H2O").products[0].formula.charge // => 2
  * @category Reaction
  * @see IUPAC, Quantities, Units and Symbols in Physical Chemistry ("Green Book"), 3rd ed. (2007), §2.10.1 (chemical equations, stoichiometric numbers)
  */
@@ -141,14 +144,18 @@ function parseSide(text: string, start: number, end: number, side: "reactants" |
   const terms: Term[] = [];
   let termStart = start;
   let hasContent = false; // the current term has non-space text before this point
+  let hint: string | undefined; // set when the current term follows a "+digits" read as a separator
+  // sign-then-number charges (Fe+2) are read as charges when the separators of this side are spaced
+  const spacedSide = spacedSeparators(text, start, end);
   for (let i = start; i < end; i++) {
     const ch = text[i] as string;
     if (ch === "+") {
       const prev = text[i - 1];
       const next = i + 1 < end ? text[i + 1] : undefined;
+      const glued = hasContent && !isSpace(prev);
+      const digitsEnd = glued ? signedChargeEnd(text, i + 1, end) : -1;
       const isCharge =
-        hasContent &&
-        !isSpace(prev) &&
+        glued &&
         (prev === "^" ||
           next === undefined ||
           isSpace(next) ||
@@ -156,9 +163,11 @@ function parseSide(text: string, start: number, end: number, side: "reactants" |
           next === ")" ||
           next === "]" ||
           next === "}" ||
-          PHASE_AFTER_CHARGE.test(text.slice(i + 1, end)));
+          PHASE_AFTER_CHARGE.test(text.slice(i + 1, end)) ||
+          (digitsEnd > 0 && spacedSide));
       if (!isCharge) {
-        terms.push(parseTerm(text, termStart, i));
+        terms.push(parseTerm(text, termStart, i, hint));
+        hint = glued ? chargeHint(text, termStart, i, end) : undefined;
         termStart = i + 1;
         hasContent = false;
         continue;
@@ -166,11 +175,47 @@ function parseSide(text: string, start: number, end: number, side: "reactants" |
     }
     if (!isSpace(ch)) hasContent = true;
   }
-  terms.push(parseTerm(text, termStart, end));
+  terms.push(parseTerm(text, termStart, end, hint));
   return terms;
 }
 
-function parseTerm(text: string, start: number, end: number): Term {
+/**
+ * End of the digits after a glued "+" when they could be a sign-then-number charge (`Fe+2`): the
+ * digits run to the end of the side, a space or a phase suffix. −1 otherwise.
+ */
+function signedChargeEnd(text: string, from: number, end: number): number {
+  let j = from;
+  while (j < end && text.charCodeAt(j) >= 48 && text.charCodeAt(j) <= 57) j++;
+  if (j === from) return -1;
+  if (j === end || isSpace(text[j]) || PHASE_AFTER_CHARGE.test(text.slice(j, end))) return j;
+  return -1;
+}
+
+/** True when every separator-looking "+" of the side stands between spaces, or the side has one term. */
+function spacedSeparators(text: string, start: number, end: number): boolean {
+  let spaced = false;
+  for (let i = start; i < end; i++) {
+    if (text[i] !== "+") continue;
+    const before = isSpace(text[i - 1]);
+    const after = i + 1 >= end || isSpace(text[i + 1]);
+    if (before && after) spaced = true;
+    else if (before !== after && before) return false; // "A +B": a separator glued to the next term
+  }
+  // no spaced separator at all: only a single term such as "Mn+2" reads its digits as a charge
+  return spaced || !/\s/.test(text.slice(start, end).trim());
+}
+
+/** The "Fe2+?" hint for a "+digits" glued to a species and read as a separator (undefined without digits). */
+function chargeHint(text: string, termStart: number, plus: number, end: number): string | undefined {
+  let j = plus + 1;
+  while (j < end && text.charCodeAt(j) >= 48 && text.charCodeAt(j) <= 57) j++;
+  if (j === plus + 1) return undefined;
+  const species = text.slice(termStart, plus).trim().replace(/^[\d./\s]+/, "");
+  const digits = text.slice(plus + 1, j);
+  return `"${species}+${digits}" was read as ${species} + ${digits}…; if a charge was meant write ${species}${digits}+ (or space the separators: "${species}+${digits} + ...")`;
+}
+
+function parseTerm(text: string, start: number, end: number, hint?: string): Term {
   const raw = text.slice(start, end);
   const lead = raw.length - raw.trimStart().length;
   const body = raw.trim();
@@ -209,9 +254,10 @@ function parseTerm(text: string, start: number, end: number): Term {
   const species = body.slice(speciesOffset);
   const speciesColumn = column + speciesOffset;
   if (species === "") {
-    throw new RxthermError("INVALID_REACTION", `parseReaction found a coefficient without a species at column ${column}`, {
+    throw new RxthermError("INVALID_REACTION", `parseReaction found a coefficient without a species at column ${column}${hint !== undefined ? `; ${hint}` : ""}`, {
       column,
       reason: "coefficient without a species",
+      ...(hint !== undefined ? { hint } : {}),
     });
   }
   let formula;

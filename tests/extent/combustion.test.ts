@@ -38,23 +38,25 @@ describe("combustion", () => {
 
   describe("theoretical air per kg of fuel against combustion-handbook values", () => {
     // Handbook values (kg dry air per kg fuel, rounded to 0.1) as tabulated in combustion handbooks —
-    // from memory; toBeCloseTo(v, 1) checks agreement within the table's rounding (± 0.05)
+    // from memory; toBeCloseTo(v, 1) checks agreement within the table's rounding (± 0.05). Those tables
+    // use real dry air (O2 0.2095, M 28.96 g/mol), so the checks pass DRY_AIR rather than the default
+    // 21/79 air (which gives 17.1 kg/kg for methane: 0.24 % more air by mole but a lighter air).
     it("methane 17.2 kg/kg (from memory)", () => {
-      expect(combustion({ fuel: { "CH4(g)": 1 } }).theoreticalAirToFuelMass).toBeCloseTo(17.2, 1);
+      expect(combustion({ fuel: { "CH4(g)": 1 }, oxidizer: DRY_AIR }).theoreticalAirToFuelMass).toBeCloseTo(17.2, 1);
     });
     it("propane 15.7 kg/kg (from memory)", () => {
-      expect(combustion({ fuel: { "C3H8(g)": 1 } }).theoreticalAirToFuelMass).toBeCloseTo(15.7, 1);
+      expect(combustion({ fuel: { "C3H8(g)": 1 }, oxidizer: DRY_AIR }).theoreticalAirToFuelMass).toBeCloseTo(15.7, 1);
     });
     it("hydrogen 34.3 kg/kg (from memory)", () => {
-      expect(combustion({ fuel: { "H2(g)": 1 } }).theoreticalAirToFuelMass).toBeCloseTo(34.3, 1);
+      expect(combustion({ fuel: { "H2(g)": 1 }, oxidizer: DRY_AIR }).theoreticalAirToFuelMass).toBeCloseTo(34.3, 1);
     });
     it("carbon 11.5 kg/kg (from memory)", () => {
-      expect(combustion({ fuel: { "C(s)": 1 } }).theoreticalAirToFuelMass).toBeCloseTo(11.5, 1);
+      expect(combustion({ fuel: { "C(s)": 1 }, oxidizer: DRY_AIR }).theoreticalAirToFuelMass).toBeCloseTo(11.5, 1);
     });
     it("a coal by ultimate analysis: 11.5 C + 34.3 (H − O/8) + 4.3 S kg/kg (common practice; coefficients from memory)", () => {
       // invented coal, as-fired mass fractions
       const u = { C: 0.7, H: 0.05, O: 0.08, N: 0.015, S: 0.01, moisture: 0.08, ash: 0.065 };
-      const r = combustion({ fuel: { ultimate: u } });
+      const r = combustion({ fuel: { ultimate: u }, oxidizer: DRY_AIR });
       const formula = 11.5 * u.C + 34.3 * (u.H - u.O / 8) + 4.3 * u.S;
       // the three-significant-figure coefficients carry about 0.2 % rounding
       expect(Math.abs(r.theoreticalAirToFuelMass / formula - 1)).toBeLessThan(0.002);
@@ -94,8 +96,40 @@ describe("combustion", () => {
   it("a fraction of carbon to CO keeps its unused oxygen in the flue gas", () => {
     const r = combustion({ fuel: { CH4: 1 }, excessAir: 0.1, carbonToCO: 0.01 });
     expect(r.flueGas["CO(g)"]).toBeCloseTo(0.01, 15);
-    expect(r.flueGas["CO2(g)"]! - r.airFlows["CO2(g)"]!).toBeCloseTo(0.99, 12);
+    expect(r.airFlows["CO2(g)"]).toBeUndefined(); // the default 21/79 air carries no CO2
+    expect(r.flueGas["CO2(g)"]).toBeCloseTo(0.99, 12);
     expect(r.flueGas["O2(g)"]).toBeCloseTo(0.2 + 0.005, 12);
+  });
+
+  it("combustion gives the README example values (21/79 air, the default everywhere)", () => {
+    const gas = { "CH4(g)": 0.9, "C2H6(g)": 0.06, "N2(g)": 0.04 }; // invented natural gas
+    const fire = combustion({ fuel: gas, excessAir: 0.15 });
+    // hand: O2 = 0.9·2 + 0.06·3.5 = 2.01 mol; air = 1.15·2.01/0.21 = 11.00714 mol (21/79 air, common practice)
+    expect(fire.air).toBeCloseTo(1.15 * 2.01 / 0.21, 12);
+    expect(fire.air).toBeCloseTo(11.007, 3);
+    expect(fire.dry["CO2(g)"]).toBeCloseTo(0.1014, 4);
+  });
+
+  it("one default air: omitted, \"air\" and AIR_21_79 give the same flue gas; \"oxygen\" is pure O2", () => {
+    const a = combustion({ fuel: { "CH4(g)": 1 }, excessAir: 0.1 });
+    const b = combustion({ fuel: { "CH4(g)": 1 }, excessAir: 0.1, oxidizer: "air" });
+    const c = combustion({ fuel: { "CH4(g)": 1 }, excessAir: 0.1, oxidizer: AIR_21_79 });
+    expect(a.flueGas).toEqual(b.flueGas);
+    expect(a.flueGas).toEqual(c.flueGas);
+    expect(a.flueGas["Ar(g)"]).toBeUndefined();
+    const o = combustion({ fuel: { "CH4(g)": 1 }, oxidizer: "oxygen" });
+    expect(o.air).toBe(2);
+    expect(caught(() => combustion({ fuel: { "CH4(g)": 1 }, oxidizer: "ozone" as "air" })).code).toBe("INVALID_ARGUMENT");
+  });
+
+  it("fuel names resolve through a library as in the flame functions; without one the error says how", async () => {
+    const { builtInLibrary } = await import("../../src/species/builtInLibrary.js");
+    const byName = combustion({ fuel: { methane: 1, "n-C4H10(g)": 0.5 }, library: builtInLibrary() });
+    expect(byName.theoreticalO2).toBeCloseTo(2 + 0.5 * 6.5, 12);
+    const e = caught(() => combustion({ fuel: { methane: 1 } }));
+    expect(e.code).toBe("UNKNOWN_SPECIES");
+    expect(e.message).toContain("builtInLibrary()");
+    expect(caught(() => combustion({ fuel: { unobtainium: 1 }, library: builtInLibrary() })).code).toBe("UNKNOWN_SPECIES");
   });
 
   it("a biogas with CO2, N2 and H2S burns by its elements", () => {

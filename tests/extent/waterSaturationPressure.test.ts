@@ -1,6 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { RxthermError } from "../../src/errors.js";
-import { waterSaturationPressure } from "../../src/extent/waterSaturationPressure.js";
+import { fc, test } from "@fast-check/vitest";
+import { waterSaturationPressure, waterSaturationTemperature } from "../../src/extent/waterSaturationPressure.js";
+import { caught } from "../_helpers/caught.js";
 
 describe("waterSaturationPressure", () => {
   it("reproduces the IAPWS-IF97 check values (IAPWS R7-97(2012), table 35 — values from memory)", () => {
@@ -20,5 +22,27 @@ describe("waterSaturationPressure", () => {
       expect((e as RxthermError).code).toBe("OUT_OF_RANGE");
       expect((e as RxthermError).details.range).toEqual([273.15, 647.096]);
     }
+  });
+});
+
+describe("waterSaturationTemperature", () => {
+  it("reproduces the IAPWS-IF97 check values of the saturation-temperature equation (IAPWS R7-97(2012), table 35 — values from memory)", () => {
+    expect(waterSaturationTemperature(0.1e6)).toBeCloseTo(0.372755919e3, 6);
+    expect(waterSaturationTemperature(1e6)).toBeCloseTo(0.453035632e3, 6);
+    expect(waterSaturationTemperature(10e6)).toBeCloseTo(0.584149488e3, 6);
+  });
+  it("waterSaturationTemperature gives the documented example (normal boiling point, ITS-90 373.124 K — from memory)", () => {
+    expect(waterSaturationTemperature(101325)).toBeCloseTo(373.1243, 4);
+  });
+  test.prop([fc.double({ min: 273.16, max: 647, noNaN: true })])("inverts waterSaturationPressure to 1e-6 K", (T) => {
+    expect(Math.abs(waterSaturationTemperature(waterSaturationPressure(T)) - T)).toBeLessThan(1e-6);
+  });
+  it("rejects pressures off the saturation line", () => {
+    expect(caught(() => waterSaturationTemperature(100)).code).toBe("OUT_OF_RANGE");
+    expect(caught(() => waterSaturationTemperature(3e7)).details.range).toEqual([611.213, 22.064e6]);
+  });
+  it("waterSaturationPressure below 273.15 K asks whether °C was meant", () => {
+    const e = caught(() => waterSaturationPressure(60));
+    expect(e.message).toContain("was °C meant? 60 °C is 333.15 K");
   });
 });

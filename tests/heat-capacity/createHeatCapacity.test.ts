@@ -321,7 +321,10 @@ describe("createHeatCapacity", () => {
     it("throws OUT_OF_RANGE with label, T and range outside the data", () => {
       const e = caught(() => N2.cp(50));
       expect(e.code).toBe("OUT_OF_RANGE");
-      expect(e.details).toEqual({ label: "N2(g)", T: 50, range: [100, 6000] });
+      // below 200 K the error also asks whether °C was meant (50 °C = 323.15 K)
+      expect(e.details).toEqual({ label: "N2(g)", T: 50, range: [100, 6000], hint: "was °C meant? 50 °C is 323.15 K" });
+      expect(e.message).toContain("was °C meant?");
+      expect(caught(() => N2.cp(7000)).details.hint).toBeUndefined();
       expect(caught(() => N2.deltaH(300, 7000)).details).toMatchObject({ T: 7000, range: [100, 6000] });
       expect(caught(() => N2.deltaS(7000, 300)).code).toBe("OUT_OF_RANGE");
       expect(caught(() => N2.absoluteEnthalpy(7000)).code).toBe("OUT_OF_RANGE");

@@ -51,6 +51,23 @@ describe("parseReaction", () => {
     expect(ions.reactants.map((t) => t.formula.charge)).toEqual([-1, 1, -1]);
     expect(ions.products.map((t) => t.formula.charge)).toEqual([2, 0]);
   });
+  it("reads sign-then-number charges (Fe+2) when the separators are spaced", () => {
+    const r = parseReaction("MnO4- + Fe+2 + H+ -> Mn+2 + Fe+3 + H2O");
+    expect(r.reactants.map((t) => [t.species, t.formula.charge])).toEqual([["MnO4-", -1], ["Fe+2", 2], ["H+", 1]]);
+    expect(r.products.map((t) => [t.species, t.formula.charge])).toEqual([["Mn+2", 2], ["Fe+3", 3], ["H2O", 0]]);
+    expect(r.products[0]!.formula.charge).toBe(2); // @example
+    expect(parseReaction("Fe+3 + e- -> Fe+2").products[0]!.formula.charge).toBe(2);
+    expect(parseReaction("Mn+2(aq) + 2 e- -> Mn(s)").reactants[0]!.formula.charge).toBe(2);
+    // unspaced separators keep their meaning: "+2O2" is a term with coefficient 2
+    expect(species("H2+2O2 -> H2O2")[0]).toEqual(["1 H2", "2 O2"]);
+  });
+  it("hints at Fe2+ when a glued +digits was read as a separator and leaves a bare number", () => {
+    const e = errorOf(() => parseReaction("Fe+2+e- -> Fe+"));
+    expect(e.code).toBe("INVALID_REACTION");
+    expect(e.details.reason).toBe("coefficient without a species");
+    expect(e.details.hint).toContain("Fe2+");
+    expect(e.message).toContain("Fe2+");
+  });
   it("keeps a species written on both sides (a catalyst) as written", () => {
     expect(species("NO + O3 + NO2 -> NO2 + O2 + NO")[1]).toEqual(["1 NO2", "1 O2", "1 NO"]);
   });

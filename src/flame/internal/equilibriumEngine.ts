@@ -9,7 +9,7 @@
  * @internal
  */
 import { RxthermError } from "../../errors.js";
-import { GAS_CONSTANT_J_PER_MOL_K, STANDARD_PRESSURE_PA } from "../../units.js";
+import { GAS_CONSTANT_J_PER_MOL_K, STANDARD_PRESSURE_PA, slipHintDetails, withSlipHint } from "../../units.js";
 import { increasingNewton } from "../../numeric/increasingNewton.js";
 import type { Species } from "../../species/types.js";
 import { nonNegativeLeastSquares } from "../../numeric/nonNegativeLeastSquares.js";
@@ -182,8 +182,8 @@ export function evaluateThermo(e: Engine, T: number, lim: EngineLimits): void {
       const worst = e.species.find((sp) => T < sp.range[0] || T > sp.range[1]);
       throw new RxthermError(
         "OUT_OF_RANGE",
-        `${e.fn} needs product data at ${T} K, outside the common data range [${e.rangeK[0]}, ${e.rangeK[1]}] K of the product set (${worst?.key ?? "?"} covers [${worst?.range[0]}, ${worst?.range[1]}] K)`,
-        { T, range: [e.rangeK[0], e.rangeK[1]], species: worst?.key ?? null },
+        `${e.fn} needs product data at ${T} K, outside the common data range [${e.rangeK[0]}, ${e.rangeK[1]}] K of the product set (${worst?.key ?? "?"} covers [${worst?.range[0]}, ${worst?.range[1]}] K)${withSlipHint(T)}`,
+        { T, range: [e.rangeK[0], e.rangeK[1]], species: worst?.key ?? null, ...slipHintDetails(T) },
       );
     }
     e.extrapolated = true;

@@ -8,10 +8,13 @@
 import { RxthermError } from "../../errors.js";
 import { ATMOSPHERE_PA, STANDARD_TEMPERATURE_K } from "../../units.js";
 import { AIR_21_79 } from "../../extent/combustion.js";
+import { checkMixtureLimits } from "../../extent/mixtureLimits.js";
 import type { EngineLimits } from "./equilibriumEngine.js";
 import { prepareFlame, type FlamePoint, type FlamePointResult, type FlameSetup } from "./flameProblem.js";
-import { DEFAULT_FLAME_PRODUCTS } from "../flameDefaults.js";
+import { DEFAULT_FLAME_PRODUCTS, SULFUR_FLAME_PRODUCTS } from "../flameDefaults.js";
+import { flameSpecies } from "./flameLinks.js";
 import type { AdiabaticFlameInput, AdiabaticFlameOptions, AdiabaticFlameResult } from "../types.js";
+import type { Flows } from "../../extent/types.js";
 
 /** Resolve and check the solver settings. */
 export function resolveLimits(
@@ -48,7 +51,7 @@ export function prepareFlameInput(fn: string, input: AdiabaticFlameInput, option
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires process "constant-pressure" or "constant-volume", got ${String(process)}`, { process });
   }
   const point = flamePointOf(fn, input);
-  const products = input.products ?? DEFAULT_FLAME_PRODUCTS;
+  const products = input.products ?? defaultProducts(fn, input);
   if (!Array.isArray(products) || products.length === 0) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires products to be a non-empty list of species keys`, { products });
   }
@@ -69,7 +72,7 @@ export function prepareFlameInput(fn: string, input: AdiabaticFlameInput, option
 
 /** The settings of one point (φ, stream temperatures, pressure), checked. */
 export function flamePointOf(fn: string, input: AdiabaticFlameInput): FlamePoint {
-  const phi = equivalenceRatioOf(fn, input.equivalenceRatio, input.excessAir);
+  const phi = equivalenceRatioOf(fn, input.equivalenceRatio, input.excessAir, input.allowExtremeMixture);
   const T = positive(fn, "T", input.T ?? STANDARD_TEMPERATURE_K);
   const fuelT = positive(fn, "fuelT", input.fuelT ?? T);
   const oxidizerT = positive(fn, "oxidizerT", input.oxidizerT ?? T);
@@ -118,10 +121,11 @@ function isCondensedKey(setup: FlameSetup, key: string): boolean {
 }
 
 /** φ from the equivalence ratio or the excess air (exactly one, or neither → 1). */
-export function equivalenceRatioOf(fn: string, equivalenceRatio: number | undefined, excessAir: number | undefined): number {
+export function equivalenceRatioOf(fn: string, equivalenceRatio: number | undefined, excessAir: number | undefined, allowExtremeMixture?: boolean): number {
   if (equivalenceRatio !== undefined && excessAir !== undefined) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} takes either equivalenceRatio or excessAir, not both`, { equivalenceRatio, excessAir });
   }
+  checkMixtureLimits(fn, { excessAir, equivalenceRatio }, allowExtremeMixture);
   if (excessAir !== undefined) {
     if (typeof excessAir !== "number" || !Number.isFinite(excessAir) || !(excessAir > -1)) {
       throw new RxthermError("INVALID_ARGUMENT", `${fn} requires excessAir > −1 (a fraction: 0.2 = 20 % excess), got ${String(excessAir)}`, { excessAir });
@@ -140,4 +144,20 @@ function positive(fn: string, name: string, v: number): number {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${name} > 0, got ${String(v)}`, { [name]: v });
   }
   return v;
+}
+
+/** The default product set, with the sulfur gases when any reactant holds sulfur. */
+function defaultProducts(fn: string, input: AdiabaticFlameInput): readonly string[] {
+  const holdsSulfur = (flows: string | Flows | undefined): boolean => {
+    if (flows === undefined || flows === null) return false;
+    if (typeof flows === "string") return flows !== "air" && flows !== "oxygen" && (flameSpecies(fn, flows, input.library).formula.elements.S ?? 0) > 0;
+    if (typeof flows !== "object") return false;
+    for (const [key, n] of Object.entries(flows)) {
+      if (typeof n === "number" && n > 0 && (flameSpecies(fn, key, input.library).formula.elements.S ?? 0) > 0) return true;
+    }
+    return false;
+  };
+  return holdsSulfur(input.fuel) || holdsSulfur(input.oxidizer) || holdsSulfur(input.diluent)
+    ? [...DEFAULT_FLAME_PRODUCTS, ...SULFUR_FLAME_PRODUCTS]
+    : DEFAULT_FLAME_PRODUCTS;
 }

@@ -9,7 +9,7 @@
  * @internal
  */
 import { RxthermError } from "../../errors.js";
-import { GAS_CONSTANT_J_PER_MOL_K, STANDARD_PRESSURE_PA } from "../../units.js";
+import { GAS_CONSTANT_J_PER_MOL_K, STANDARD_PRESSURE_PA, slipHintDetails, withSlipHint } from "../../units.js";
 import { increasingNewton } from "../../numeric/increasingNewton.js";
 import type { Flows } from "../../extent/types.js";
 import type { Library, Species } from "../../species/types.js";
@@ -473,8 +473,8 @@ function addStream(fn: string, what: string, acc: StreamSums, members: readonly 
       if (!extrapolate) {
         throw new RxthermError(
           "OUT_OF_RANGE",
-          `${fn} needs ${m.key} at the ${what} temperature ${T} K, outside its data range [${m.species.range[0]}, ${m.species.range[1]}] K (pass { extrapolate: true } to extend it)`,
-          { species: m.key, T, range: [m.species.range[0], m.species.range[1]], stream: what },
+          `${fn} needs ${m.key} at the ${what} temperature ${T} K, outside its data range [${m.species.range[0]}, ${m.species.range[1]}] K (pass { extrapolate: true } to extend it)${withSlipHint(T)}`,
+          { species: m.key, T, range: [m.species.range[0], m.species.range[1]], stream: what, ...slipHintDetails(T) },
         );
       }
       noteExtrapolation(acc.extrapolated, m.species, T);

@@ -11,7 +11,7 @@ import { RxthermError } from "../../errors.js";
 import { createHeatCapacity, type HeatCapacity } from "../../heat-capacity/createHeatCapacity.js";
 import type { CpRange, RangeOptions } from "../../heat-capacity/types.js";
 import type { Formula, Phase } from "../../formula/types.js";
-import { GAS_CONSTANT_J_PER_MOL_K, STANDARD_PRESSURE_PA, STANDARD_TEMPERATURE_K } from "../../units.js";
+import { GAS_CONSTANT_J_PER_MOL_K, STANDARD_PRESSURE_PA, STANDARD_TEMPERATURE_K, slipHintDetails, withSlipHint } from "../../units.js";
 import type { SpeciesEntry } from "../schema.js";
 import type { Species, SpeciesEvaluation, SpeciesTransition } from "../types.js";
 import { readSpeciesFormula } from "./speciesFormula.js";
@@ -173,8 +173,8 @@ class TabulatedSpecies implements Species {
     if (options?.extrapolate === true) return true;
     throw new RxthermError(
       "OUT_OF_RANGE",
-      `${fn} (${this.key}): ${T} K is outside the data range [${this.tMin}, ${this.tMax}] K; pass { extrapolate: true } to extend the nearest range`,
-      { species: this.key, T, range: [this.tMin, this.tMax] },
+      `${fn} (${this.key}): ${T} K is outside the data range [${this.tMin}, ${this.tMax}] K${withSlipHint(T)}; pass { extrapolate: true } to extend the nearest range`,
+      { species: this.key, T, range: [this.tMin, this.tMax], ...slipHintDetails(T) },
     );
   }
 }

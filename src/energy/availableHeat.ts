@@ -1,0 +1,195 @@
+import type { Flows } from "../extent/types.js";
+import { evaluateFired, excessAirOf, flueTemperature, prepareFired } from "./internal/firedModel.js";
+import type { AvailableHeatInput } from "./firedTypes.js";
+import { flueGasDewPoint } from "./flueGasDewPoint.js";
+
+export type { AvailableHeatInput, UnburnedCarbon } from "./firedTypes.js";
+
+/**
+ * Losses besides the stack, in a {@link AvailableHeatResult}; J per unit of fuel (`per`).
+ *
+ * @category Fired equipment
+ */
+export interface FiredLosses {
+  /** Heating value of the CO in the flue gas. */
+  readonly unburnedCO: number;
+  /** Heating value of the unburned carbon (graphite → CO2, 393.5 kJ/mol C). */
+  readonly unburnedCarbon: number;
+  /** Latent heat of liquid water in the fuel, evaporated and leaving as vapour. */
+  readonly fuelMoisture: number;
+}
+
+/**
+ * Result of {@link availableHeat}. Energies in J per mol of fuel (or per kg, per Nm³ with `per`);
+ * amounts in mol per mol of fuel.
+ *
+ * @category Fired equipment
+ */
+export interface AvailableHeatResult {
+  /** Heat released to the process: enthalpy of fuel and air in minus enthalpy of the flue gas (and condensate, unburned carbon) out. */
+  readonly availableHeat: number;
+  /** Sensible heat of the flue gas (and condensate) above 298.15 K. */
+  readonly stackLoss: number;
+  /** availableHeat / LHV (fraction). */
+  readonly efficiencyLHV: number;
+  /** availableHeat / HHV (fraction). */
+  readonly efficiencyHHV: number;
+  /** Lower heating value of the fuel (water as vapour), at 298.15 K. */
+  readonly lhv: number;
+  /** Higher heating value of the fuel (water as liquid), at 298.15 K. */
+  readonly hhv: number;
+  /** LHV + sensible heat of fuel and air above 298.15 K. */
+  readonly heatInputLHV: number;
+  /** HHV + sensible heat of fuel and air above 298.15 K. */
+  readonly heatInputHHV: number;
+  /** Sensible heat of the fuel above 298.15 K (negative below). */
+  readonly sensibleFuel: number;
+  /** Sensible heat of the combustion air (and its moisture) above 298.15 K — the preheat credit. */
+  readonly sensibleAir: number;
+  /** Latent heat (at 298.15 K) of the water condensed (condensing only), else 0. */
+  readonly latentRecovered: number;
+  /** Latent heat of the fuel water leaving as vapour — the HHV-basis loss: HHV − LHV − latentRecovered. */
+  readonly latentLossHHV: number;
+  /** Losses besides the stack. */
+  readonly losses: FiredLosses;
+  /** Water condensed, mol per mol of fuel (0 unless condensing below the dew point). */
+  readonly condensedWater: number;
+  /** Flue gas leaving as gas, species key → mol per mol of fuel. */
+  readonly flueGas: Readonly<Flows>;
+  /** Wet mole fractions of the flue gas leaving. */
+  readonly wet: Readonly<Record<string, number>>;
+  /** Dry mole fractions of the flue gas leaving (water removed). */
+  readonly dry: Readonly<Record<string, number>>;
+  /** Excess air used (fraction). */
+  readonly excessAir: number;
+  /** Water dew point of the flue gas before any condensation, K (absent without water). */
+  readonly waterDewPointK?: number;
+  /** Sulfuric-acid dew point, K (with sulfur in the fuel; 2 % of the SO2 taken as SO3, see {@link flueGasDewPoint}). */
+  readonly acidDewPointK?: number;
+  /** Plain-language warnings: flue gas below a dew point, efficiency above 1 from preheat... */
+  readonly warnings: readonly string[];
+  /** Energy basis of the result. */
+  readonly per: "mol" | "kg" | "Nm3";
+  /** Species evaluated outside their data range (only with `extrapolate`), with the temperature, K. */
+  readonly extrapolated: readonly { readonly species: string; readonly T: number }[];
+}
+
+/**
+ * Available heat, stack loss and efficiency of a fired heater, furnace or boiler: the share of the
+ * fuel's heat the process receives when the flue gas leaves at `flueT`.
+ *
+ * Steady-flow energy balance on the combustion chamber and the heat-transfer surfaces, reference
+ * 298.15 K and the elements (species enthalpies H = ΔfH° + ∫Cp dT from the library):
+ * availableHeat = Σ n·H(fuel at fuelT) + Σ n·H(air at airT) − Σ n·H(flue gas at flueT)
+ * − n·H(condensate at flueT). The flue gas is that of `combustion` (same air and fuel conventions,
+ * the 21/79 air by default), with the measured CO (`coPpm`, dry basis) taking its carbon from CO2
+ * and leaving its O2 unused, and unburned carbon leaving as solid at 298.15 K (its sensible heat in
+ * the ash neglected). It closes exactly as
+ * LHV + sensibleFuel + sensibleAir + latentRecovered = availableHeat + stackLoss + unburnedCO + unburnedCarbon + fuelMoisture,
+ * and on the higher-heating-value basis HHV + sensible heats = availableHeat + stackLoss + latentLossHHV + losses.
+ * Efficiencies are availableHeat/LHV and availableHeat/HHV. `flueT` is the temperature at which the
+ * flue gas leaves the process heat-transfer surfaces; with an air preheater heated by the flue gas,
+ * give the temperature before the preheater and the preheated `airT`: the preheat credit (equal to
+ * the air's sensible heat) is the heat the preheater takes from the flue gas, so the result equals
+ * the overall efficiency on the final stack temperature. Giving the final stack temperature together
+ * with preheated air counts that heat twice (a warning says so when the LHV efficiency exceeds 1). Wall and radiation losses of
+ * the casing are not modelled (subtract them yourself, typically 1–3 % of the input for heaters —
+ * common practice). Heating values from {@link heatingValue}'s Hess sums. Ideal gases at 1 bar
+ * standard state; dew points from {@link flueGasDewPoint}.
+ *
+ * Caution: efficiency and stack temperatures are screening figures. The acid dew point as a minimum
+ * metal temperature is a screening figure: corrosion margins follow the equipment makers and local
+ * practice; condensing operation needs materials chosen for acid condensate. Burner, furnace and
+ * boiler work follows the applicable codes and licensed engineering practice.
+ *
+ * @param input - fuel, excess air or φ, oxidizer, fuelT/airT/flueT (K), humidity, P (Pa), condensing, coPpm, unburned carbon, per, library
+ * @returns available heat, stack loss and other losses (J per mol, kg or Nm³ of fuel), LHV and HHV efficiencies (fractions), flue gas, dew points
+ * @throws RxthermError `INVALID_ARGUMENT` for a bad temperature, flueT below 298.15 K without `condensing` (with a "°C?" hint below 200 K),
+ *   excess air < 0 or φ > 1 (rich), excess air above 3 or φ below 0.05 without `allowExtremeMixture`, a CO reading or unburned
+ *   carbon beyond the fuel carbon, a non-gaseous fuel `per: "Nm3"`, or a bad option
+ * @throws RxthermError `OUT_OF_RANGE` for a temperature outside a species' data range without `extrapolate`
+ * @throws RxthermError `NOTHING_TO_BURN`, `NO_OXIDIZER`, `UNKNOWN_SPECIES`, `NEGATIVE_FLOW`, `ELEMENTS_NOT_COVERED` for the fuel and oxidizer, as `combustion` and `heatingValue`
+ * @example
+ * // methane with 15 % excess air, flue gas leaving at 450 K (177 °C), everything else at 298.15 K
+ * const r = availableHeat({ fuel: "CH4(g)", excessAir: 0.15, flueT: 450 });
+ * r.efficiencyLHV // => 0.92993… (93.0 % of the LHV)
+ * r.efficiencyHHV // => 0.83800…
+ * r.stackLoss     // => 56220.4… (J/mol)
+ * @category Fired equipment
+ * @see NIST-JANAF Thermochemical Tables, 4th ed. (Chase 1998) for the built-in species data; IAPWS R7-97 (dew point, condensation);
+ *   steady-flow first law with the heats of formation (IUPAC Green Book, 3rd ed. (2007), §2.11)
+ */
+export function availableHeat(input: AvailableHeatInput): AvailableHeatResult {
+  const fn = "availableHeat";
+  const m = prepareFired(fn, input);
+  const e = excessAirOf(m, input.excessAir, input.equivalenceRatio);
+  const T = flueTemperature(m, input.flueT);
+  const p = evaluateFired(m, e, T);
+  const k = m.scale;
+  const flueGas: Flows = {};
+  let total = 0, dryTotal = 0;
+  m.flueKeys.forEach((key, i) => {
+    const n = p.flue[i]!;
+    if (n > 0) {
+      flueGas[key] = n;
+      total += n;
+      if (key !== "H2O(g)") dryTotal += n;
+    }
+  });
+  const wet: Record<string, number> = {};
+  const dry: Record<string, number> = {};
+  for (const [key, n] of Object.entries(flueGas)) {
+    wet[key] = n / total;
+    if (key !== "H2O(g)") dry[key] = n / dryTotal;
+  }
+  const warnings: string[] = [];
+  // dew points of the gas before any condensation
+  let waterDewPointK: number | undefined;
+  let acidDewPointK: number | undefined;
+  const before: Flows = { ...flueGas };
+  if (p.condensedWater > 0) before["H2O(g)"] = (before["H2O(g)"] ?? 0) + p.condensedWater;
+  if ((before["H2O(g)"] ?? 0) > 0) {
+    const d = flueGasDewPoint({ composition: before, P: m.P, ...(input.library !== undefined ? { library: input.library } : {}) });
+    waterDewPointK = d.waterK;
+    acidDewPointK = d.acidK;
+    if (T < d.waterK && !m.condensing) {
+      warnings.push(`flueT ${T} K is below the water dew point ${d.waterK.toFixed(1)} K: water would condense; pass condensing: true to count it`);
+    }
+    if (d.acidK !== undefined && T < d.acidK) {
+      warnings.push(`flueT ${T} K is below the acid dew point ${d.acidK.toFixed(1)} K (screening value): acid condensate corrodes unprotected metal`);
+    }
+  }
+  const efficiencyLHV = p.availableHeat / m.lhv;
+  if (efficiencyLHV > 1) {
+    warnings.push(`efficiency above 1 on the LHV basis: with a flue-gas air preheater, give flueT before the preheater (the preheat is heat taken from the flue gas)`);
+  }
+  return {
+    availableHeat: clean(p.availableHeat * k),
+    stackLoss: clean(p.stackLoss * k),
+    efficiencyLHV,
+    efficiencyHHV: p.availableHeat / m.hhv,
+    lhv: m.lhv * k,
+    hhv: m.hhv * k,
+    heatInputLHV: (m.lhv + p.sensibleFuel + p.sensibleAir) * k,
+    heatInputHHV: (m.hhv + p.sensibleFuel + p.sensibleAir) * k,
+    sensibleFuel: clean(p.sensibleFuel * k),
+    sensibleAir: clean(p.sensibleAir * k),
+    latentRecovered: clean(p.latentRecovered * k),
+    latentLossHHV: clean((m.hhv - m.lhv - p.latentRecovered) * k),
+    losses: { unburnedCO: clean(p.unburnedCO * k), unburnedCarbon: clean(p.unburnedCarbon * k), fuelMoisture: clean(p.fuelMoisture * k) },
+    condensedWater: p.condensedWater,
+    flueGas,
+    wet,
+    dry,
+    excessAir: e,
+    ...(waterDewPointK !== undefined ? { waterDewPointK } : {}),
+    ...(acidDewPointK !== undefined ? { acidDewPointK } : {}),
+    warnings,
+    per: m.per,
+    extrapolated: m.extrapolated.map((x) => ({ ...x })),
+  };
+}
+
+function clean(x: number): number {
+  return x === 0 ? 0 : x;
+}

@@ -1,0 +1,119 @@
+import { RxthermError } from "../errors.js";
+import { evaluateFired, excessAirOf, flueTemperature, prepareFired } from "./internal/firedModel.js";
+import type { AvailableHeatInput } from "./firedTypes.js";
+
+/**
+ * Which setting {@link efficiencyCurve} varies, and over which values.
+ *
+ * @category Fired equipment
+ */
+export interface EfficiencySweep {
+  /** `"flueT"` (K) or `"excessAir"` (fraction). */
+  parameter: "flueT" | "excessAir";
+  /** The values, K for `flueT`, fractions for `excessAir` (at least one; at most 100 000). */
+  values: readonly number[];
+}
+
+/**
+ * Result of {@link efficiencyCurve}: one array entry per swept value, ready for a chart.
+ * Energies in J per mol of fuel (or per kg, per Nm³ with `per`).
+ *
+ * @category Fired equipment
+ */
+export interface EfficiencyCurveResult {
+  /** The varied setting. */
+  readonly parameter: "flueT" | "excessAir";
+  /** The swept values (a copy). */
+  readonly values: readonly number[];
+  /** Available heat at each value. */
+  readonly availableHeat: readonly number[];
+  /** Stack loss at each value. */
+  readonly stackLoss: readonly number[];
+  /** availableHeat / LHV at each value. */
+  readonly efficiencyLHV: readonly number[];
+  /** availableHeat / HHV at each value. */
+  readonly efficiencyHHV: readonly number[];
+  /** Water condensed, mol per mol fuel (condensing only, else zeros). */
+  readonly condensedWater: readonly number[];
+  /** LHV of the fuel (the same for every point). */
+  readonly lhv: number;
+  /** HHV of the fuel. */
+  readonly hhv: number;
+  /** Species evaluated outside their data range (only with `extrapolate`). */
+  readonly extrapolated: readonly { readonly species: string; readonly T: number }[];
+}
+
+/**
+ * The efficiency of a fired heater, furnace or boiler over a list of flue temperatures or
+ * excess-air values — the same balance as {@link availableHeat}, prepared once and evaluated per
+ * point (fuel, air and flue species resolved once; the flue gas is linear in the excess air).
+ *
+ * The base input is that of {@link availableHeat}; the swept setting replaces `flueT` or
+ * `excessAir` (`equivalenceRatio` is then not allowed with `"excessAir"`). Same conventions,
+ * sources and cautions as {@link availableHeat}: screening values; dew-point and corrosion limits
+ * follow the equipment makers and local practice.
+ *
+ * @param input - as {@link availableHeat} (`flueT` may be omitted when it is swept)
+ * @param sweep - the varied setting and its values
+ * @returns arrays of available heat, stack loss (J per unit of fuel), efficiencies (fractions) and condensate, one entry per value
+ * @throws RxthermError `INVALID_ARGUMENT` for an unknown parameter, an empty or too long list, a bad value (details: `index`, `value`), or any bad base input
+ * @throws every error of {@link availableHeat}
+ * @example
+ * const c = efficiencyCurve({ fuel: "CH4(g)", excessAir: 0.15, flueT: 450 }, { parameter: "flueT", values: [400, 450, 500] });
+ * c.efficiencyLHV.map((x) => x.toFixed(4)) // => ["0.9532", "0.9299", "0.9064"]
+ * @category Fired equipment
+ * @see {@link availableHeat} for the method and sources
+ */
+export function efficiencyCurve(input: Omit<AvailableHeatInput, "flueT"> & { flueT?: number }, sweep: EfficiencySweep): EfficiencyCurveResult {
+  const fn = "efficiencyCurve";
+  if (sweep === null || typeof sweep !== "object" || !Array.isArray(sweep.values) || sweep.values.length === 0 || sweep.values.length > MAX_POINTS) {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a sweep { parameter, values } with 1 to ${MAX_POINTS} values`, {
+      length: Array.isArray(sweep?.values) ? sweep.values.length : undefined,
+    });
+  }
+  const { parameter } = sweep;
+  if (parameter !== "flueT" && parameter !== "excessAir") {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} can vary "flueT" or "excessAir", got ${String(parameter)}`, { parameter });
+  }
+  if (parameter === "excessAir" && input?.equivalenceRatio !== undefined) {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} varies excessAir; drop equivalenceRatio from the base input`, { equivalenceRatio: input.equivalenceRatio });
+  }
+  const m = prepareFired(fn, input);
+  const values = [...sweep.values];
+  const fixedE = parameter === "flueT" ? excessAirOf(m, input.excessAir, input.equivalenceRatio) : 0;
+  const fixedT = parameter === "excessAir" ? flueTemperature(m, input.flueT as number) : 0;
+  const n = values.length;
+  const availableHeat = new Array<number>(n);
+  const stackLoss = new Array<number>(n);
+  const efficiencyLHV = new Array<number>(n);
+  const efficiencyHHV = new Array<number>(n);
+  const condensedWater = new Array<number>(n);
+  const scratch = new Float64Array(m.flueKeys.length);
+  for (let i = 0; i < n; i++) {
+    const v = values[i]!;
+    let p;
+    try {
+      p = parameter === "flueT"
+        ? evaluateFired(m, fixedE, flueTemperature(m, v), scratch)
+        : evaluateFired(m, excessAirOf(m, v, undefined), fixedT, scratch);
+    } catch (e) {
+      if (e instanceof RxthermError) {
+        throw new RxthermError(e.code, `${fn} at ${parameter} = ${String(v)} (index ${i}): ${e.message.replace(/^\[rxtherm\] /, "")}`, { ...e.details, index: i, value: v });
+      }
+      throw e;
+    }
+    availableHeat[i] = p.availableHeat * m.scale;
+    stackLoss[i] = p.stackLoss * m.scale;
+    efficiencyLHV[i] = p.availableHeat / m.lhv;
+    efficiencyHHV[i] = p.availableHeat / m.hhv;
+    condensedWater[i] = p.condensedWater;
+  }
+  return {
+    parameter, values, availableHeat, stackLoss, efficiencyLHV, efficiencyHHV, condensedWater,
+    lhv: m.lhv * m.scale, hhv: m.hhv * m.scale,
+    extrapolated: m.extrapolated.map((x) => ({ ...x })),
+  };
+}
+
+/** Largest number of points of one curve. */
+const MAX_POINTS = 100000;
