@@ -114,8 +114,8 @@ describe("runCli(argv, io)", () => {
   it("air: methane needs 2 mol O2 and 9.52 mol of 21 % air per mol", async () => {
     const r = JSON.parse((await run(["air", "CH4", "--json"])).out);
     expect(r.theoreticalO2).toBeCloseTo(2, 12); // CH4 + 2 O2 -> CO2 + 2 H2O, common practice
-    // dry air O2 mole fraction 0.209476 (U.S. Standard Atmosphere 1976) → 2/0.209476 = 9.5476
-    expect(r.theoreticalAir).toBeCloseTo(2 / 0.209476, 3);
+    // the default air is 21 % O2 / 79 % N2 (common practice) → 2/0.21 = 9.5238 mol air per mol CH4
+    expect(r.theoreticalAir).toBeCloseTo(2 / 0.21, 3);
     const flow = JSON.parse((await run(["air", "CH4", "--fuel-flow", "3.6kmol/h", "--json"])).out);
     expect(flow.flows.fuel.molPerS).toBeCloseTo(1, 12); // 3.6 kmol/h = 1 mol/s
   });

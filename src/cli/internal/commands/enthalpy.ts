@@ -59,7 +59,7 @@ export const enthalpyCommand: Command = {
       lines.push(
         table(
           ["T (K)", "T (°C)", `ΔH°rxn (${unit})`, "extrapolated"],
-          results.map((r) => [fixed(r.T, 2), fixed(fromKelvin(r.T, "C"), 2), num(convert(r.value), 7), r.extrapolated ? "yes" : ""]),
+          results.map((r) => [fixed(r.T, 2), fixed(fromKelvin(r.T, "C"), 2), num(convert(r.value), 7), r.extrapolated.length > 0 ? "yes" : ""]),
           ["right", "right", "right", "left"],
         ),
         "",
@@ -93,7 +93,7 @@ function summary(r: ReactionEnthalpyResult, unit: string, convert: (j: number) =
   ];
   if (r.uncertainty !== undefined) rows.push(["uncertainty", `± ${num(convert(r.uncertainty), 2)} ${unit} (standard)`]);
   if (r.exact !== undefined && r.T === STANDARD_TEMPERATURE_K) rows.push(["exact sum", `${r.exact} J/mol`]);
-  if (r.extrapolated) rows.push(["note", "extrapolated outside a species' data range: a screening value only"]);
+  if (r.extrapolated.length > 0) rows.push(["note", `extrapolated outside a species' data range (${r.extrapolated.map((p) => `${p.species} at ${fixed(p.T, 2)} K`).join(", ")}): a screening value only`]);
   return rows;
 }
 

@@ -67,7 +67,7 @@ export const flameCommand: Command = {
       ["equivalence ratio", num(r.equivalenceRatio, 6)],
       ["oxidizer", Object.entries(r.oxidizer).map(([k, x]) => `${k} ${num(x, 5)}`).join(", ") + " mol"],
     ];
-    if (r.extrapolated) rows.push(["note", "species data extrapolated: a screening value only"]);
+    if (r.extrapolated.length > 0) rows.push(["note", `species data extrapolated (${r.extrapolated.map((p) => `${p.species} at ${p.T.toFixed(0)} K`).join(", ")}): a screening value only`]);
     return {
       text: [
         fields(rows),
