@@ -232,8 +232,8 @@ export function solveLinearSystem(a: MatrixLike, b: readonly RationalLike[]): Li
 
 // ── private helpers ──────────────────────────────────────────────────────────
 
-const ZERO: Rational = Object.freeze({ num: 0n, den: 1n });
-const ONE: Rational = Object.freeze({ num: 1n, den: 1n });
+const ZERO: Rational = /* @__PURE__ */ Object.freeze({ num: 0n, den: 1n });
+const ONE: Rational = /* @__PURE__ */ Object.freeze({ num: 1n, den: 1n });
 
 function toIntegerRows(matrix: MatrixLike, fn: string): { ints: bigint[][]; cols: number } {
   const cols = matrix.length === 0 ? 0 : (matrix[0] as readonly RationalLike[]).length;
