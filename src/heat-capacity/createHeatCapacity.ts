@@ -1,18 +1,18 @@
 import { RxthermError } from "../errors.js";
-import {
-  REFERENCE_T_K as REFERENCE_T_K_, STRIDE as STRIDE_, H_0 as H_0_, H_1 as H_1_, H_2 as H_2_, H_3 as H_3_, H_4 as H_4_, H_5 as H_5_, H_INV as H_INV_, H_LN as H_LN_, S_0 as S_0_,
-  absoluteConstants as absoluteConstants_, cpAt as cpAt_, hAt as hAt_, sAt as sAt_, segmentIndex as segmentIndex_, writeSegment as writeSegment_, prepareRanges as prepareRanges_, rangePieces as rangePieces_,
-} from "./internal/cpCompile.js";
+import * as compiled from "./internal/cpCompile.js";
 import type { CpRange, RangeOptions } from "./types.js";
 
 // Module-local aliases of the compiled-form helpers. The hot paths call these per evaluation; a
 // local const binding is a direct reference that the JIT inlines, whereas some module loaders (the
-// CommonJS interop of TypeScript runners) turn every imported name into a getter call. Named imports
-// (not a namespace object) keep the shipped bundle tree-shakeable.
-const REFERENCE_T_K = REFERENCE_T_K_, STRIDE = STRIDE_, H_0 = H_0_, H_1 = H_1_, H_2 = H_2_, H_3 = H_3_, H_4 = H_4_;
-const H_5 = H_5_, H_INV = H_INV_, H_LN = H_LN_, S_0 = S_0_;
-const absoluteConstants = absoluteConstants_, cpAt = cpAt_, hAt = hAt_, sAt = sAt_, segmentIndex = segmentIndex_;
-const writeSegment = writeSegment_, prepareRanges = prepareRanges_, rangePieces = rangePieces_;
+// CommonJS interop of TypeScript runners) turn every imported name into a getter call. Plain member
+// reads, not a destructuring of the namespace: bundlers then resolve each one to the export itself and
+// the shipped dist stays tree-shakeable.
+const REFERENCE_T_K = compiled.REFERENCE_T_K, STRIDE = compiled.STRIDE, S_0 = compiled.S_0;
+const H_0 = compiled.H_0, H_1 = compiled.H_1, H_2 = compiled.H_2, H_3 = compiled.H_3, H_4 = compiled.H_4, H_5 = compiled.H_5;
+const H_INV = compiled.H_INV, H_LN = compiled.H_LN;
+const absoluteConstants = compiled.absoluteConstants, cpAt = compiled.cpAt, hAt = compiled.hAt, sAt = compiled.sAt;
+const segmentIndex = compiled.segmentIndex, writeSegment = compiled.writeSegment;
+const prepareRanges = compiled.prepareRanges, rangePieces = compiled.rangePieces;
 
 /**
  * Options of {@link createHeatCapacity}.
