@@ -135,7 +135,7 @@ function schemas(): Schemas {
  * @example
  * cpFormSchema.safeParse({ form: "constant", cpJPerMolK: 29.1 }).success // => true
  */
-export const cpFormSchema: Schemas["cpForm"] = /* @__PURE__ */ lazySchema(() => schemas().cpForm);
+export const cpFormSchema = /* @__PURE__ */ lazySchema(() => schemas().cpForm);
 
 /**
  * Zod schema of one Cp range: a form valid over [TminK, TmaxK], with an optional source id
@@ -147,7 +147,7 @@ export const cpFormSchema: Schemas["cpForm"] = /* @__PURE__ */ lazySchema(() => 
  * @example
  * cpRangeSchema.safeParse({ TminK: 0, TmaxK: 400, cp: { form: "constant", cpJPerMolK: 29 } }).success // => false (TminK > 0 required)
  */
-export const cpRangeSchema: Schemas["cpRange"] = /* @__PURE__ */ lazySchema(() => schemas().cpRange);
+export const cpRangeSchema = /* @__PURE__ */ lazySchema(() => schemas().cpRange);
 
 /**
  * Zod schema of a phase transition inside a species' Cp ranges (e.g. alpha → beta quartz):
@@ -159,7 +159,7 @@ export const cpRangeSchema: Schemas["cpRange"] = /* @__PURE__ */ lazySchema(() =
  * @example
  * transitionSchema.safeParse({ TK: 847, dHKJPerMol: 0.7291, source: "nist-webbook" }).success // => true
  */
-export const transitionSchema: Schemas["transition"] = /* @__PURE__ */ lazySchema(() => schemas().transition);
+export const transitionSchema = /* @__PURE__ */ lazySchema(() => schemas().transition);
 
 /**
  * Zod schema of one species entry of a data file.
@@ -170,7 +170,7 @@ export const transitionSchema: Schemas["transition"] = /* @__PURE__ */ lazySchem
  * @example
  * speciesEntrySchema.safeParse({ key: "N2(g)" }).success // => false (the values and their sources are missing)
  */
-export const speciesEntrySchema: Schemas["speciesEntry"] = /* @__PURE__ */ lazySchema(() => schemas().speciesEntry);
+export const speciesEntrySchema = /* @__PURE__ */ lazySchema(() => schemas().speciesEntry);
 
 /**
  * Zod schema of the optional `units` block: if present it must state exactly the units the
@@ -182,7 +182,7 @@ export const speciesEntrySchema: Schemas["speciesEntry"] = /* @__PURE__ */ lazyS
  * @example
  * unitsBlockSchema.safeParse({ hf298: "kcal/mol" }).success // => false
  */
-export const unitsBlockSchema: Schemas["unitsBlock"] = /* @__PURE__ */ lazySchema(() => schemas().unitsBlock);
+export const unitsBlockSchema = /* @__PURE__ */ lazySchema(() => schemas().unitsBlock);
 
 /**
  * Zod schema of a whole species data file: `sources` (id → full citation) and `species`.
@@ -193,7 +193,7 @@ export const unitsBlockSchema: Schemas["unitsBlock"] = /* @__PURE__ */ lazySchem
  * @example
  * speciesDataSchema.safeParse({ sources: {}, species: [] }).success // => true
  */
-export const speciesDataSchema: Schemas["speciesData"] = /* @__PURE__ */ lazySchema(() => schemas().speciesData);
+export const speciesDataSchema = /* @__PURE__ */ lazySchema(() => schemas().speciesData);
 
 /** One species entry as written in a data file (input shape). @category Species data */
 export type SpeciesEntryInput = z.input<typeof speciesEntrySchema>;
