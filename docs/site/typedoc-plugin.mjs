@@ -2,8 +2,9 @@
 // "projectDocuments" glob, and DEVELOPERS.md) go in a "Guides" section of the sidebar, get short names and
 // come in the order of the calculation chain —
 // formula → reaction → extent → heat capacity → species → enthalpy → energy → flame → display — with any
-// guide not listed here after them, alphabetically, named after its file.
-import { Converter } from "typedoc";
+// guide not listed here after them, alphabetically, named after its file. With more than one entry point the
+// modules are named after their import paths (rxtherm, rxtherm/database) under "API reference".
+import { Comment, CommentTag, Converter, ReflectionKind } from "typedoc";
 
 /** File name (without .md) → sidebar name, in chain order. */
 export const GUIDES = new Map([
@@ -39,6 +40,21 @@ export function load(app) {
     fileOf.set(doc, file);
     doc.name = GUIDES.get(file) ?? file.charAt(0).toUpperCase() + file.slice(1).replace(/[-_]+/g, " ");
     doc.frontmatter["category"] ??= "Guides"; // one sidebar section for the guides, first (typedoc.json categoryOrder)
+  });
+  // With more than one entry point (rxtherm/database...), name each module after its import path.
+  app.converter.on(Converter.EVENT_CREATE_DECLARATION, (_context, refl) => {
+    if (refl.kindOf(ReflectionKind.Module) && refl.parent?.isProject()) {
+      refl.name = refl.name === "index" ? "rxtherm" : `rxtherm/${refl.name.replace(/\/index$/, "")}`;
+    }
+  });
+  app.converter.on(Converter.EVENT_RESOLVE_BEGIN, (context) => {
+    for (const module of context.project.children ?? []) {
+      if (!module.kindOf(ReflectionKind.Module)) continue;
+      module.comment ??= new Comment();
+      if (module.comment.getTag("@category") === undefined) {
+        module.comment.blockTags.push(new CommentTag("@category", [{ kind: "text", text: "API reference" }]));
+      }
+    }
   });
   app.converter.on(Converter.EVENT_RESOLVE_END, (context) => {
     const rank = (refl) => {
