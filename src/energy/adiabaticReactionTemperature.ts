@@ -253,7 +253,7 @@ function solveAdiabatic(fn: string, input: AdiabaticReactionInput, options: Adia
   return { result, startT };
 }
 
-const EXTRAPOLATE = Object.freeze({ extrapolate: true });
+const EXTRAPOLATE = /* @__PURE__ */ Object.freeze({ extrapolate: true });
 
 function defaultLimits(species: readonly Species[], extrapolate: boolean): [number, number] {
   if (extrapolate) return [50, 10000];

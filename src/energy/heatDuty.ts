@@ -247,7 +247,7 @@ export function heatDuty(input: HeatDutyInput, options: HeatDutyOptions = {}): H
   };
 }
 
-const EXTRAPOLATE = Object.freeze({ extrapolate: true });
+const EXTRAPOLATE = /* @__PURE__ */ Object.freeze({ extrapolate: true });
 
 function clean(x: number): number {
   return x === 0 ? 0 : x;
@@ -294,9 +294,9 @@ function checkElements(fn: string, net: Map<string, Entry>): void {
 const MAX_SLOTS = 256;
 const slotOf = new Map<string, number>();
 const slotSymbols: string[] = [];
-const scratchIn = new Float64Array(MAX_SLOTS);
-const scratchOut = new Float64Array(MAX_SLOTS);
-const slotUsed = new Uint8Array(MAX_SLOTS);
+const scratchIn = /* @__PURE__ */ new Float64Array(MAX_SLOTS);
+const scratchOut = /* @__PURE__ */ new Float64Array(MAX_SLOTS);
+const slotUsed = /* @__PURE__ */ new Uint8Array(MAX_SLOTS);
 const vectors = new WeakMap<Species, { slots: Int32Array; counts: Float64Array }>();
 
 /** The species' element counts as (slot, count) arrays, cached per Species object. */

@@ -151,7 +151,7 @@ export function reactionEnthalpy(reaction: Reaction | string, options: ReactionE
   return result;
 }
 
-const EXTRAPOLATE = Object.freeze({ extrapolate: true });
+const EXTRAPOLATE = /* @__PURE__ */ Object.freeze({ extrapolate: true });
 
 /** Root-sum-square of ν·u over the species, or undefined when a non-zero ΔfH° has no uncertainty. */
 export function propagatedUncertainty(p: PreparedReaction, divisor: number): number | undefined {

@@ -12,7 +12,7 @@ import { ExactDecimal, exactWeightedSum } from "./preparedReaction.js";
  * @example
  * COMBUSTION_REFERENCE_SPECIES.includes("H2O(l)") // => true
  */
-export const COMBUSTION_REFERENCE_SPECIES: readonly string[] = Object.freeze([
+export const COMBUSTION_REFERENCE_SPECIES: readonly string[] = /* @__PURE__ */ Object.freeze([
   "CO2(g)", "H2O(l)", "N2(g)", "O2(g)", "SO2(g)", "CO2", "N2", "O2", "SO2",
 ]);
 

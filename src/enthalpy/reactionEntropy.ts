@@ -44,4 +44,4 @@ export function reactionEntropy(reaction: Reaction | string, options: ReactionEn
   return sum === 0 ? 0 : sum;
 }
 
-const EXTRAPOLATE = Object.freeze({ extrapolate: true });
+const EXTRAPOLATE = /* @__PURE__ */ Object.freeze({ extrapolate: true });

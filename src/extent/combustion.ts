@@ -20,7 +20,7 @@ import { checkMixtureLimits } from "./mixtureLimits.js";
  * DRY_AIR["O2(g)"] // => 0.209476
  * @see U.S. Standard Atmosphere, 1976, NOAA/NASA/USAF, Washington D.C. 1976, table 3 (sea-level composition of dry air)
  */
-export const DRY_AIR: Readonly<Flows> = Object.freeze({
+export const DRY_AIR: Readonly<Flows> = /* @__PURE__ */ Object.freeze({
   "N2(g)": 0.780772,
   "O2(g)": 0.209476,
   "Ar(g)": 0.00934,
@@ -41,7 +41,7 @@ export const DRY_AIR: Readonly<Flows> = Object.freeze({
  * AIR_21_79["N2(g)"] // => 0.79
  * @see common practice (e.g. the 3.76 mol N₂ per mol O₂ of combustion stoichiometry)
  */
-export const AIR_21_79: Readonly<Flows> = Object.freeze({ "N2(g)": 0.79, "O2(g)": 0.21 });
+export const AIR_21_79: Readonly<Flows> = /* @__PURE__ */ Object.freeze({ "N2(g)": 0.79, "O2(g)": 0.21 });
 
 /**
  * Ultimate (elemental) analysis of a solid or liquid fuel, as mass fractions of the fuel as

@@ -206,4 +206,4 @@ export function reconcileExtents(input: ReconcileExtentsInput, options: Reconcil
   };
 }
 
-const ZERO: Rational = rationalFromNumber(0);
+const ZERO: Rational = /* @__PURE__ */ rationalFromNumber(0);

@@ -464,8 +464,8 @@ function solveBigSystem(A: Rational[][], b: Rational[]): Rational[] | null {
 
 const BIG: Lane<Rational> = {
   exact: true,
-  zero: rationalFromNumber(0),
-  one: rationalFromNumber(1),
+  zero: /* @__PURE__ */ rationalFromNumber(0),
+  one: /* @__PURE__ */ rationalFromNumber(1),
   add: rationalAdd,
   sub: rationalSub,
   mul: rationalMul,

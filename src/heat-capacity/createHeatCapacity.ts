@@ -5,9 +5,15 @@ import type { CpRange, RangeOptions } from "./types.js";
 
 // Module-local aliases of the compiled-form helpers. The hot paths call these per evaluation; a
 // local const binding is a direct reference that the JIT inlines, whereas some module loaders (the
-// CommonJS interop of TypeScript runners) turn every imported name into a getter call.
-const { REFERENCE_T_K, STRIDE, H_0, H_1, H_2, H_3, H_4, H_5, H_INV, H_LN, S_0 } = compiled;
-const { absoluteConstants, cpAt, hAt, sAt, segmentIndex, writeSegment, prepareRanges, rangePieces } = compiled;
+// CommonJS interop of TypeScript runners) turn every imported name into a getter call. Plain member
+// reads, not a destructuring of the namespace: bundlers then resolve each one to the export itself and
+// the shipped dist stays tree-shakeable.
+const REFERENCE_T_K = compiled.REFERENCE_T_K, STRIDE = compiled.STRIDE, S_0 = compiled.S_0;
+const H_0 = compiled.H_0, H_1 = compiled.H_1, H_2 = compiled.H_2, H_3 = compiled.H_3, H_4 = compiled.H_4, H_5 = compiled.H_5;
+const H_INV = compiled.H_INV, H_LN = compiled.H_LN;
+const absoluteConstants = compiled.absoluteConstants, cpAt = compiled.cpAt, hAt = compiled.hAt, sAt = compiled.sAt;
+const segmentIndex = compiled.segmentIndex, writeSegment = compiled.writeSegment;
+const prepareRanges = compiled.prepareRanges, rangePieces = compiled.rangePieces;
 
 /**
  * Options of {@link createHeatCapacity}.

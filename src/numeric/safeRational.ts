@@ -28,7 +28,7 @@ export class SafeOverflow extends Error {
     super("safe-integer range exceeded");
   }
 }
-const OVERFLOW = new SafeOverflow();
+const OVERFLOW = /* @__PURE__ */ new SafeOverflow();
 
 export const S0: SafeQ = { n: 0, d: 1 };
 export const S1: SafeQ = { n: 1, d: 1 };

@@ -97,4 +97,4 @@ export function checkBalance(reaction: Reaction | string): BalanceCheck {
   };
 }
 
-const ZERO: Rational = Object.freeze({ num: 0n, den: 1n });
+const ZERO: Rational = /* @__PURE__ */ Object.freeze({ num: 0n, den: 1n });

@@ -279,7 +279,7 @@ function parseTerm(text: string, start: number, end: number, hint?: string): Ter
   return integerCoefficient > 0 ? makeIntegerTerm({ species, formula }, integerCoefficient) : makeTerm({ species, formula }, coefficient);
 }
 
-const ONE: Rational = Object.freeze({ num: 1n, den: 1n });
+const ONE: Rational = /* @__PURE__ */ Object.freeze({ num: 1n, den: 1n });
 
 function positionOf(details: Readonly<Record<string, unknown>>): number | undefined {
   for (const key of ["column", "index", "offset", "position"]) {

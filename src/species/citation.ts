@@ -12,7 +12,7 @@ import { RxthermError } from "../errors.js";
  * @example
  * SOURCES["codata-1989"] // => "J. D. Cox, D. D. Wagman, V. A. Medvedev, CODATA Key Values for Thermodynamics, Hemisphere Publishing, New York (1989)."
  */
-export const SOURCES: Readonly<Record<string, string>> = Object.freeze({
+export const SOURCES: Readonly<Record<string, string>> = /* @__PURE__ */ Object.freeze({
   "nist-janaf-1998":
     "M. W. Chase Jr., NIST-JANAF Thermochemical Tables, Fourth Edition, Journal of Physical and Chemical Reference Data, Monograph 9 (1998).",
   "nist-webbook":

@@ -6,153 +6,194 @@
  * The schema checks the structure; {@link validateSpeciesData} adds the checks a structural
  * schema cannot express (contiguous ranges, Cp > 0, formula ↔ key, source ids, unsafe keys).
  *
+ * The schemas are built on first use, not at import: an app that never validates data (one that
+ * only computes molar masses or flame temperatures with the built-in data) neither pays zod's
+ * schema construction at start-up nor carries zod in its bundle. The exported constants stand
+ * in for the schemas (every property and method is the schema's own); {@link speciesDataSchemas}
+ * returns the built schema objects themselves.
+ *
  * @module
  */
 import { z } from "zod";
 
-// zod 4 numbers reject NaN and ±Infinity
-const finite = z.number();
-const positiveK = z.number().positive().describe("temperature in K (> 0)");
-const sourceId = z.string().min(1).describe("id of a citation in the file's `sources` or in the built-in registry");
+/** Every schema, built together on first use so that they share their parts. */
+function buildSchemas() {
+  // zod 4 numbers reject NaN and ±Infinity
+  const finite = z.number();
+  const positiveK = z.number().positive().describe("temperature in K (> 0)");
+  const sourceId = z.string().min(1).describe("id of a citation in the file's `sources` or in the built-in registry");
 
-const shomateSchema = z.strictObject({
-  form: z.literal("shomate"),
-  A: finite, B: finite, C: finite, D: finite, E: finite,
-  F: finite.optional().describe("kJ/mol"),
-  G: finite.optional().describe("J/(mol·K)"),
-  H: finite.optional().describe("kJ/mol"),
-}).describe("Shomate: Cp = A + B·t + C·t² + D·t³ + E/t², t = T/1000 K, Cp in J/(mol·K)");
+  const shomate = z.strictObject({
+    form: z.literal("shomate"),
+    A: finite, B: finite, C: finite, D: finite, E: finite,
+    F: finite.optional().describe("kJ/mol"),
+    G: finite.optional().describe("J/(mol·K)"),
+    H: finite.optional().describe("kJ/mol"),
+  }).describe("Shomate: Cp = A + B·t + C·t² + D·t³ + E/t², t = T/1000 K, Cp in J/(mol·K)");
 
-const polynomialSchema = z.strictObject({
-  form: z.literal("polynomial"),
-  a: finite, b: finite.optional(), c: finite.optional(), d: finite.optional(), e: finite.optional(),
-  temperatureUnit: z.enum(["K", "C"]).describe("the temperature variable: K or °C"),
-  energyUnit: z.enum(["J", "kJ"]).describe("Cp in J/(mol·K) or kJ/(mol·K)"),
-}).describe("Cp = a + b·T + c·T² + d·T³ + e/T²");
+  const polynomial = z.strictObject({
+    form: z.literal("polynomial"),
+    a: finite, b: finite.optional(), c: finite.optional(), d: finite.optional(), e: finite.optional(),
+    temperatureUnit: z.enum(["K", "C"]).describe("the temperature variable: K or °C"),
+    energyUnit: z.enum(["J", "kJ"]).describe("Cp in J/(mol·K) or kJ/(mol·K)"),
+  }).describe("Cp = a + b·T + c·T² + d·T³ + e/T²");
 
-const nasa7Schema = z.strictObject({
-  form: z.literal("nasa7"),
-  a: z.array(finite).length(7).describe("a1..a7, T in K"),
-}).describe("NASA 7-coefficient polynomial: Cp/R = a1 + a2·T + a3·T² + a4·T³ + a5·T⁴");
+  const nasa7 = z.strictObject({
+    form: z.literal("nasa7"),
+    a: z.array(finite).length(7).describe("a1..a7, T in K"),
+  }).describe("NASA 7-coefficient polynomial: Cp/R = a1 + a2·T + a3·T² + a4·T³ + a5·T⁴");
 
-const nasa9Schema = z.strictObject({
-  form: z.literal("nasa9"),
-  a: z.array(finite).length(9).describe("a1..a7 then b1, b2, T in K"),
-}).describe("NASA 9-coefficient polynomial: Cp/R = a1/T² + a2/T + a3 + a4·T + a5·T² + a6·T³ + a7·T⁴");
+  const nasa9 = z.strictObject({
+    form: z.literal("nasa9"),
+    a: z.array(finite).length(9).describe("a1..a7 then b1, b2, T in K"),
+  }).describe("NASA 9-coefficient polynomial: Cp/R = a1/T² + a2/T + a3 + a4·T + a5·T² + a6·T³ + a7·T⁴");
 
-const constantSchema = z.strictObject({
-  form: z.literal("constant"),
-  cpJPerMolK: finite,
-}).describe("constant Cp in J/(mol·K)");
+  const constant = z.strictObject({
+    form: z.literal("constant"),
+    cpJPerMolK: finite,
+  }).describe("constant Cp in J/(mol·K)");
 
-const tabulatedSchema = z.strictObject({
-  form: z.literal("tabulated"),
-  temperaturesK: z.array(positiveK).min(2),
-  cpJPerMolK: z.array(finite).min(2),
-}).describe("(T, Cp) points interpolated linearly");
+  const tabulated = z.strictObject({
+    form: z.literal("tabulated"),
+    temperaturesK: z.array(positiveK).min(2),
+    cpJPerMolK: z.array(finite).min(2),
+  }).describe("(T, Cp) points interpolated linearly");
+
+  const cpForm = z.discriminatedUnion("form", [shomate, polynomial, nasa7, nasa9, constant, tabulated]);
+
+  const cpRange = z.strictObject({
+    TminK: positiveK,
+    TmaxK: positiveK,
+    cp: cpForm,
+    source: sourceId.optional(),
+    note: z.string().optional(),
+  });
+
+  const transition = z.strictObject({
+    TK: positiveK,
+    dHKJPerMol: finite.describe("transition enthalpy, kJ/mol"),
+    label: z.string().optional(),
+    source: sourceId,
+  });
+
+  const speciesEntry = z.strictObject({
+    key: z.string().min(1).max(64).describe("formula with phase, e.g. CO2(g); isomers may carry a prefix, e.g. n-C4H10(g)"),
+    formula: z.string().min(1).max(64),
+    phase: z.enum(["g", "l", "s", "aq", "cr"]),
+    name: z.string().min(1).optional(),
+    aliases: z.array(z.string().min(1)).optional(),
+    cas: z.string().regex(/^\d{2,7}-\d{2}-\d$/).optional(),
+    dataset: z.string().min(1).max(32).regex(/^[a-z0-9][a-z0-9._-]*$/).optional()
+      .describe("label of the data set this entry comes from, e.g. nist-janaf, gri-mech-3.0"),
+    alternative: z.boolean().optional()
+      .describe("true: selectable only by its dataset, not the default for its key"),
+    hf298KJPerMol: finite.describe("standard enthalpy of formation at 298.15 K, kJ/mol"),
+    hf298Source: sourceId,
+    hf298UncertaintyKJPerMol: z.number().nonnegative().optional(),
+    s298JPerMolK: finite.describe("standard molar entropy at 298.15 K and 1 bar, J/(mol·K)"),
+    s298Source: sourceId,
+    heatCapacity: z.strictObject({
+      source: sourceId,
+      ranges: z.array(cpRange).min(1),
+    }),
+    transitions: z.array(transition).optional(),
+    note: z.string().optional(),
+  });
+
+  const unitsBlock = z.strictObject({
+    hf298: z.literal("kJ/mol").optional(),
+    s298: z.literal("J/(mol K)").optional(),
+    cp: z.literal("J/(mol K)").optional(),
+    temperature: z.literal("K").optional(),
+  });
+
+  const speciesData = z.strictObject({
+    $schema: z.string().optional(),
+    description: z.string().optional(),
+    units: unitsBlock.optional(),
+    sources: z.record(z.string().min(1), z.string().min(1)),
+    species: z.array(speciesEntry),
+  });
+
+  return { cpForm, cpRange, transition, speciesEntry, unitsBlock, speciesData };
+}
+
+type Schemas = ReturnType<typeof buildSchemas>;
+let built: Schemas | undefined;
+/** The schemas, built on the first call and shared afterwards. */
+function schemas(): Schemas {
+  built ??= buildSchemas();
+  return built;
+}
 
 /**
  * Zod schema of one Cp form (discriminated by `form`).
+ *
+ * Built on first use (see the module notes); every zod property and method works as on any schema.
  *
  * @category Species data
  * @example
  * cpFormSchema.safeParse({ form: "constant", cpJPerMolK: 29.1 }).success // => true
  */
-export const cpFormSchema = z.discriminatedUnion("form", [
-  shomateSchema, polynomialSchema, nasa7Schema, nasa9Schema, constantSchema, tabulatedSchema,
-]);
+export const cpFormSchema = /* @__PURE__ */ lazySchema(() => schemas().cpForm);
 
 /**
  * Zod schema of one Cp range: a form valid over [TminK, TmaxK], with an optional source id
  * overriding the species' `heatCapacity.source` for this range.
  *
+ * Built on first use (see the module notes).
+ *
  * @category Species data
  * @example
  * cpRangeSchema.safeParse({ TminK: 0, TmaxK: 400, cp: { form: "constant", cpJPerMolK: 29 } }).success // => false (TminK > 0 required)
  */
-export const cpRangeSchema = z.strictObject({
-  TminK: positiveK,
-  TmaxK: positiveK,
-  cp: cpFormSchema,
-  source: sourceId.optional(),
-  note: z.string().optional(),
-});
+export const cpRangeSchema = /* @__PURE__ */ lazySchema(() => schemas().cpRange);
 
 /**
  * Zod schema of a phase transition inside a species' Cp ranges (e.g. alpha → beta quartz):
  * H steps up by `dHKJPerMol` (kJ/mol) at `TK` (K), S by ΔH/T.
  *
+ * Built on first use (see the module notes).
+ *
  * @category Species data
  * @example
  * transitionSchema.safeParse({ TK: 847, dHKJPerMol: 0.7291, source: "nist-webbook" }).success // => true
  */
-export const transitionSchema = z.strictObject({
-  TK: positiveK,
-  dHKJPerMol: finite.describe("transition enthalpy, kJ/mol"),
-  label: z.string().optional(),
-  source: sourceId,
-});
+export const transitionSchema = /* @__PURE__ */ lazySchema(() => schemas().transition);
 
 /**
  * Zod schema of one species entry of a data file.
+ *
+ * Built on first use (see the module notes).
  *
  * @category Species data
  * @example
  * speciesEntrySchema.safeParse({ key: "N2(g)" }).success // => false (the values and their sources are missing)
  */
-export const speciesEntrySchema = z.strictObject({
-  key: z.string().min(1).max(64).describe("formula with phase, e.g. CO2(g); isomers may carry a prefix, e.g. n-C4H10(g)"),
-  formula: z.string().min(1).max(64),
-  phase: z.enum(["g", "l", "s", "aq", "cr"]),
-  name: z.string().min(1).optional(),
-  aliases: z.array(z.string().min(1)).optional(),
-  cas: z.string().regex(/^\d{2,7}-\d{2}-\d$/).optional(),
-  dataset: z.string().min(1).max(32).regex(/^[a-z0-9][a-z0-9._-]*$/).optional()
-    .describe("label of the data set this entry comes from, e.g. nist-janaf, gri-mech-3.0"),
-  alternative: z.boolean().optional()
-    .describe("true: selectable only by its dataset, not the default for its key"),
-  hf298KJPerMol: finite.describe("standard enthalpy of formation at 298.15 K, kJ/mol"),
-  hf298Source: sourceId,
-  hf298UncertaintyKJPerMol: z.number().nonnegative().optional(),
-  s298JPerMolK: finite.describe("standard molar entropy at 298.15 K and 1 bar, J/(mol·K)"),
-  s298Source: sourceId,
-  heatCapacity: z.strictObject({
-    source: sourceId,
-    ranges: z.array(cpRangeSchema).min(1),
-  }),
-  transitions: z.array(transitionSchema).optional(),
-  note: z.string().optional(),
-});
+export const speciesEntrySchema = /* @__PURE__ */ lazySchema(() => schemas().speciesEntry);
 
 /**
  * Zod schema of the optional `units` block: if present it must state exactly the units the
  * field names carry (a file written in other units is rejected, not converted).
  *
+ * Built on first use (see the module notes).
+ *
  * @category Species data
  * @example
  * unitsBlockSchema.safeParse({ hf298: "kcal/mol" }).success // => false
  */
-export const unitsBlockSchema = z.strictObject({
-  hf298: z.literal("kJ/mol").optional(),
-  s298: z.literal("J/(mol K)").optional(),
-  cp: z.literal("J/(mol K)").optional(),
-  temperature: z.literal("K").optional(),
-});
+export const unitsBlockSchema = /* @__PURE__ */ lazySchema(() => schemas().unitsBlock);
 
 /**
  * Zod schema of a whole species data file: `sources` (id → full citation) and `species`.
+ *
+ * Built on first use (see the module notes).
  *
  * @category Species data
  * @example
  * speciesDataSchema.safeParse({ sources: {}, species: [] }).success // => true
  */
-export const speciesDataSchema = z.strictObject({
-  $schema: z.string().optional(),
-  description: z.string().optional(),
-  units: unitsBlockSchema.optional(),
-  sources: z.record(z.string().min(1), z.string().min(1)),
-  species: z.array(speciesEntrySchema),
-});
+export const speciesDataSchema = /* @__PURE__ */ lazySchema(() => schemas().speciesData);
 
 /** One species entry as written in a data file (input shape). @category Species data */
 export type SpeciesEntryInput = z.input<typeof speciesEntrySchema>;
@@ -175,6 +216,32 @@ export type SpeciesData = z.output<typeof speciesDataSchema>;
  * speciesDataJsonSchema().required // => ["sources", "species"]
  */
 export function speciesDataJsonSchema(): Record<string, unknown> {
-  const schema = z.toJSONSchema(speciesDataSchema, { target: "draft-2020-12" }) as Record<string, unknown>;
+  const schema = z.toJSONSchema(schemas().speciesData, { target: "draft-2020-12" }) as Record<string, unknown>;
   return { ...schema, title: "rxtherm species data file" };
+}
+
+/**
+ * A stand-in for a schema that is built by `build` on first use: every property read, method
+ * call, `in` test, key listing and `instanceof` check goes to the built schema. zod's methods
+ * close over their own schema, so calling them through the stand-in behaves exactly as on it.
+ */
+function lazySchema<T extends object>(build: () => T): T {
+  return new Proxy({} as T, {
+    get: (_, key) => {
+      const target = build();
+      const value: unknown = Reflect.get(target, key, target);
+      return value;
+    },
+    has: (_, key) => Reflect.has(build(), key),
+    ownKeys: () => Reflect.ownKeys(build()),
+    getOwnPropertyDescriptor: (_, key) => {
+      const d = Reflect.getOwnPropertyDescriptor(build(), key);
+      // a proxy may only report a property as non-configurable if its own target has it so
+      return d === undefined ? undefined : { ...d, configurable: true };
+    },
+    getPrototypeOf: () => Reflect.getPrototypeOf(build()),
+    set: () => false,
+    defineProperty: () => false,
+    deleteProperty: () => false,
+  });
 }

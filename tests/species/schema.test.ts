@@ -71,3 +71,28 @@ describe("validation limits (the @examples)", async () => {
     expect([v.MAX_ABS_HF298_KJ_PER_MOL, v.MAX_CP_J_PER_MOL_K, v.MAX_S298_J_PER_MOL_K, v.MAX_LOWEST_TMIN_K]).toEqual([20000, 3000, 5000, 300]);
   });
 });
+
+describe("schemas built on first use (the exported constants stand in for them)", async () => {
+  const m = await import("../../src/species/schema.js");
+  const { z } = await import("zod");
+  it("behave as zod schemas: instanceof, shape, options, composition and JSON Schema", () => {
+    expect(m.speciesDataSchema instanceof z.ZodObject).toBe(true);
+    expect((m.cpFormSchema as object) instanceof z.ZodType).toBe(true);
+    expect((m.cpFormSchema as object) instanceof z.ZodObject).toBe(false);
+    expect(Object.keys(m.speciesDataSchema.shape)).toEqual(["$schema", "description", "units", "sources", "species"]);
+    expect(m.cpFormSchema.options).toHaveLength(6);
+    expect("safeParse" in m.speciesEntrySchema).toBe(true);
+    // a user's own schema built from ours checks with our rules and paths
+    const mine = z.object({ ranges: z.array(m.cpRangeSchema), extra: m.unitsBlockSchema.optional() });
+    const bad = mine.safeParse({ ranges: [{ TminK: 300, TmaxK: 400, cp: { form: "constant", cpJPerMolK: "29" } }] });
+    expect(bad.success).toBe(false);
+    expect(bad.error!.issues[0]!.path).toEqual(["ranges", 0, "cp", "cpJPerMolK"]);
+    expect(m.speciesEntrySchema.partial().safeParse({ key: "N2(g)" }).success).toBe(true);
+    const json = JSON.stringify(z.toJSONSchema(z.array(m.transitionSchema)));
+    expect(json).toContain("transition enthalpy, kJ/mol"); // the description inside survives
+  });
+  it("cannot be modified through the stand-in", () => {
+    expect(() => { (m.speciesDataSchema as any).safeParse = () => ({ success: true }); }).toThrow(TypeError);
+    expect(m.speciesDataSchema.safeParse({}).success).toBe(false);
+  });
+});

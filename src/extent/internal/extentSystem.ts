@@ -197,7 +197,7 @@ function exactFromText(text: string): Rational | null {
   }
 }
 
-const ZERO: Rational = rationalFromNumber(0);
+const ZERO: Rational = /* @__PURE__ */ rationalFromNumber(0);
 
 function reactionLabel(r: Reaction): string {
   const side = (ts: Reaction["reactants"]): string =>

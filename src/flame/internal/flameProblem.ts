@@ -484,8 +484,8 @@ function addStream(fn: string, what: string, acc: StreamSums, members: readonly 
   }
 }
 
-const EXTRAPOLATE = Object.freeze({ extrapolate: true });
-const STRICT = Object.freeze({ extrapolate: false });
+const EXTRAPOLATE = /* @__PURE__ */ Object.freeze({ extrapolate: true });
+const STRICT = /* @__PURE__ */ Object.freeze({ extrapolate: false });
 
 interface CompleteSolution {
   T: number;

@@ -98,9 +98,9 @@ export interface GibbsLimits {
 }
 
 /** ln of the mole fraction below which a gas species counts as a trace species. */
-const TRACE_LN_X = Math.log(1e-8);
+const TRACE_LN_X = /* @__PURE__ */ Math.log(1e-8);
 /** A trace species may rise to at most this ln mole fraction in one step. */
-const TRACE_CAP_LN_X = Math.log(1e-4);
+const TRACE_CAP_LN_X = /* @__PURE__ */ Math.log(1e-4);
 /** Largest change of ln n of a major species per step. */
 const MAX_LN_STEP = 2;
 /** Condensed amount, relative to the element total, below which a shrinking species leaves. */

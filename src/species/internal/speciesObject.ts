@@ -17,7 +17,7 @@ import type { Species, SpeciesEvaluation, SpeciesTransition } from "../types.js"
 import { readSpeciesFormula } from "./speciesFormula.js";
 
 const D = /* @__PURE__ */ Decimal.clone({ precision: 34, rounding: Decimal.ROUND_HALF_EVEN });
-const EXTEND: RangeOptions = Object.freeze({ extrapolate: true });
+const EXTEND: RangeOptions = /* @__PURE__ */ Object.freeze({ extrapolate: true });
 
 /** Build the Species of a validated entry (the entry is copied, never kept). */
 export function buildSpecies(entry: SpeciesEntry): Species {
