@@ -68,6 +68,8 @@ export interface GibbsWork {
   readonly dln: Float64Array;
   readonly dmu: Float64Array;
   readonly cond: Int32Array;
+  /** Row scale factors of the dense solve. */
+  readonly scale: Float64Array;
 }
 
 /** Conditions of one solve. */
@@ -105,6 +107,12 @@ const TRACE_CAP_LN_X = Math.log(1e-4);
 const MAX_LN_STEP = 2;
 /** Condensed amount, relative to the element total, below which a shrinking species leaves. */
 const NEGLIGIBLE_CONDENSED = 1e-12;
+/** A full step that has not halved for this many iterations has reached the round-off floor. */
+const FLOOR_ITERATIONS = 4;
+/** Largest step measure accepted at the round-off floor (elements must still balance). */
+const FLOOR_STEP = 1e-6;
+/** Smallest pivot of an element-potential column in the scaled dense solve. */
+const PIVOT_FLOOR = 1e-14;
 /** Step-size tolerance on ln n of the species that matter. */
 const STEP_TOLERANCE = 1e-10;
 
@@ -133,6 +141,7 @@ function createWork(p: GibbsProblem): GibbsWork {
     dln: new Float64Array(p.ns),
     dmu: new Float64Array(p.ns),
     cond: new Int32Array(p.ns),
+    scale: new Float64Array(size),
   };
 }
 
@@ -149,13 +158,29 @@ export function coldStart(p: GibbsProblem, s: GibbsState): void {
   }
   const meanAtoms = ngas > 0 && atoms > 0 ? atoms / ngas : 1;
   const total = bSum / meanAtoms;
-  const each = Math.log(total / Math.max(ngas, 1));
+  const each = total / Math.max(ngas, 1);
+  // no gas species starts with more of an element than its share of that element's amount, so
+  // the carriers of an element present at 1e-12 of the feed start at that level, not at ~1/ns
+  let sum = 0;
   for (let j = 0; j < p.ns; j++) {
-    s.lnn[j] = p.gas[j] ? each : 0;
     s.nc[j] = 0;
     s.active[j] = 0;
+    if (!p.gas[j]) {
+      s.lnn[j] = 0;
+      continue;
+    }
+    let nj = each;
+    for (let i = 0; i < p.m; i++) {
+      const aij = p.a[i * p.ns + j]!;
+      if (aij <= 0) continue;
+      let carriers = 0;
+      for (let l = 0; l < p.ns; l++) if (p.gas[l] && p.a[i * p.ns + l]! > 0) carriers++;
+      nj = Math.min(nj, p.b[i]! / (aij * carriers));
+    }
+    s.lnn[j] = Math.log(nj);
+    sum += nj;
   }
-  s.lnN = Math.log(total);
+  s.lnN = Math.log(sum > 0 ? sum : total);
   s.pi.fill(0);
   s.warm = false;
   // an element held by no gas species must start with a condensed carrier
@@ -202,6 +227,9 @@ export function solveGibbs(p: GibbsProblem, c: GibbsConditions, s: GibbsState, l
   for (let i = 0; i < m; i++) bScale += b[i]!;
   let iterations = 0;
   let phaseChanges = 0;
+  // round-off floor: the smallest full step seen, and the iterations since it last halved
+  let bestStep = Infinity;
+  let sinceBest = 0;
   const maxPhaseChanges = 2 * ns + 4;
   while (iterations < lim.maxIterations) {
     iterations++;
@@ -253,7 +281,7 @@ export function solveGibbs(p: GibbsProblem, c: GibbsConditions, s: GibbsState, l
       r[m] = Nt - nGas + sumNmu;
     }
     for (let k = 0; k < nc; k++) r[m + (isP ? 1 : 0) + k] = c.mu0[cond[k]!]!;
-    if (!solveDense(M, r, size)) {
+    if (solveDense(M, r, size, s.work.scale, m) < 0) {
       return { converged: false, iterations, elementResidual: elementResidual(p, s), reason: "singular element-potential matrix" };
     }
     for (let i = 0; i < m; i++) s.pi[i] = r[i]!;
@@ -279,7 +307,14 @@ export function solveGibbs(p: GibbsProblem, c: GibbsConditions, s: GibbsState, l
         const cap = (TRACE_CAP_LN_X - lnx) / (d - dlnN);
         if (cap < lambda) lambda = Math.max(cap, 0);
       }
-      const weight = Math.exp(lnx) * Math.max(Math.abs(d), d * d);
+      // a species matters by its share of the total or of any element it holds (relative to
+      // that element's own amount): the carriers of a trace element must converge too
+      let share = Math.exp(lnx);
+      for (let i = 0; i < m; i++) {
+        const aij = a[i * ns + j]!;
+        if (aij !== 0) share = Math.max(share, (aij * n[j]!) / b[i]!);
+      }
+      const weight = Math.min(share, 1) * Math.max(Math.abs(d), d * d);
       if (weight > stepMeasure) stepMeasure = weight;
     }
     if (bigMajor > MAX_LN_STEP) lambda = Math.min(lambda, MAX_LN_STEP / bigMajor);
@@ -309,7 +344,17 @@ export function solveGibbs(p: GibbsProblem, c: GibbsConditions, s: GibbsState, l
     if (!Number.isFinite(s.lnN) || !finiteAll(s.lnn)) {
       return { converged: false, iterations, elementResidual: Number.NaN, reason: "non-finite iterate" };
     }
-    if (lambda === 1 && stepMeasure < STEP_TOLERANCE) {
+    if (lambda === 1) {
+      if (stepMeasure < 0.5 * bestStep) {
+        bestStep = stepMeasure;
+        sinceBest = 0;
+      } else sinceBest++;
+    }
+    // converged: a full step below the tolerance, or a full step that has stopped shrinking at a
+    // small value (the round-off floor of a direction the feed's rounding leaves uncertain, e.g.
+    // the excess of O over C when both are 1e8 times that excess)
+    const floor = lambda === 1 && sinceBest >= FLOOR_ITERATIONS && stepMeasure < FLOOR_STEP;
+    if (lambda === 1 && (stepMeasure < STEP_TOLERANCE || floor)) {
       const res = elementResidual(p, s);
       if (res <= lim.elementTolerance) {
         // phase test: a condensed species with negative driving force enters
@@ -394,7 +439,7 @@ export function equilibriumDerivatives(
     r[m] = rhsN;
   }
   for (let k = 0; k < nc; k++) r[m + (isP ? 1 : 0) + k] = dmu[cond[k]!]!;
-  if (!solveDense(M, r, size)) return false;
+  if (solveDense(M, r, size, s.work.scale, m) < 0) return false;
   const dlnN = isP ? r[m]! : 0;
   for (let j = 0; j < ns; j++) {
     if (gas[j]) {
@@ -410,8 +455,34 @@ export function equilibriumDerivatives(
   return true;
 }
 
-/** Solve M x = r in place (x returned in r) by Gaussian elimination with partial pivoting. */
-export function solveDense(M: Float64Array, r: Float64Array, size: number): boolean {
+/**
+ * Solve M x = r in place (x returned in r; returns the number of floored pivots, −1 when singular) for the symmetric element-potential matrix, by
+ * Gaussian elimination with partial pivoting after symmetric diagonal scaling: row and column k
+ * are divided by √(max_l |M_kl|). The rows of an element present at 1e-12 of the feed are
+ * 1e-12 the size of the others; unscaled, pivoting would pick a large row to eliminate a tiny
+ * column and the trace element's balance would drown in round-off. `scaleWork` (length ≥ size)
+ * holds the scale factors.
+ */
+export function solveDense(
+  M: Float64Array, r: Float64Array, size: number,
+  scaleWork: Float64Array = new Float64Array(size), floorColumns = 0,
+): number {
+  const d = scaleWork;
+  let floored = 0;
+  for (let row = 0; row < size; row++) {
+    let big = 0;
+    for (let k = 0; k < size; k++) {
+      const v = Math.abs(M[row * size + k]!);
+      if (v > big) big = v;
+    }
+    if (!(big > 0) || !Number.isFinite(big)) return -1;
+    d[row] = 1 / Math.sqrt(big);
+  }
+  for (let row = 0; row < size; row++) {
+    const dr = d[row]!;
+    for (let k = 0; k < size; k++) M[row * size + k] = M[row * size + k]! * dr * d[k]!;
+    r[row] = r[row]! * dr;
+  }
   let scale = 0;
   for (let q = 0; q < size * size; q++) scale = Math.max(scale, Math.abs(M[q]!));
   const tiny = scale * 1e-300;
@@ -425,7 +496,14 @@ export function solveDense(M: Float64Array, r: Float64Array, size: number): bool
         piv = row;
       }
     }
-    if (!(best > tiny) || !Number.isFinite(best)) return false;
+    if (!Number.isFinite(best)) return -1;
+    if (col < floorColumns && !(best > PIVOT_FLOOR)) {
+      // an element-potential direction the matrix cannot resolve (after scaling, its pivot is
+      // below round-off): two element rows told apart only by species that the balances force
+      // towards zero. Floor the pivot so that direction takes a bounded step, not noise.
+      M[piv * size + col] = M[piv * size + col]! < 0 ? -PIVOT_FLOOR : PIVOT_FLOOR;
+      floored++;
+    } else if (!(best > tiny)) return -1;
     if (piv !== col) {
       for (let k = 0; k < size; k++) {
         const t = M[col * size + k]!;
@@ -436,9 +514,9 @@ export function solveDense(M: Float64Array, r: Float64Array, size: number): bool
       r[col] = r[piv]!;
       r[piv] = t;
     }
-    const d = M[col * size + col]!;
+    const dd = M[col * size + col]!;
     for (let row = col + 1; row < size; row++) {
-      const f = M[row * size + col]! / d;
+      const f = M[row * size + col]! / dd;
       if (f === 0) continue;
       for (let k = col; k < size; k++) M[row * size + k] = M[row * size + k]! - f * M[col * size + k]!;
       r[row] = r[row]! - f * r[col]!;
@@ -449,7 +527,8 @@ export function solveDense(M: Float64Array, r: Float64Array, size: number): bool
     for (let k = row + 1; k < size; k++) sum -= M[row * size + k]! * r[k]!;
     r[row] = sum / M[row * size + row]!;
   }
-  return true;
+  for (let row = 0; row < size; row++) r[row] = r[row]! * d[row]!;
+  return floored;
 }
 
 function finiteAll(x: Float64Array): boolean {
