@@ -111,8 +111,8 @@ const NEGLIGIBLE_CONDENSED = 1e-12;
 const FLOOR_ITERATIONS = 4;
 /** Largest step measure accepted at the round-off floor (elements must still balance). */
 const FLOOR_STEP = 1e-6;
-/** Smallest pivot of an element-potential column in the scaled dense solve. */
-const PIVOT_FLOOR = 1e-14;
+/** Smallest pivot of an element-potential column in the scaled dense solve (smaller: dropped). */
+const PIVOT_FLOOR = 1e-15;
 /** Step-size tolerance on ln n of the species that matter. */
 const STEP_TOLERANCE = 1e-10;
 
@@ -281,10 +281,16 @@ export function solveGibbs(p: GibbsProblem, c: GibbsConditions, s: GibbsState, l
       r[m] = Nt - nGas + sumNmu;
     }
     for (let k = 0; k < nc; k++) r[m + (isP ? 1 : 0) + k] = c.mu0[cond[k]!]!;
+    // solve for the change of the element potentials (so a dropped direction keeps its value)
+    for (let row = 0; row < size; row++) {
+      let sum = 0;
+      for (let l = 0; l < m; l++) sum += M[row * size + l]! * s.pi[l]!;
+      r[row] = r[row]! - sum;
+    }
     if (solveDense(M, r, size, s.work.scale, m) < 0) {
       return { converged: false, iterations, elementResidual: elementResidual(p, s), reason: "singular element-potential matrix" };
     }
-    for (let i = 0; i < m; i++) s.pi[i] = r[i]!;
+    for (let i = 0; i < m; i++) s.pi[i] = s.pi[i]! + r[i]!;
     const dlnN = isP ? r[m]! : 0;
     // species updates and step limiting
     let lambda = 1;
@@ -456,7 +462,8 @@ export function equilibriumDerivatives(
 }
 
 /**
- * Solve M x = r in place (x returned in r; returns the number of floored pivots, −1 when singular) for the symmetric element-potential matrix, by
+ * Solve M x = r in place (x returned in r; returns the number of dropped directions, −1 when
+ * singular) for the symmetric element-potential matrix, by
  * Gaussian elimination with partial pivoting after symmetric diagonal scaling: row and column k
  * are divided by √(max_l |M_kl|). The rows of an element present at 1e-12 of the feed are
  * 1e-12 the size of the others; unscaled, pivoting would pick a large row to eliminate a tiny
@@ -499,9 +506,12 @@ export function solveDense(
     if (!Number.isFinite(best)) return -1;
     if (col < floorColumns && !(best > PIVOT_FLOOR)) {
       // an element-potential direction the matrix cannot resolve (after scaling, its pivot is
-      // below round-off): two element rows told apart only by species that the balances force
-      // towards zero. Floor the pivot so that direction takes a bounded step, not noise.
-      M[piv * size + col] = M[piv * size + col]! < 0 ? -PIVOT_FLOOR : PIVOT_FLOOR;
+      // at round-off): two element rows told apart only by species at ~1e-16 of them, e.g.
+      // O and C in CH3OH when only traces of O2 and C2H6 differ. Drop that equation and set the
+      // unknown to 0, so the direction is left as it is instead of taking a step of pure noise.
+      for (let k = col; k < size; k++) M[piv * size + k] = 0;
+      M[piv * size + col] = 1;
+      r[piv] = 0;
       floored++;
     } else if (!(best > tiny)) return -1;
     if (piv !== col) {
