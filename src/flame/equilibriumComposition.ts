@@ -209,7 +209,7 @@ function buildResult(e: Engine, T: number, P: number, temperatureIterations: num
     iterations: e.iterations,
     temperatureIterations,
     elementResidual: fullElementResidual(e),
-    enthalpy: energyAndSlope(e, T, "P").value,
+    enthalpy: energyAndSlope(e, T, "P", false).value,
     energyResidual,
     elementPotentials,
     excluded: [...e.excluded],

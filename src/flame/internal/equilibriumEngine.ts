@@ -119,7 +119,8 @@ export function prepareEngine(
     bAll[i] = feedElements.get(elements[i]!)!;
     for (let j = 0; j < ns; j++) aAll[i * ns + j] = species[j]!.formula.elements[elements[i]!] ?? 0;
   }
-  checkCovered(fn, aAll, mAll, ns, bAll, keys);
+  // whether the products can hold the feed's element ratios is decided only when a solve fails
+  // (see failureOf): a converged solve proves it, and the test costs more than the solve
   const rows = independentRows(aAll, mAll, ns, bAll);
   const m = rows.length;
   const a = new Float64Array(m * ns);
@@ -164,7 +165,6 @@ export function setFeedElements(e: Engine, feedElements: ReadonlyMap<string, num
     e.bAll[i] = feedElements.get(e.elements[i]!)!;
     scale += e.bAll[i]!;
   }
-  checkCovered(e.fn, e.aAll, e.elements.length, e.problem.ns, e.bAll, e.keys);
   // the warm state is kept in normalised amounts (b / scale), so it stays a good start
   e.scale = scale;
   e.rows.forEach((r, i) => {
@@ -211,6 +211,7 @@ export function solveAtT(e: Engine, T: number, kind: "P" | "V", pOrV: number, li
   e.iterations += out.iterations;
   if (!out.converged) {
     coldStart(e.problem, e.state);
+    checkCovered(e.fn, e.aAll, e.elements.length, e.problem.ns, e.bAll, e.keys);
     throw new RxthermError(
       "NO_CONVERGENCE",
       `${e.fn} did not reach equilibrium at T = ${T} K within ${lim.maxIterations} iterations (${out.reason ?? "no progress"})`,
@@ -233,6 +234,7 @@ export function acceptSolution(e: Engine, T: number, lim: EngineLimits, energy: 
   const res = fullElementResidual(e);
   if (!(res <= lim.elementTolerance)) {
     coldStart(e.problem, e.state);
+    checkCovered(e.fn, e.aAll, e.elements.length, e.problem.ns, e.bAll, e.keys);
     if (res > 1e-6) {
       throw new RxthermError(
         "ELEMENTS_NOT_COVERED",
@@ -281,12 +283,12 @@ export function amount(e: Engine, j: number): number {
  * Enthalpy (kind "P") or internal energy (kind "V") of the equilibrium mixture at the current
  * state, J, and its total temperature derivative along the equilibrium, J/K.
  */
-export function energyAndSlope(e: Engine, T: number, kind: "P" | "V"): { value: number; slope: number; frozen: number } {
+export function energyAndSlope(e: Engine, T: number, kind: "P" | "V", withSlope = true): { value: number; slope: number; frozen: number } {
   const { ns, gas } = e.problem;
   const dln = e.dlnT;
   const dnc = e.dncT;
   const c: GibbsConditions = { mu0: e.mu0, kind, lnP: 0 };
-  const ok = equilibriumDerivatives(e.problem, c, e.state, T, e.hRT, dln, dnc);
+  const ok = withSlope && equilibriumDerivatives(e.problem, c, e.state, T, e.hRT, dln, dnc);
   let value = 0;
   let slope = 0;
   let frozen = 0;

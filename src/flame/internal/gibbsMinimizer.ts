@@ -132,7 +132,10 @@ export function createGibbsState(p: GibbsProblem): GibbsState {
 }
 
 function createWork(p: GibbsProblem): GibbsWork {
-  const size = p.m + 1 + p.ns;
+  // the dense system has a row per element, one for ln N and one per condensed species only
+  let condensed = 0;
+  for (let j = 0; j < p.ns; j++) if (!p.gas[j]) condensed++;
+  const size = p.m + 1 + condensed;
   return {
     M: new Float64Array(size * size),
     r: new Float64Array(size),
@@ -161,6 +164,9 @@ export function coldStart(p: GibbsProblem, s: GibbsState): void {
   const each = total / Math.max(ngas, 1);
   // no gas species starts with more of an element than its share of that element's amount, so
   // the carriers of an element present at 1e-12 of the feed start at that level, not at ~1/ns
+  // gas carriers of each element
+  const carriers = new Int32Array(p.m);
+  for (let i = 0; i < p.m; i++) for (let l = 0; l < p.ns; l++) if (p.gas[l] && p.a[i * p.ns + l]! > 0) carriers[i] = carriers[i]! + 1;
   let sum = 0;
   for (let j = 0; j < p.ns; j++) {
     s.nc[j] = 0;
@@ -173,9 +179,7 @@ export function coldStart(p: GibbsProblem, s: GibbsState): void {
     for (let i = 0; i < p.m; i++) {
       const aij = p.a[i * p.ns + j]!;
       if (aij <= 0) continue;
-      let carriers = 0;
-      for (let l = 0; l < p.ns; l++) if (p.gas[l] && p.a[i * p.ns + l]! > 0) carriers++;
-      nj = Math.min(nj, p.b[i]! / (aij * carriers));
+      nj = Math.min(nj, p.b[i]! / (aij * carriers[i]!));
     }
     s.lnn[j] = Math.log(nj);
     sum += nj;
