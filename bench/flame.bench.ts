@@ -18,7 +18,7 @@ import { equilibriumComposition } from "../src/flame/equilibriumComposition.js";
 import { flameTemperatureSweep } from "../src/flame/flameTemperatureSweep.js";
 import { DEFAULT_FLAME_PRODUCTS } from "../src/flame/flameDefaults.js";
 import { species } from "../src/species/species.js";
-import { formatTime, measure, report } from "./harness.js";
+import { formatTime, measure, report, type BenchResult } from "./harness.js";
 
 const CO2 = species("CO2(g)");
 const H2O = species("H2O(g)");
@@ -104,17 +104,43 @@ function burcatLibrary(): { library: Library; keys: string[] } {
   return { library, keys: species.map((s) => s.key) };
 }
 
-/** Equilibrium cost against the number of product species: table, then the fitted slope. */
+/** Keeps the results of `fastest` alive. */
+export let fastestSink: unknown = undefined;
+
+/**
+ * Fastest batch of `batches` short batches (about 2 ms each): on a machine shared with other
+ * jobs the median counts their time too, while the fastest batch approaches the cost of the work
+ * itself. Used for the cost-growth curve, where only ratios between sizes matter.
+ */
+function fastest(name: string, fn: () => unknown, batches = 60): BenchResult {
+  const t0 = performance.now();
+  let calls = 0;
+  while (performance.now() - t0 < 100) {
+    fastestSink = fn();
+    calls++;
+  }
+  const inner = Math.max(1, Math.round((2 * calls) / (performance.now() - t0)));
+  let best = Infinity;
+  for (let b = 0; b < batches; b++) {
+    const s = performance.now();
+    for (let i = 0; i < inner; i++) fastestSink = fn();
+    best = Math.min(best, ((performance.now() - s) * 1e6) / inner);
+  }
+  return { name: `${name} (fastest batch)`, medianNs: best, perSecond: 1e9 / best };
+}
+
+/** Equilibrium cost against the number of product species: the 100-species row, the curve and its slope. */
 export function equilibriumGrowth(): void {
   const { library, keys } = burcatLibrary();
   // stoichiometric methane–air products at 2200 K and 1 atm, cold start every call
   const feed = { "CH4(g)": 1, "O2(g)": 2, "N2(g)": 2 * N2_PER_O2 };
   const solve = (n: number) => () => equilibriumComposition({ feed, species: keys.slice(0, n), T: 2200, library }).gasMoles;
-  const small = measure("equilibriumComposition, 12 default products", () =>
-    equilibriumComposition({ feed, species: DEFAULT_FLAME_PRODUCTS, T: 2200 }).gasMoles);
+  const small = () => equilibriumComposition({ feed, species: DEFAULT_FLAME_PRODUCTS, T: 2200 }).gasMoles;
+  report("equilibrium, 100 product species", measure("equilibriumComposition, 100 products", solve(100)),
+    measure("equilibriumComposition, 12 default products", small), "median ≤ 1 ms");
   const sizes = [20, 50, 100, 200];
-  const results = sizes.map((n) => measure(`equilibriumComposition, ${n} products`, solve(n), { batches: 25 }));
-  report("equilibrium, 100 product species", results[2]!, small, "median ≤ 1 ms");
+  const base = fastest("12 default products", small);
+  const results = sizes.map((n) => fastest(`${n} products`, solve(n)));
   // least-squares slope of ln t against ln n
   const x = sizes.map(Math.log);
   const y = results.map((r) => Math.log(r.medianNs));
@@ -126,6 +152,6 @@ export function equilibriumGrowth(): void {
     sxy += (x[i]! - mx) * (y[i]! - my);
     sxx += (x[i]! - mx) ** 2;
   }
-  const curve = sizes.map((n, i) => `${n}: ${formatTime(results[i]!.medianNs)}`).join(", ");
-  console.log(`equilibrium cost growth (species: median): ${curve} | fitted slope of log t vs log n: ${(sxy / sxx).toFixed(2)}`);
+  const curve = sizes.map((n, i) => `${n}: ${formatTime(results[i]!.medianNs)} (${(results[i]!.medianNs / base.medianNs).toFixed(1)}×)`).join(", ");
+  console.log(`equilibrium cost growth, fastest batch (species: time, ratio to the 12 default products at ${formatTime(base.medianNs)}): ${curve} | fitted slope of log t vs log n: ${(sxy / sxx).toFixed(2)}`);
 }

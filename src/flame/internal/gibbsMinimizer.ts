@@ -8,10 +8,17 @@
  * conditions μ_j = Σ_i a_ij π_i (π_i: element potential divided by RT) are linearised in ln n_j
  * (gases), n_k (condensed) and ln N; eliminating Δln n_j leaves a dense system of size
  * (elements + 1 + active condensed) in the unknowns π_i, Δln N and Δn_k, solved by Gaussian
- * elimination with partial pivoting. Steps are damped so that no major species changes by more
- * than a factor e² per iteration and no trace species jumps above mole fraction 1e-4 in one step;
- * trace species stay in ln-space, so amounts down to ~1e-300 mol are represented without
- * clipping. Condensed species enter when their driving force μ°_k − Σ a_ik π_i is negative and
+ * elimination with partial pivoting after symmetric diagonal scaling (so an element at 1e-12 of
+ * the feed keeps its digits), for the change of the element potentials (a direction the matrix
+ * cannot resolve at round-off is left unchanged). Steps are damped so that no major species
+ * changes by more than a factor e² per iteration and no trace species jumps above mole fraction
+ * 1e-4 in one step — the damping rules of Gordon and McBride (NASA RP-1311, 1994); trace species
+ * stay in ln-space, so amounts down to ~1e-300 mol are represented without clipping.
+ * Convergence is judged species by species on the share each holds of the total or of any
+ * element (relative to that element's own amount), so the carriers of a trace element converge
+ * as tightly as the majors; a step that stops shrinking below 1e-6 (the round-off floor of a
+ * direction the feed's rounding leaves uncertain) also ends the iteration once every element
+ * balances to the tolerance. Condensed species enter when their driving force μ°_k − Σ a_ik π_i is negative and
  * leave when their amount would turn negative. At fixed volume the ln(P/P°) and ln N terms are
  * replaced by ln(n_j R T / (V P°)), and the ln N unknown disappears.
  *
@@ -21,7 +28,10 @@
  *
  * References: W. B. White, S. M. Johnson, G. B. Dantzig, "Chemical equilibrium in complex
  * mixtures", J. Chem. Phys. 28 (1958) 751–755; W. R. Smith, R. W. Missen, Chemical Reaction
- * Equilibrium Analysis: Theory and Algorithms, Wiley (1982), ch. 6 (element-potential methods).
+ * Equilibrium Analysis: Theory and Algorithms, Wiley (1982), ch. 6 (element-potential methods);
+ * S. Gordon, B. J. McBride, Computer Program for Calculation of Complex Chemical Equilibrium
+ * Compositions and Applications, Part I: Analysis, NASA Reference Publication 1311 (1994)
+ * (step-size control: the e² cap on major species and the 1e-4 cap on trace species).
  *
  * @internal
  * @module
