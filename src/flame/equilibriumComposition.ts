@@ -107,7 +107,7 @@ export interface EquilibriumResult {
  * element-potential (Lagrange-multiplier) method — Newton iterations on the element potentials,
  * ln(total moles) and the condensed amounts, with the gas amounts carried in ln-space so trace
  * species (down to ~1e-300 mol) are represented without clipping; steps are damped after
- * Gordon and McBride (a major species changes by at most a factor e² per step, a trace species
+ * Gordon and McBride (a major species rises by at most a factor e² per step, a trace species
  * rises to at most mole fraction 1e-4), and a cold restart follows a failed warm start. The
  * element rows are scaled by each element's own amount, so an element present at 1e-12 of the
  * feed converges like a major one, continuous with the answer without it. Elements absent from the feed are removed and product

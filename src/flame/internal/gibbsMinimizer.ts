@@ -11,8 +11,9 @@
  * elimination with partial pivoting after symmetric diagonal scaling (so an element at 1e-12 of
  * the feed keeps its digits), for the change of the element potentials (a direction the matrix
  * cannot resolve at round-off is left unchanged). Steps are damped so that no major species
- * changes by more than a factor e² per iteration and no trace species jumps above mole fraction
- * 1e-4 in one step — the damping rules of Gordon and McBride (NASA RP-1311, 1994); trace species
+ * rises by more than a factor e² per iteration and no trace species jumps above mole fraction
+ * 1e-4 in one step — the damping rules of Gordon and McBride (NASA RP-1311, 1994) — and no major
+ * species falls by more than a factor e^20 (ours); trace species
  * stay in ln-space, so amounts down to ~1e-300 mol are represented without clipping.
  * Convergence is judged species by species on the share each holds of the total or of any
  * element (relative to that element's own amount), so the carriers of a trace element converge
@@ -115,6 +116,8 @@ const TRACE_LN_X = Math.log(1e-8);
 const TRACE_CAP_LN_X = Math.log(1e-4);
 /** Largest change of ln n of a major species per step. */
 const MAX_LN_STEP = 2;
+/** A falling major species may change ln n by FALL_RATIO times MAX_LN_STEP per step. */
+const FALL_RATIO = 10;
 /** Condensed amount, relative to the element total, below which a shrinking species leaves. */
 const NEGLIGIBLE_CONDENSED = 1e-12;
 /** A full step that has not halved for this many iterations has reached the round-off floor. */
@@ -322,7 +325,11 @@ export function solveGibbs(p: GibbsProblem, c: GibbsConditions, s: GibbsState, l
       dln[j] = d;
       const lnx = s.lnn[j]! - lnTotal;
       if (lnx > TRACE_LN_X) {
-        if (Math.abs(d) > bigMajor) bigMajor = Math.abs(d);
+        // a rising major species is held to a factor e² per step; a falling one to e^20 (a
+        // cap of ours: from a cold start with many species the exotic ones must fall by ~50 in
+        // ln n, and holding them to e² as well took two dozen steps)
+        if (d > bigMajor) bigMajor = d;
+        else if (-d / FALL_RATIO > bigMajor) bigMajor = -d / FALL_RATIO;
       } else if (d - dlnN > 0) {
         const cap = (TRACE_CAP_LN_X - lnx) / (d - dlnN);
         if (cap < lambda) lambda = Math.max(cap, 0);
