@@ -120,7 +120,7 @@ export function prepareEngine(
     for (let j = 0; j < ns; j++) aAll[i * ns + j] = species[j]!.formula.elements[elements[i]!] ?? 0;
   }
   // whether the products can hold the feed's element ratios is decided only when a solve fails
-  // (see failureOf): a converged solve proves it, and the test costs more than the solve
+  // (solveAtT, acceptSolution): a converged solve proves it, and the test costs more than the solve
   const rows = independentRows(aAll, mAll, ns, bAll);
   const m = rows.length;
   const a = new Float64Array(m * ns);
@@ -321,7 +321,7 @@ export function solveEnergy(
   pOrV: number,
   guessK: number,
   lim: EngineLimits,
-): { T: number; outerIterations: number; residual: number; capacity: number } {
+): { T: number; outerIterations: number; residual: number } {
   const limits: [number, number] = lim.extrapolate ? [Math.min(e.rangeK[0], 200), Math.max(e.rangeK[1], 6000)] : [e.rangeK[0], e.rangeK[1]];
   let cachedT = Number.NaN;
   let cached = { value: 0, slope: 0, frozen: 0 };
@@ -355,7 +355,7 @@ export function solveEnergy(
   acceptSolution(e, T, lim, { residual, capacity: v.frozen });
   // probes of the search outside the range do not count; the answer does
   e.extrapolated = T < e.rangeK[0] || T > e.rangeK[1];
-  return { T, outerIterations: outer, residual, capacity: v.frozen };
+  return { T, outerIterations: outer, residual };
 }
 
 /**
