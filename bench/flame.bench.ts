@@ -4,15 +4,22 @@
  *   bisection of the same enthalpy balance (same products, same species data, to 1e-6 K);
  * - equilibrium flame T with the 12 default products (target < 500 µs), beside one fixed-T
  *   equilibrium solve of the same mixture from a cold start;
- * - a 200-point equilibrium sweep over φ (target < 0.2 s), beside 200 independent solves.
+ * - a 200-point equilibrium sweep over φ (target < 0.2 s), beside 200 independent solves;
+ * - equilibrium with 100 product species (target ≤ 1 ms), beside the 12 default products, and the
+ *   cost-growth curve over 20, 50, 100 and 200 species with the fitted slope of log t against
+ *   log n. The large sets are gas-phase C/H/O/N species of the Burcat–Ruscic 2005 database
+ *   (NASA-7 polynomials as published), copied into bench/fixtures/burcat-ruscic-2005-chon.json.
  */
+import { existsSync, readFileSync } from "node:fs";
+import { createLibrary } from "../src/species/createLibrary.js";
+import type { Library } from "../src/species/types.js";
 import { adiabaticFlameTemperature } from "../src/flame/adiabaticFlameTemperature.js";
 import { equilibriumComposition } from "../src/flame/equilibriumComposition.js";
 import { flameTemperatureSweep } from "../src/flame/flameTemperatureSweep.js";
 import { DEFAULT_FLAME_PRODUCTS } from "../src/flame/flameDefaults.js";
 import { species } from "../src/species/species.js";
 import { GRI_MECH_30_NASA7_SPECIES } from "../src/species/data/griMech30Nasa7.js";
-import { measure, report, runPeer } from "./harness.js";
+import { formatTime, measure, report, runPeer, type BenchResult } from "./harness.js";
 
 const CO2 = species("CO2(g)");
 const H2O = species("H2O(g)");
@@ -83,4 +90,97 @@ export function run(): void {
     return s;
   }, { batches: 9, inner: 1 });
   report("200-point equilibrium sweep", sweep, independent, "median < 0.2 s");
+
+  equilibriumGrowth();
+}
+
+interface BurcatRecord {
+  formula: string;
+  hf298KJPerMol: number;
+  TlowK: number;
+  TmidK: number;
+  ThighK: number;
+  low: number[];
+  high: number[];
+}
+
+/** The fixture as a species library of its own (no built-in species), keys `formula(g)`. */
+function burcatLibrary(): { library: Library; keys: string[] } {
+  // beside this file, or two levels up when run bundled from .out/bench/
+  const name = "fixtures/burcat-ruscic-2005-chon.json";
+  const path = [new URL(`./${name}`, import.meta.url), new URL(`../../bench/${name}`, import.meta.url)].find((u) => existsSync(u))!;
+  const file = JSON.parse(readFileSync(path, "utf8")) as { citation: string; records: BurcatRecord[] };
+  const R = 8.31446261815324;
+  const species = file.records.map((r) => {
+    const [a1, a2, a3, a4, a5, , a7] = r.low as [number, number, number, number, number, number, number];
+    const T = 298.15;
+    // S°(298.15 K) from the low-range polynomial: S/R = a1 ln T + a2 T + a3 T²/2 + a4 T³/3 + a5 T⁴/4 + a7
+    const s298 = R * (a1 * Math.log(T) + a2 * T + (a3 * T * T) / 2 + (a4 * T ** 3) / 3 + (a5 * T ** 4) / 4 + a7);
+    return {
+      key: `${r.formula}(g)`, formula: r.formula, phase: "g",
+      hf298KJPerMol: r.hf298KJPerMol, hf298Source: "burcat-ruscic-2005",
+      s298JPerMolK: s298, s298Source: "burcat-ruscic-2005",
+      heatCapacity: {
+        source: "burcat-ruscic-2005",
+        ranges: [
+          { TminK: r.TlowK, TmaxK: r.TmidK, cp: { form: "nasa7", a: r.low } },
+          { TminK: r.TmidK, TmaxK: r.ThighK, cp: { form: "nasa7", a: r.high } },
+        ],
+      },
+    };
+  });
+  const library = createLibrary({ sources: { "burcat-ruscic-2005": file.citation }, species }, { base: null });
+  return { library, keys: species.map((s) => s.key) };
+}
+
+/** Keeps the results of `fastest` alive. */
+export let fastestSink: unknown = undefined;
+
+/**
+ * Fastest batch of `batches` short batches (about 2 ms each): on a machine shared with other
+ * jobs the median counts their time too, while the fastest batch approaches the cost of the work
+ * itself. Used for the cost-growth curve, where only ratios between sizes matter.
+ */
+function fastest(name: string, fn: () => unknown, batches = 60): BenchResult {
+  const t0 = performance.now();
+  let calls = 0;
+  while (performance.now() - t0 < 100) {
+    fastestSink = fn();
+    calls++;
+  }
+  const inner = Math.max(1, Math.round((2 * calls) / (performance.now() - t0)));
+  let best = Infinity;
+  for (let b = 0; b < batches; b++) {
+    const s = performance.now();
+    for (let i = 0; i < inner; i++) fastestSink = fn();
+    best = Math.min(best, ((performance.now() - s) * 1e6) / inner);
+  }
+  return { name: `${name} (fastest batch)`, medianNs: best, perSecond: 1e9 / best };
+}
+
+/** Equilibrium cost against the number of product species: the 100-species row, the curve and its slope. */
+export function equilibriumGrowth(): void {
+  const { library, keys } = burcatLibrary();
+  // stoichiometric methane–air products at 2200 K and 1 atm, cold start every call
+  const feed = { "CH4(g)": 1, "O2(g)": 2, "N2(g)": 2 * N2_PER_O2 };
+  const solve = (n: number) => () => equilibriumComposition({ feed, species: keys.slice(0, n), T: 2200, library }).gasMoles;
+  const small = () => equilibriumComposition({ feed, species: DEFAULT_FLAME_PRODUCTS, T: 2200 }).gasMoles;
+  report("equilibrium, 100 product species", measure("equilibriumComposition, 100 products", solve(100)),
+    measure("equilibriumComposition, 12 default products", small), "median ≤ 1 ms");
+  const sizes = [20, 50, 100, 200];
+  const base = fastest("12 default products", small);
+  const results = sizes.map((n) => fastest(`${n} products`, solve(n)));
+  // least-squares slope of ln t against ln n
+  const x = sizes.map(Math.log);
+  const y = results.map((r) => Math.log(r.medianNs));
+  const mx = x.reduce((a, b) => a + b, 0) / x.length;
+  const my = y.reduce((a, b) => a + b, 0) / y.length;
+  let sxy = 0;
+  let sxx = 0;
+  for (let i = 0; i < x.length; i++) {
+    sxy += (x[i]! - mx) * (y[i]! - my);
+    sxx += (x[i]! - mx) ** 2;
+  }
+  const curve = sizes.map((n, i) => `${n}: ${formatTime(results[i]!.medianNs)} (${(results[i]!.medianNs / base.medianNs).toFixed(1)}×)`).join(", ");
+  console.log(`equilibrium cost growth, fastest batch (species: time, ratio to the 12 default products at ${formatTime(base.medianNs)}): ${curve} | fitted slope of log t vs log n: ${(sxy / sxx).toFixed(2)}`);
 }

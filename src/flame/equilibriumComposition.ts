@@ -110,8 +110,11 @@ export interface EquilibriumResult {
  * Method: minimisation of the total Gibbs energy subject to the element balances, by the
  * element-potential (Lagrange-multiplier) method — Newton iterations on the element potentials,
  * ln(total moles) and the condensed amounts, with the gas amounts carried in ln-space so trace
- * species (down to ~1e-300 mol) are represented without clipping; steps are damped, and a cold
- * restart follows a failed warm start. Elements absent from the feed are removed and product
+ * species (down to ~1e-300 mol) are represented without clipping; steps are damped after
+ * Gordon and McBride (a major species rises by at most a factor e² per step, a trace species
+ * rises to at most mole fraction 1e-4), and a cold restart follows a failed warm start. The
+ * element rows are scaled by each element's own amount, so an element present at 1e-12 of the
+ * feed converges like a major one, continuous with the answer without it. Elements absent from the feed are removed and product
  * species holding them excluded (listed in `excluded`); a condensed species enters when it
  * lowers G and leaves when its amount vanishes. With `H` the temperature is found by bracketed
  * Newton on H(T) using the equilibrium heat capacity (composition shift included).
@@ -120,15 +123,17 @@ export interface EquilibriumResult {
  * no pressure effect. Species data come from the library; a temperature outside the common data
  * range of the products (gases and condensed) throws `OUT_OF_RANGE` unless `extrapolate` is set.
  *
- * Failure is never silent: a solve that does not converge throws `NO_CONVERGENCE`
- * (`converged` in the result is therefore always true).
+ * Failure is never silent: before a result is returned one final check confirms that every
+ * feed element balances to `elementTolerance` (relative to its own amount) and, with `H`, that
+ * the energy residual is within `toleranceK` times the frozen heat capacity; otherwise
+ * `NO_CONVERGENCE` is thrown (`converged` in the result is therefore always true).
  *
  * @param input - feed (species or element amounts), product set, T or H, P, library
  * @param options - iteration limit, element tolerance, T tolerance, extrapolation
  * @returns amounts (mol), gas mole fractions, iterations, element residual, enthalpy (J), element potentials
  * @throws RxthermError `INVALID_ARGUMENT` when neither or both of feed/elements or T/H are given, an amount is negative or not finite, T ≤ 0, P ≤ 0, or the product set has no gas
  * @throws RxthermError `ELEMENTS_NOT_COVERED` when no product holds some feed element, or the product set cannot hold the feed's element ratios (details: `elements` or `elementResidual`)
- * @throws RxthermError `NO_CONVERGENCE` when the Newton iterations stall (details: `T`, `iterations`, `elementResidual`)
+ * @throws RxthermError `NO_CONVERGENCE` when the Newton iterations stall, or the final check finds an element or energy residual above its tolerance (details: `T`, `elementResidual` or `energyResidual`, `reason`)
  * @throws RxthermError `NO_BRACKET` with `H` when no temperature in the data range closes the enthalpy balance
  * @throws RxthermError `OUT_OF_RANGE` at a T outside the products' data range without `extrapolate`
  * @throws RxthermError `UNKNOWN_SPECIES` / `AMBIGUOUS_PHASE` for keys the library cannot resolve
@@ -142,7 +147,8 @@ export interface EquilibriumResult {
  * });
  * r.moleFractions["H2O(g)"] // => 0.6435 (to 4 digits, built-in data)
  * @see W. B. White, S. M. Johnson, G. B. Dantzig, J. Chem. Phys. 28 (1958) 751 (Gibbs minimisation);
- *   W. R. Smith, R. W. Missen, Chemical Reaction Equilibrium Analysis, Wiley 1982, ch. 6 (element potentials)
+ *   W. R. Smith, R. W. Missen, Chemical Reaction Equilibrium Analysis, Wiley 1982, ch. 6 (element potentials);
+ *   S. Gordon, B. J. McBride, NASA Reference Publication 1311, Part I (1994) (step-size control)
  */
 export function equilibriumComposition(input: EquilibriumInput, options: EquilibriumOptions = {}): EquilibriumResult {
   const fn = "equilibriumComposition";
@@ -213,7 +219,7 @@ function buildResult(e: Engine, T: number, P: number, temperatureIterations: num
     iterations: e.iterations,
     temperatureIterations,
     elementResidual: fullElementResidual(e),
-    enthalpy: energyAndSlope(e, T, "P").value,
+    enthalpy: energyAndSlope(e, T, "P", false).value,
     energyResidual,
     elementPotentials,
     excluded: [...e.excluded],

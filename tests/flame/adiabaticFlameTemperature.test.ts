@@ -252,3 +252,44 @@ describe("adiabaticFlameTemperature", () => {
     expect(second).toEqual(first);
   });
 });
+
+describe("adiabaticFlameTemperature with a trace element in the reactants", () => {
+  const LEVELS = [1e-4, 1e-5, 1e-6, 1e-7, 1e-8, 1e-9, 1e-10, 1e-11, 1e-12];
+  // each case: reactants with one element at relative amount t, and the same reactants without it
+  const CASES: { name: string; traced: (t: number) => Parameters<typeof adiabaticFlameTemperature>[0]; clean: Parameters<typeof adiabaticFlameTemperature>[0] }[] = [
+    { name: "hydrogen with methane (C)", traced: (t) => ({ fuel: { "H2(g)": 1, "CH4(g)": t } }), clean: { fuel: "H2(g)" } },
+    { name: "hydrogen in air with CO2 (C)", traced: (t) => ({ fuel: "H2(g)", oxidizer: { "O2(g)": 0.21, "N2(g)": 0.79, "CO2(g)": t } }), clean: { fuel: "H2(g)" } },
+    { name: "methane in air with argon (Ar)", traced: (t) => ({ fuel: "CH4(g)", oxidizer: { "O2(g)": 0.21, "N2(g)": 0.79, "Ar(g)": t } }), clean: { fuel: "CH4(g)" } },
+    { name: "methane in oxygen with nitrogen (N)", traced: (t) => ({ fuel: "CH4(g)", oxidizer: { "O2(g)": 1, "N2(g)": t } }), clean: { fuel: "CH4(g)", oxidizer: "oxygen" } },
+  ];
+  for (const c of CASES) {
+    for (const phi of [0.7, 1, 1.3]) {
+      it(`adiabaticFlameTemperature(${c.name}, φ = ${phi}) converges from 1e-4 to 1e-12 and tends to the trace-free answer`, () => {
+        const clean = adiabaticFlameTemperature({ ...c.clean, equivalenceRatio: phi });
+        for (const t of LEVELS) {
+          const r = adiabaticFlameTemperature({ ...c.traced(t), equivalenceRatio: phi });
+          expect(r.elementResidual).toBeLessThanOrEqual(1e-12);
+          // the trace shifts T and the major mole fractions in proportion to its amount (linear
+          // response; the measured slopes are 600–2000 K and < 1 per unit relative amount), plus
+          // the 1e-6 K temperature tolerance
+          expect(Math.abs(r.T - clean.T)).toBeLessThanOrEqual(3e3 * t + 2e-6);
+          for (const k of ["H2O(g)", "N2(g)", "O2(g)", "H2(g)", "CO2(g)"]) {
+            const x0 = clean.products[k];
+            if (x0 === undefined) continue;
+            expect(Math.abs(r.products[k]! - x0)).toBeLessThanOrEqual(2 * t + 1e-12);
+          }
+        }
+      });
+    }
+  }
+
+  it("adiabaticFlameTemperature(hydrogen with 1e-6 methane) converges (issue case) and its CO2 scales with the methane", () => {
+    const r6 = adiabaticFlameTemperature({ fuel: { "H2(g)": 1, "CH4(g)": 1e-6 } });
+    const r12 = adiabaticFlameTemperature({ fuel: { "H2(g)": 1, "CH4(g)": 1e-12 } });
+    // carbon splits between CO2 and CO by the major-species equilibrium, which a trace leaves
+    // unchanged to O(t): the CO2 mole fraction per unit of methane is the same at 1e-6 and 1e-12
+    const perUnit6 = r6.products["CO2(g)"]! / 1e-6;
+    const perUnit12 = r12.products["CO2(g)"]! / 1e-12;
+    expect(Math.abs(perUnit6 / perUnit12 - 1)).toBeLessThan(1e-4);
+  });
+});

@@ -119,8 +119,9 @@ export function prepareEngine(
     bAll[i] = feedElements.get(elements[i]!)!;
     for (let j = 0; j < ns; j++) aAll[i * ns + j] = species[j]!.formula.elements[elements[i]!] ?? 0;
   }
-  checkCovered(fn, aAll, mAll, ns, bAll, keys);
-  const rows = independentRows(aAll, mAll, ns);
+  // whether the products can hold the feed's element ratios is decided only when a solve fails
+  // (solveAtT, acceptSolution): a converged solve proves it, and the test costs more than the solve
+  const rows = independentRows(aAll, mAll, ns, bAll);
   const m = rows.length;
   const a = new Float64Array(m * ns);
   const b = new Float64Array(m);
@@ -164,7 +165,6 @@ export function setFeedElements(e: Engine, feedElements: ReadonlyMap<string, num
     e.bAll[i] = feedElements.get(e.elements[i]!)!;
     scale += e.bAll[i]!;
   }
-  checkCovered(e.fn, e.aAll, e.elements.length, e.problem.ns, e.bAll, e.keys);
   // the warm state is kept in normalised amounts (b / scale), so it stays a good start
   e.scale = scale;
   e.rows.forEach((r, i) => {
@@ -211,20 +211,49 @@ export function solveAtT(e: Engine, T: number, kind: "P" | "V", pOrV: number, li
   e.iterations += out.iterations;
   if (!out.converged) {
     coldStart(e.problem, e.state);
+    checkCovered(e.fn, e.aAll, e.elements.length, e.problem.ns, e.bAll, e.keys);
     throw new RxthermError(
       "NO_CONVERGENCE",
       `${e.fn} did not reach equilibrium at T = ${T} K within ${lim.maxIterations} iterations (${out.reason ?? "no progress"})`,
       { T, iterations: out.iterations, elementResidual: out.elementResidual, reason: out.reason ?? null },
     );
   }
-  // dependent element rows (dropped from the core) must close too
+  acceptSolution(e, T, lim, null);
+}
+
+/**
+ * The one check every equilibrium result passes before it is returned (fixed-T solves, the
+ * temperature search, flame points): every feed element — the dependent rows dropped from the
+ * core included — balances to `elementTolerance` (relative to that element's own amount), and,
+ * with an energy target, the energy residual is within `toleranceK` times the frozen heat
+ * capacity (a lower bound of the equilibrium one, so the temperature is within `toleranceK`).
+ * Throws ELEMENTS_NOT_COVERED when an element misses by more than 1e-6 (the product set cannot
+ * hold the feed's ratios), NO_CONVERGENCE otherwise.
+ */
+export function acceptSolution(e: Engine, T: number, lim: EngineLimits, energy: { residual: number; capacity: number } | null): void {
   const res = fullElementResidual(e);
-  if (res > Math.max(lim.elementTolerance, 1e-9)) {
+  if (!(res <= lim.elementTolerance)) {
+    coldStart(e.problem, e.state);
+    checkCovered(e.fn, e.aAll, e.elements.length, e.problem.ns, e.bAll, e.keys);
+    if (res > 1e-6) {
+      throw new RxthermError(
+        "ELEMENTS_NOT_COVERED",
+        `${e.fn} requires a product set that can hold the feed's element ratios; the closest composition misses an element balance by ${res.toExponential(2)} (relative)`,
+        { elementResidual: res, products: [...e.keys] },
+      );
+    }
+    throw new RxthermError(
+      "NO_CONVERGENCE",
+      `${e.fn} did not reach equilibrium at T = ${T} K: element residual ${res.toExponential(2)} above the tolerance ${lim.elementTolerance}`,
+      { T, elementResidual: res, reason: "element residual above tolerance" },
+    );
+  }
+  if (energy !== null && !(Math.abs(energy.residual) <= lim.toleranceK * energy.capacity)) {
     coldStart(e.problem, e.state);
     throw new RxthermError(
-      "ELEMENTS_NOT_COVERED",
-      `${e.fn} requires a product set that can hold the feed's element ratios; the closest composition misses an element balance by ${res.toExponential(2)} (relative)`,
-      { elementResidual: res, products: [...e.keys] },
+      "NO_CONVERGENCE",
+      `${e.fn} did not close the energy balance: residual ${energy.residual.toExponential(2)} J at T = ${T} K exceeds ${lim.toleranceK} K times the heat capacity ${energy.capacity.toExponential(3)} J/K`,
+      { T, energyResidual: energy.residual, reason: "energy residual above tolerance" },
     );
   }
 }
@@ -254,14 +283,15 @@ export function amount(e: Engine, j: number): number {
  * Enthalpy (kind "P") or internal energy (kind "V") of the equilibrium mixture at the current
  * state, J, and its total temperature derivative along the equilibrium, J/K.
  */
-export function energyAndSlope(e: Engine, T: number, kind: "P" | "V"): { value: number; slope: number } {
+export function energyAndSlope(e: Engine, T: number, kind: "P" | "V", withSlope = true): { value: number; slope: number; frozen: number } {
   const { ns, gas } = e.problem;
   const dln = e.dlnT;
   const dnc = e.dncT;
   const c: GibbsConditions = { mu0: e.mu0, kind, lnP: 0 };
-  const ok = equilibriumDerivatives(e.problem, c, e.state, T, e.hRT, dln, dnc);
+  const ok = withSlope && equilibriumDerivatives(e.problem, c, e.state, T, e.hRT, dln, dnc);
   let value = 0;
   let slope = 0;
+  let frozen = 0;
   for (let j = 0; j < ns; j++) {
     const isGas = gas[j] === 1;
     const n = isGas ? Math.exp(e.state.lnn[j]!) : e.state.nc[j]!;
@@ -272,9 +302,10 @@ export function energyAndSlope(e: Engine, T: number, kind: "P" | "V"): { value: 
     const cu = kind === "V" && isGas ? cp - R : cp;
     value += n * u;
     slope += n * cu;
+    frozen += n * cu;
     if (ok) slope += isGas ? u * n * dln[j]! : u * dnc[j]!;
   }
-  return { value: value * e.scale, slope: slope * e.scale };
+  return { value: value * e.scale, slope: slope * e.scale, frozen: frozen * e.scale };
 }
 
 /**
@@ -293,8 +324,8 @@ export function solveEnergy(
 ): { T: number; outerIterations: number; residual: number } {
   const limits: [number, number] = lim.extrapolate ? [Math.min(e.rangeK[0], 200), Math.max(e.rangeK[1], 6000)] : [e.rangeK[0], e.rangeK[1]];
   let cachedT = Number.NaN;
-  let cached = { value: 0, slope: 0 };
-  const at = (T: number): { value: number; slope: number } => {
+  let cached = { value: 0, slope: 0, frozen: 0 };
+  const at = (T: number): { value: number; slope: number; frozen: number } => {
     if (T !== cachedT) {
       solveAtT(e, T, kind, pOrV, lim);
       cached = energyAndSlope(e, T, kind);
@@ -306,10 +337,25 @@ export function solveEnergy(
     const v = at(T);
     return { value: v.value - target, slope: v.slope };
   }, guessK, limits, lim.toleranceK, 100);
-  const T = root.x;
+  // polish: the search stops when its Newton step is below toleranceK, judged with the slope it
+  // computed; a few more steps bring the residual within toleranceK times the frozen heat
+  // capacity, which bounds the temperature error whatever the slope
+  let T = root.x;
+  let outer = root.iterations;
+  let v = at(T);
+  for (let k = 0; k < 4 && !(Math.abs(v.value - target) <= lim.toleranceK * v.frozen); k++) {
+    const slope = v.slope >= v.frozen && Number.isFinite(v.slope) ? v.slope : v.frozen;
+    const next = Math.min(Math.max(T - (v.value - target) / slope, limits[0]), limits[1]);
+    if (next === T) break;
+    T = next;
+    v = at(T);
+    outer++;
+  }
+  const residual = v.value - target;
+  acceptSolution(e, T, lim, { residual, capacity: v.frozen });
   // probes of the search outside the range do not count; the answer does
   e.extrapolated = T < e.rangeK[0] || T > e.rangeK[1];
-  return { T, outerIterations: root.iterations, residual: root.value };
+  return { T, outerIterations: outer, residual };
 }
 
 /**
@@ -332,31 +378,33 @@ function checkCovered(fn: string, a: Float64Array, m: number, ns: number, b: Flo
   }
 }
 
-/** Indices of a maximal set of linearly independent rows of a (m × n), by pivoted elimination. */
-function independentRows(a: Float64Array, m: number, n: number): number[] {
-  const w = Float64Array.from(a);
+/**
+ * Indices of a maximal set of linearly independent rows of a (m × n), taken greedily in order of
+ * increasing element amount `b`: a dependent element is then a sum of smaller ones, never a
+ * difference of larger ones (a trace element derived as O − C would lose its digits to
+ * cancellation, e.g. S from CO and SO2 with S at 2e-6 of the feed).
+ */
+function independentRows(a: Float64Array, m: number, n: number, b: Float64Array): number[] {
+  const order = Array.from({ length: m }, (_, i) => i).sort((x, y) => b[x]! - b[y]! || x - y);
+  const basis: { row: Float64Array; col: number }[] = [];
   const chosen: number[] = [];
-  const used = new Uint8Array(m);
-  for (let col = 0; col < n && chosen.length < m; col++) {
-    let best = -1;
-    let bestV = 1e-9;
-    for (let i = 0; i < m; i++) {
-      if (used[i]) continue;
-      const v = Math.abs(w[i * n + col]!);
-      if (v > bestV) {
-        bestV = v;
-        best = i;
+  for (const i of order) {
+    const w = a.slice(i * n, (i + 1) * n);
+    for (const { row, col } of basis) {
+      const f = w[col]! / row[col]!;
+      if (f !== 0) for (let k = 0; k < n; k++) w[k] = w[k]! - f * row[k]!;
+    }
+    let col = -1;
+    let best = 1e-9;
+    for (let k = 0; k < n; k++) {
+      if (Math.abs(w[k]!) > best) {
+        best = Math.abs(w[k]!);
+        col = k;
       }
     }
-    if (best < 0) continue;
-    used[best] = 1;
-    chosen.push(best);
-    for (let i = 0; i < m; i++) {
-      if (used[i]) continue;
-      const f = w[i * n + col]! / w[best * n + col]!;
-      if (f === 0) continue;
-      for (let k = 0; k < n; k++) w[i * n + k] = w[i * n + k]! - f * w[best * n + k]!;
-    }
+    if (col < 0) continue;
+    basis.push({ row: w, col });
+    chosen.push(i);
   }
   return chosen.sort((x, y) => x - y);
 }

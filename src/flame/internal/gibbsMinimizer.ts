@@ -8,10 +8,18 @@
  * conditions μ_j = Σ_i a_ij π_i (π_i: element potential divided by RT) are linearised in ln n_j
  * (gases), n_k (condensed) and ln N; eliminating Δln n_j leaves a dense system of size
  * (elements + 1 + active condensed) in the unknowns π_i, Δln N and Δn_k, solved by Gaussian
- * elimination with partial pivoting. Steps are damped so that no major species changes by more
- * than a factor e² per iteration and no trace species jumps above mole fraction 1e-4 in one step;
- * trace species stay in ln-space, so amounts down to ~1e-300 mol are represented without
- * clipping. Condensed species enter when their driving force μ°_k − Σ a_ik π_i is negative and
+ * elimination with partial pivoting after symmetric diagonal scaling (so an element at 1e-12 of
+ * the feed keeps its digits), for the change of the element potentials (a direction the matrix
+ * cannot resolve at round-off is left unchanged). Steps are damped so that no major species
+ * rises by more than a factor e² per iteration and no trace species jumps above mole fraction
+ * 1e-4 in one step — the damping rules of Gordon and McBride (NASA RP-1311, 1994) — and no major
+ * species falls by more than a factor e^20 (ours); trace species
+ * stay in ln-space, so amounts down to ~1e-300 mol are represented without clipping.
+ * Convergence is judged species by species on the share each holds of the total or of any
+ * element (relative to that element's own amount), so the carriers of a trace element converge
+ * as tightly as the majors; a step that stops shrinking below 1e-6 (the round-off floor of a
+ * direction the feed's rounding leaves uncertain) also ends the iteration once every element
+ * balances to the tolerance. Condensed species enter when their driving force μ°_k − Σ a_ik π_i is negative and
  * leave when their amount would turn negative. At fixed volume the ln(P/P°) and ln N terms are
  * replaced by ln(n_j R T / (V P°)), and the ln N unknown disappears.
  *
@@ -21,7 +29,10 @@
  *
  * References: W. B. White, S. M. Johnson, G. B. Dantzig, "Chemical equilibrium in complex
  * mixtures", J. Chem. Phys. 28 (1958) 751–755; W. R. Smith, R. W. Missen, Chemical Reaction
- * Equilibrium Analysis: Theory and Algorithms, Wiley (1982), ch. 6 (element-potential methods).
+ * Equilibrium Analysis: Theory and Algorithms, Wiley (1982), ch. 6 (element-potential methods);
+ * S. Gordon, B. J. McBride, Computer Program for Calculation of Complex Chemical Equilibrium
+ * Compositions and Applications, Part I: Analysis, NASA Reference Publication 1311 (1994)
+ * (step-size control: the e² cap on major species and the 1e-4 cap on trace species).
  *
  * @internal
  * @module
@@ -68,6 +79,8 @@ export interface GibbsWork {
   readonly dln: Float64Array;
   readonly dmu: Float64Array;
   readonly cond: Int32Array;
+  /** Row scale factors of the dense solve. */
+  readonly scale: Float64Array;
 }
 
 /** Conditions of one solve. */
@@ -103,8 +116,16 @@ const TRACE_LN_X = /* @__PURE__ */ Math.log(1e-8);
 const TRACE_CAP_LN_X = /* @__PURE__ */ Math.log(1e-4);
 /** Largest change of ln n of a major species per step. */
 const MAX_LN_STEP = 2;
+/** A falling major species may change ln n by FALL_RATIO times MAX_LN_STEP per step. */
+const FALL_RATIO = 10;
 /** Condensed amount, relative to the element total, below which a shrinking species leaves. */
 const NEGLIGIBLE_CONDENSED = 1e-12;
+/** A full step that has not halved for this many iterations has reached the round-off floor. */
+const FLOOR_ITERATIONS = 4;
+/** Largest step measure accepted at the round-off floor (elements must still balance). */
+const FLOOR_STEP = 1e-6;
+/** Smallest pivot of an element-potential column in the scaled dense solve (smaller: dropped). */
+const PIVOT_FLOOR = 1e-15;
 /** Step-size tolerance on ln n of the species that matter. */
 const STEP_TOLERANCE = 1e-10;
 
@@ -124,7 +145,10 @@ export function createGibbsState(p: GibbsProblem): GibbsState {
 }
 
 function createWork(p: GibbsProblem): GibbsWork {
-  const size = p.m + 1 + p.ns;
+  // the dense system has a row per element, one for ln N and one per condensed species only
+  let condensed = 0;
+  for (let j = 0; j < p.ns; j++) if (!p.gas[j]) condensed++;
+  const size = p.m + 1 + condensed;
   return {
     M: new Float64Array(size * size),
     r: new Float64Array(size),
@@ -133,6 +157,7 @@ function createWork(p: GibbsProblem): GibbsWork {
     dln: new Float64Array(p.ns),
     dmu: new Float64Array(p.ns),
     cond: new Int32Array(p.ns),
+    scale: new Float64Array(size),
   };
 }
 
@@ -149,13 +174,30 @@ export function coldStart(p: GibbsProblem, s: GibbsState): void {
   }
   const meanAtoms = ngas > 0 && atoms > 0 ? atoms / ngas : 1;
   const total = bSum / meanAtoms;
-  const each = Math.log(total / Math.max(ngas, 1));
+  const each = total / Math.max(ngas, 1);
+  // no gas species starts with more of an element than its share of that element's amount, so
+  // the carriers of an element present at 1e-12 of the feed start at that level, not at ~1/ns
+  // gas carriers of each element
+  const carriers = new Int32Array(p.m);
+  for (let i = 0; i < p.m; i++) for (let l = 0; l < p.ns; l++) if (p.gas[l] && p.a[i * p.ns + l]! > 0) carriers[i] = carriers[i]! + 1;
+  let sum = 0;
   for (let j = 0; j < p.ns; j++) {
-    s.lnn[j] = p.gas[j] ? each : 0;
     s.nc[j] = 0;
     s.active[j] = 0;
+    if (!p.gas[j]) {
+      s.lnn[j] = 0;
+      continue;
+    }
+    let nj = each;
+    for (let i = 0; i < p.m; i++) {
+      const aij = p.a[i * p.ns + j]!;
+      if (aij <= 0) continue;
+      nj = Math.min(nj, p.b[i]! / (aij * carriers[i]!));
+    }
+    s.lnn[j] = Math.log(nj);
+    sum += nj;
   }
-  s.lnN = Math.log(total);
+  s.lnN = Math.log(sum > 0 ? sum : total);
   s.pi.fill(0);
   s.warm = false;
   // an element held by no gas species must start with a condensed carrier
@@ -202,6 +244,9 @@ export function solveGibbs(p: GibbsProblem, c: GibbsConditions, s: GibbsState, l
   for (let i = 0; i < m; i++) bScale += b[i]!;
   let iterations = 0;
   let phaseChanges = 0;
+  // round-off floor: the smallest full step seen, and the iterations since it last halved
+  let bestStep = Infinity;
+  let sinceBest = 0;
   const maxPhaseChanges = 2 * ns + 4;
   while (iterations < lim.maxIterations) {
     iterations++;
@@ -253,10 +298,16 @@ export function solveGibbs(p: GibbsProblem, c: GibbsConditions, s: GibbsState, l
       r[m] = Nt - nGas + sumNmu;
     }
     for (let k = 0; k < nc; k++) r[m + (isP ? 1 : 0) + k] = c.mu0[cond[k]!]!;
-    if (!solveDense(M, r, size)) {
+    // solve for the change of the element potentials (so a dropped direction keeps its value)
+    for (let row = 0; row < size; row++) {
+      let sum = 0;
+      for (let l = 0; l < m; l++) sum += M[row * size + l]! * s.pi[l]!;
+      r[row] = r[row]! - sum;
+    }
+    if (solveDense(M, r, size, s.work.scale, m) < 0) {
       return { converged: false, iterations, elementResidual: elementResidual(p, s), reason: "singular element-potential matrix" };
     }
-    for (let i = 0; i < m; i++) s.pi[i] = r[i]!;
+    for (let i = 0; i < m; i++) s.pi[i] = s.pi[i]! + r[i]!;
     const dlnN = isP ? r[m]! : 0;
     // species updates and step limiting
     let lambda = 1;
@@ -274,12 +325,23 @@ export function solveGibbs(p: GibbsProblem, c: GibbsConditions, s: GibbsState, l
       dln[j] = d;
       const lnx = s.lnn[j]! - lnTotal;
       if (lnx > TRACE_LN_X) {
-        if (Math.abs(d) > bigMajor) bigMajor = Math.abs(d);
+        // a rising major species is held to a factor e² per step; a falling one to e^20 (a
+        // cap of ours: from a cold start with many species the exotic ones must fall by ~50 in
+        // ln n, and holding them to e² as well took two dozen steps)
+        if (d > bigMajor) bigMajor = d;
+        else if (-d / FALL_RATIO > bigMajor) bigMajor = -d / FALL_RATIO;
       } else if (d - dlnN > 0) {
         const cap = (TRACE_CAP_LN_X - lnx) / (d - dlnN);
         if (cap < lambda) lambda = Math.max(cap, 0);
       }
-      const weight = Math.exp(lnx) * Math.max(Math.abs(d), d * d);
+      // a species matters by its share of the total or of any element it holds (relative to
+      // that element's own amount): the carriers of a trace element must converge too
+      let share = Math.exp(lnx);
+      for (let i = 0; i < m; i++) {
+        const aij = a[i * ns + j]!;
+        if (aij !== 0) share = Math.max(share, (aij * n[j]!) / b[i]!);
+      }
+      const weight = Math.min(share, 1) * Math.max(Math.abs(d), d * d);
       if (weight > stepMeasure) stepMeasure = weight;
     }
     if (bigMajor > MAX_LN_STEP) lambda = Math.min(lambda, MAX_LN_STEP / bigMajor);
@@ -309,7 +371,17 @@ export function solveGibbs(p: GibbsProblem, c: GibbsConditions, s: GibbsState, l
     if (!Number.isFinite(s.lnN) || !finiteAll(s.lnn)) {
       return { converged: false, iterations, elementResidual: Number.NaN, reason: "non-finite iterate" };
     }
-    if (lambda === 1 && stepMeasure < STEP_TOLERANCE) {
+    if (lambda === 1) {
+      if (stepMeasure < 0.5 * bestStep) {
+        bestStep = stepMeasure;
+        sinceBest = 0;
+      } else sinceBest++;
+    }
+    // converged: a full step below the tolerance, or a full step that has stopped shrinking at a
+    // small value (the round-off floor of a direction the feed's rounding leaves uncertain, e.g.
+    // the excess of O over C when both are 1e8 times that excess)
+    const floor = lambda === 1 && sinceBest >= FLOOR_ITERATIONS && stepMeasure < FLOOR_STEP;
+    if (lambda === 1 && (stepMeasure < STEP_TOLERANCE || floor)) {
       const res = elementResidual(p, s);
       if (res <= lim.elementTolerance) {
         // phase test: a condensed species with negative driving force enters
@@ -394,7 +466,7 @@ export function equilibriumDerivatives(
     r[m] = rhsN;
   }
   for (let k = 0; k < nc; k++) r[m + (isP ? 1 : 0) + k] = dmu[cond[k]!]!;
-  if (!solveDense(M, r, size)) return false;
+  if (solveDense(M, r, size, s.work.scale, m) < 0) return false;
   const dlnN = isP ? r[m]! : 0;
   for (let j = 0; j < ns; j++) {
     if (gas[j]) {
@@ -410,8 +482,35 @@ export function equilibriumDerivatives(
   return true;
 }
 
-/** Solve M x = r in place (x returned in r) by Gaussian elimination with partial pivoting. */
-export function solveDense(M: Float64Array, r: Float64Array, size: number): boolean {
+/**
+ * Solve M x = r in place (x returned in r; returns the number of dropped directions, −1 when
+ * singular) for the symmetric element-potential matrix, by
+ * Gaussian elimination with partial pivoting after symmetric diagonal scaling: row and column k
+ * are divided by √(max_l |M_kl|). The rows of an element present at 1e-12 of the feed are
+ * 1e-12 the size of the others; unscaled, pivoting would pick a large row to eliminate a tiny
+ * column and the trace element's balance would drown in round-off. `scaleWork` (length ≥ size)
+ * holds the scale factors.
+ */
+export function solveDense(
+  M: Float64Array, r: Float64Array, size: number,
+  scaleWork: Float64Array = new Float64Array(size), floorColumns = 0,
+): number {
+  const d = scaleWork;
+  let floored = 0;
+  for (let row = 0; row < size; row++) {
+    let big = 0;
+    for (let k = 0; k < size; k++) {
+      const v = Math.abs(M[row * size + k]!);
+      if (v > big) big = v;
+    }
+    if (!(big > 0) || !Number.isFinite(big)) return -1;
+    d[row] = 1 / Math.sqrt(big);
+  }
+  for (let row = 0; row < size; row++) {
+    const dr = d[row]!;
+    for (let k = 0; k < size; k++) M[row * size + k] = M[row * size + k]! * dr * d[k]!;
+    r[row] = r[row]! * dr;
+  }
   let scale = 0;
   for (let q = 0; q < size * size; q++) scale = Math.max(scale, Math.abs(M[q]!));
   const tiny = scale * 1e-300;
@@ -425,7 +524,17 @@ export function solveDense(M: Float64Array, r: Float64Array, size: number): bool
         piv = row;
       }
     }
-    if (!(best > tiny) || !Number.isFinite(best)) return false;
+    if (!Number.isFinite(best)) return -1;
+    if (col < floorColumns && !(best > PIVOT_FLOOR)) {
+      // an element-potential direction the matrix cannot resolve (after scaling, its pivot is
+      // at round-off): two element rows told apart only by species at ~1e-16 of them, e.g.
+      // O and C in CH3OH when only traces of O2 and C2H6 differ. Drop that equation and set the
+      // unknown to 0, so the direction is left as it is instead of taking a step of pure noise.
+      for (let k = col; k < size; k++) M[piv * size + k] = 0;
+      M[piv * size + col] = 1;
+      r[piv] = 0;
+      floored++;
+    } else if (!(best > tiny)) return -1;
     if (piv !== col) {
       for (let k = 0; k < size; k++) {
         const t = M[col * size + k]!;
@@ -436,9 +545,9 @@ export function solveDense(M: Float64Array, r: Float64Array, size: number): bool
       r[col] = r[piv]!;
       r[piv] = t;
     }
-    const d = M[col * size + col]!;
+    const dd = M[col * size + col]!;
     for (let row = col + 1; row < size; row++) {
-      const f = M[row * size + col]! / d;
+      const f = M[row * size + col]! / dd;
       if (f === 0) continue;
       for (let k = col; k < size; k++) M[row * size + k] = M[row * size + k]! - f * M[col * size + k]!;
       r[row] = r[row]! - f * r[col]!;
@@ -449,7 +558,8 @@ export function solveDense(M: Float64Array, r: Float64Array, size: number): bool
     for (let k = row + 1; k < size; k++) sum -= M[row * size + k]! * r[k]!;
     r[row] = sum / M[row * size + row]!;
   }
-  return true;
+  for (let row = 0; row < size; row++) r[row] = r[row]! * d[row]!;
+  return floored;
 }
 
 function finiteAll(x: Float64Array): boolean {

@@ -111,10 +111,37 @@ describe("solveDense", () => {
   it("solveDense(M, r) solves a pivoting-needing 3×3 system", () => {
     const M = new Float64Array([0, 2, 1, 1, 1, 1, 2, 1, 0]);
     const r = new Float64Array([5, 4, 4]); // x = (1, 2, 1)
-    expect(solveDense(M, r, 3)).toBe(true);
+    expect(solveDense(M, r, 3)).toBe(0);
     expect(Array.from(r).map((v) => Math.round(v * 1e12) / 1e12)).toEqual([1, 2, 1]);
   });
+  it("solveDense keeps the digits of a trace element's row (symmetric scaling)", () => {
+    // the element-potential matrix (rows C, O, H and the ln N border) of CO and CO2 at 1e-12 mol
+    // beside 1 mol H2O and 0.3 mol H2, with right-hand side M·x for x = (1.5, −2, 0.7, 0.1);
+    // unscaled elimination pivots a large O row into the tiny C column and returns x₀ ≈ 1.50015
+    const t = 1e-12;
+    const n = [t, t, 1, 0.3];
+    const A = [[1, 1, 0, 0], [1, 2, 1, 0], [0, 0, 2, 2]];
+    const M = new Float64Array(16);
+    for (let i = 0; i < 3; i++) {
+      for (let l = 0; l < 3; l++) M[i * 4 + l] = n.reduce((sum, nj, j) => sum + A[i]![j]! * A[l]![j]! * nj, 0);
+      const si = n.reduce((sum, nj, j) => sum + A[i]![j]! * nj, 0);
+      M[i * 4 + 3] = si;
+      M[3 * 4 + i] = si;
+    }
+    const x = [1.5, -2, 0.7, 0.1];
+    const r = new Float64Array(4).map((_, i) => x.reduce((sum, xk, k) => sum + M[i * 4 + k]! * xk, 0));
+    expect(solveDense(M, r, 4)).toBe(0);
+    for (let k = 0; k < 4; k++) expect(Math.abs(r[k]! - x[k]!)).toBeLessThan(1e-12);
+  });
+  it("solveDense drops an element-potential direction at round-off and leaves that unknown at 0", () => {
+    // rows 1 and 2 differ by 1e-17 after scaling: their difference is unresolvable in float64
+    const M = new Float64Array([1, 1, 1, 1 + 1e-17]);
+    const r = new Float64Array([2, 2]);
+    expect(solveDense(M, r, 2, new Float64Array(2), 2)).toBe(1);
+    expect(r[0]! + r[1]!).toBeCloseTo(2, 14);
+    expect(Number.isFinite(r[0]!) && Number.isFinite(r[1]!)).toBe(true);
+  });
   it("solveDense reports a singular matrix", () => {
-    expect(solveDense(new Float64Array([1, 2, 2, 4]), new Float64Array([1, 2]), 2)).toBe(false);
+    expect(solveDense(new Float64Array([1, 2, 2, 4]), new Float64Array([1, 2]), 2)).toBe(-1);
   });
 });
