@@ -5,6 +5,8 @@ import type { Reaction } from "../reaction/types.js";
 import type { Stream } from "../extent/types.js";
 import { resolveStream, type Entry, type ResolvedStream } from "./internal/energyStreams.js";
 import { prepareReaction, standardEnthalpyExact } from "../enthalpy/preparedReaction.js";
+import { attachView } from "../view/attachView.js";
+import { HEAT_DUTY_VIEW } from "./internal/energyView.js";
 
 /**
  * Streams and optional reactions of an energy balance, for {@link heatDuty}.
@@ -222,7 +224,7 @@ export function heatDuty(input: HeatDutyInput, options: HeatDutyOptions = {}): H
   let latentHeat = 0;
   for (const p of phaseChanges) latentHeat += p.heat;
 
-  return {
+  return attachView({
     duty: method === "formation" ? formation : reaction,
     method,
     formation,
@@ -235,7 +237,7 @@ export function heatDuty(input: HeatDutyInput, options: HeatDutyOptions = {}): H
     phaseChanges,
     pvTerm: clean(pvTerm),
     warnings,
-  };
+  }, HEAT_DUTY_VIEW);
 }
 
 const EXTRAPOLATE = Object.freeze({ extrapolate: true });

@@ -5,6 +5,8 @@ import type { Reaction } from "../reaction/types.js";
 import type Decimal from "decimal.js";
 import type { Rational } from "../numeric/rational.js";
 import { prepareReaction, standardEnthalpyExact, type PreparedReaction } from "./preparedReaction.js";
+import { attachView } from "../view/attachView.js";
+import { REACTION_ENTHALPY_VIEW } from "./internal/enthalpyView.js";
 
 /**
  * Options of {@link reactionEnthalpy}.
@@ -145,7 +147,7 @@ export function reactionEnthalpy(reaction: Reaction | string, options: ReactionE
     ...(exact !== undefined ? { exact } : {}),
     ...(uncertainty !== undefined ? { uncertainty } : {}),
   };
-  return result;
+  return attachView(result, REACTION_ENTHALPY_VIEW);
 }
 
 const EXTRAPOLATE = Object.freeze({ extrapolate: true });

@@ -4,6 +4,8 @@ import { formulaOf, molarMassOf, validateFlows } from "./internal/extentSystem.j
 import type { Flows } from "./types.js";
 import { waterSaturationPressure } from "./waterSaturationPressure.js";
 import { compensatedSum } from "../numeric/compensatedSum.js";
+import { attachView } from "../view/attachView.js";
+import { COMBUSTION_VIEW } from "./internal/extentView.js";
 
 /**
  * Dry air by mole fraction, the default oxidizer of {@link combustion}: O₂ 0.209476 and Ar
@@ -246,7 +248,7 @@ export function combustion(input: CombustionInput): CombustionResult {
   }
   const airMassKg = massKg(airFlows, fn);
   const dryOxidizerMolarMass = compensatedSum(Object.entries(oxidizer).map(([k, y]) => y * molarMassOf(k, fn, "oxidizer")));
-  return {
+  return attachView({
     theoreticalO2,
     theoreticalAir,
     air,
@@ -265,7 +267,7 @@ export function combustion(input: CombustionInput): CombustionResult {
     airToFuelMass: airMassKg / fuel.massKg,
     theoreticalAirToFuelMass: (theoreticalAir * dryOxidizerMolarMass) / 1000 / fuel.massKg,
     ashKg: fuel.ashKg,
-  };
+  }, COMBUSTION_VIEW);
 }
 
 interface FuelElements {
