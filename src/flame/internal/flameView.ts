@@ -93,14 +93,15 @@ export const SWEEP_AXES: Readonly<Record<string, { readonly label: string; reado
 export function sweepView(r: SweepFields): ResultView {
   const axis = SWEEP_AXES[r.parameter] ?? { label: r.parameter, unit: "" };
   const species = Object.keys(r.products).filter((k) => (r.products[k] ?? []).some((y) => y >= 1e-3));
+  const phi = r.parameter !== "equivalenceRatio"; // a φ column only when φ is not the swept setting
   const rows: ViewCell[][] = r.values.map((v, i) => [
-    v, r.T[i] ?? null, r.equivalenceRatio[i] ?? null, ...species.map((k) => r.products[k]?.[i] ?? null),
+    v, r.T[i] ?? null, ...(phi ? [r.equivalenceRatio[i] ?? null] : []), ...species.map((k) => r.products[k]?.[i] ?? null),
   ]);
   return {
     title: `flame temperature against ${axis.label}`,
     tables: [{
       columns: [
-        { label: axis.label, unit: axis.unit }, { label: "T", unit: "K" }, { label: "φ", unit: "–", digits: 4 },
+        { label: axis.label, unit: axis.unit }, { label: "T", unit: "K" }, ...(phi ? [{ label: "φ", unit: "–", digits: 4 }] : []),
         ...species.map((k) => ({ label: `y ${k}`, unit: "mol/mol", digits: 4 })),
       ],
       rows,
