@@ -25,7 +25,7 @@ export function formatCell(cell: ViewCell, digits = DEFAULT_DIGITS): string {
     const [m, e] = cell.toExponential(Math.max(0, digits - 1)).split("e") as [string, string];
     return `${trimZeros(m)}e${e.replace("+", "")}`;
   }
-  return trimZeros(cell.toPrecision(digits).includes("e") ? cell.toFixed(0) : cell.toPrecision(digits));
+  return String(Number(cell.toPrecision(digits))); // shortest form of the rounded value: no trailing zeros
 }
 
 /** Header text of a column: `label (unit)`. */
