@@ -82,7 +82,7 @@ describe("display of every result kind", () => {
   });
 
   it("the formula view gives the molar mass of CuSO4·5H2O, 249.677 g/mol", () => {
-    expect(toText(parseFormula("CuSO4·5H2O"))).toContain("249.677"); // IUPAC standard atomic weights (2021), as molarMass
+    expect(toText(parseFormula("CuSO4·5H2O"))).toContain("249.677"); // IUPAC 2013 standard atomic weights (CIAAW 2017), the same sum as molarMass
   });
 
   it("the heat-duty view shows the breakdown, and 5.91 kJ for N2 from 298.15 to 500 K", () => {
