@@ -5,8 +5,7 @@ import type { Reaction } from "../reaction/types.js";
 import type Decimal from "decimal.js";
 import type { Rational } from "../numeric/rational.js";
 import { prepareReaction, standardEnthalpyExact, type PreparedReaction } from "./preparedReaction.js";
-import { attachView } from "../view/attachView.js";
-import { REACTION_ENTHALPY_VIEW } from "./internal/enthalpyView.js";
+import { REACTION_ENTHALPY_PROTOTYPE } from "./internal/enthalpyView.js";
 
 /**
  * Options of {@link reactionEnthalpy}.
@@ -142,12 +141,16 @@ export function reactionEnthalpy(reaction: Reaction | string, options: ReactionE
     extrapolated = extrapolated && extrapolate;
   }
   const uncertainty = propagatedUncertainty(p, divisor);
-  const result: ReactionEnthalpyResult = {
-    value, T, per: options.per ?? null, extrapolated, terms,
-    ...(exact !== undefined ? { exact } : {}),
-    ...(uncertainty !== undefined ? { uncertainty } : {}),
-  };
-  return attachView(result, REACTION_ENTHALPY_VIEW);
+  // made on the display prototype (non-enumerable display methods, no per-call cost), fields in the usual order
+  const result = Object.create(REACTION_ENTHALPY_PROTOTYPE) as { -readonly [K in keyof ReactionEnthalpyResult]: ReactionEnthalpyResult[K] };
+  result.value = value;
+  result.T = T;
+  result.per = options.per ?? null;
+  result.extrapolated = extrapolated;
+  result.terms = terms;
+  if (exact !== undefined) result.exact = exact;
+  if (uncertainty !== undefined) result.uncertainty = uncertainty;
+  return result;
 }
 
 const EXTRAPOLATE = Object.freeze({ extrapolate: true });

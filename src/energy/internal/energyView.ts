@@ -4,7 +4,7 @@
  * @module
  * @internal
  */
-import { viewDescriptors } from "../../view/attachView.js";
+import { viewDescriptors, viewPrototype } from "../../view/attachView.js";
 import { ENERGY_UNIT_K, FLOW_UNIT, recordTable } from "../../view/recordTable.js";
 import type { ResultView } from "../../view/types.js";
 import type { Flows } from "../../extent/types.js";
@@ -101,5 +101,5 @@ export function adiabaticView(r: AdiabaticFields): ResultView {
 }
 
 /** Display methods of each result kind, built once. */
-export const HEAT_DUTY_VIEW = /* @__PURE__ */ viewDescriptors(heatDutyView);
+export const HEAT_DUTY_PROTOTYPE = /* @__PURE__ */ viewPrototype(/* @__PURE__ */ viewDescriptors(heatDutyView));
 export const ADIABATIC_VIEW = /* @__PURE__ */ viewDescriptors(adiabaticView);

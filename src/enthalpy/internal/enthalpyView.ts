@@ -4,7 +4,7 @@
  * @module
  * @internal
  */
-import { viewDescriptors } from "../../view/attachView.js";
+import { viewDescriptors, viewPrototype } from "../../view/attachView.js";
 import type { ResultView } from "../../view/types.js";
 
 /** Fields of a reactionEnthalpy result that its view reads. */
@@ -43,5 +43,5 @@ export function reactionEnthalpyView(r: ReactionEnthalpyFields): ResultView {
   };
 }
 
-/** Display methods of a reaction enthalpy, built once. */
-export const REACTION_ENTHALPY_VIEW = /* @__PURE__ */ viewDescriptors(reactionEnthalpyView);
+/** Prototype of every reaction enthalpy result: its display methods (built once; results are made on it). */
+export const REACTION_ENTHALPY_PROTOTYPE = /* @__PURE__ */ viewPrototype(/* @__PURE__ */ viewDescriptors(reactionEnthalpyView));
