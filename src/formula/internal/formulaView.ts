@@ -5,7 +5,7 @@
  * @module
  * @internal
  */
-import { attachView, viewDescriptors, viewPrototype } from "../../view/attachView.js";
+import { viewDescriptors, viewPrototype } from "../../view/attachView.js";
 import type { ResultView } from "../../view/types.js";
 import type { Formula } from "../types.js";
 import { INDEX_WEIGHTS, symbolIndexOf } from "./elementIndex.js";
@@ -31,13 +31,5 @@ export function formulaView(f: Formula): ResultView {
   };
 }
 
-/** Display methods of a formula, built once. */
-export const FORMULA_VIEW = /* @__PURE__ */ viewDescriptors(formulaView);
-
 /** Prototype of every formula `parseFormula` returns (carries the display methods, nothing enumerable). */
-export const FORMULA_PROTOTYPE = /* @__PURE__ */ viewPrototype(FORMULA_VIEW);
-
-/** Attach the formula display methods to a formula made elsewhere (not on the hot path). */
-export function withFormulaView(f: Formula): Formula {
-  return attachView(f, FORMULA_VIEW);
-}
+export const FORMULA_PROTOTYPE = /* @__PURE__ */ viewPrototype(/* @__PURE__ */ viewDescriptors(formulaView));
