@@ -1,8 +1,6 @@
 import { solveFlamePoint } from "./internal/flameProblem.js";
 import { prepareFlameInput, toFlameResult } from "./internal/flameInput.js";
 import type { AdiabaticFlameInput, AdiabaticFlameOptions, AdiabaticFlameResult } from "./types.js";
-import { attachView } from "../view/attachView.js";
-import { FLAME_VIEW } from "./internal/flameView.js";
 
 export type { AdiabaticFlameInput, AdiabaticFlameOptions, AdiabaticFlameResult } from "./types.js";
 
@@ -57,6 +55,6 @@ export function adiabaticFlameTemperature(input: AdiabaticFlameInput, options: A
   const fn = "adiabaticFlameTemperature";
   const { setup, point } = prepareFlameInput(fn, input, options);
   const r = solveFlamePoint(setup, point);
-  return attachView(toFlameResult(setup, point, r), FLAME_VIEW);
+  return toFlameResult(setup, point, r);
 }
 

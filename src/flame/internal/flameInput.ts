@@ -12,6 +12,7 @@ import type { EngineLimits } from "./equilibriumEngine.js";
 import { prepareFlame, type FlamePoint, type FlamePointResult, type FlameSetup } from "./flameProblem.js";
 import { DEFAULT_FLAME_PRODUCTS } from "../flameDefaults.js";
 import type { AdiabaticFlameInput, AdiabaticFlameOptions, AdiabaticFlameResult } from "../types.js";
+import { FLAME_PROTOTYPE } from "./flameView.js";
 
 /** Resolve and check the solver settings. */
 export function resolveLimits(
@@ -84,25 +85,26 @@ export function toFlameResult(setup: FlameSetup, point: FlamePoint, r: FlamePoin
   for (const [k, n] of Object.entries(r.moles)) if (!(k in r.condensed)) gas += n;
   const products: Record<string, number> = {};
   for (const [k, n] of Object.entries(r.moles)) if (!(k in r.condensed) && !isCondensedKey(setup, k)) products[k] = n / gas;
-  return {
-    T: r.T,
-    P: r.P,
-    products,
-    moles: r.moles,
-    condensed: r.condensed,
-    oxidizer: r.oxidizerMoles,
-    equivalenceRatio: point.phi,
-    theoreticalO2: setup.theoreticalO2,
-    mode: setup.mode,
-    process: setup.constantVolume ? "constant-volume" : "constant-pressure",
-    reactantEnergy: r.reactantEnergy,
-    residual: r.residual,
-    relativeResidual: r.relativeResidual,
-    iterations: r.iterations,
-    equilibriumIterations: r.equilibriumIterations,
-    elementResidual: r.elementResidual,
-    extrapolated: r.extrapolated,
-  };
+  // made on the display prototype (non-enumerable display methods, no per-result cost)
+  const out = Object.create(FLAME_PROTOTYPE) as { -readonly [K in keyof AdiabaticFlameResult]: AdiabaticFlameResult[K] };
+  out.T = r.T;
+  out.P = r.P;
+  out.products = products;
+  out.moles = r.moles;
+  out.condensed = r.condensed;
+  out.oxidizer = r.oxidizerMoles;
+  out.equivalenceRatio = point.phi;
+  out.theoreticalO2 = setup.theoreticalO2;
+  out.mode = setup.mode;
+  out.process = setup.constantVolume ? "constant-volume" : "constant-pressure";
+  out.reactantEnergy = r.reactantEnergy;
+  out.residual = r.residual;
+  out.relativeResidual = r.relativeResidual;
+  out.iterations = r.iterations;
+  out.equilibriumIterations = r.equilibriumIterations;
+  out.elementResidual = r.elementResidual;
+  out.extrapolated = r.extrapolated;
+  return out;
 }
 
 function isCondensedKey(setup: FlameSetup, key: string): boolean {

@@ -4,7 +4,7 @@
  * @module
  * @internal
  */
-import { viewDescriptors } from "../../view/attachView.js";
+import { viewDescriptors, viewPrototype } from "../../view/attachView.js";
 import { FLOW_UNIT, recordTable } from "../../view/recordTable.js";
 import type { ResultView, ViewCell } from "../../view/types.js";
 import type { AdiabaticFlameResult } from "../types.js";
@@ -110,7 +110,9 @@ export function sweepView(r: SweepFields): ResultView {
   };
 }
 
-/** Display methods of each result kind, built once. */
-export const FLAME_VIEW = /* @__PURE__ */ viewDescriptors(flameView);
+/** Prototype of every flame result (made per solved point, so the display methods cost nothing per result). */
+export const FLAME_PROTOTYPE = /* @__PURE__ */ viewPrototype(/* @__PURE__ */ viewDescriptors(flameView));
+
+/** Display methods of the other result kinds, built once (one result per solve: attached with attachView). */
 export const EQUILIBRIUM_VIEW = /* @__PURE__ */ viewDescriptors(equilibriumView);
 export const SWEEP_VIEW = /* @__PURE__ */ viewDescriptors(sweepView);
