@@ -157,3 +157,22 @@ export type { AdiabaticFlameInput, AdiabaticFlameOptions, AdiabaticFlameResult }
 export { flameTemperatureSweep } from "./flame/flameTemperatureSweep.js";
 export type { FlameSweep, FlameSweepResult } from "./flame/flameTemperatureSweep.js";
 export { DEFAULT_FLAME_PRODUCTS, SULFUR_FLAME_PRODUCTS } from "./flame/flameDefaults.js";
+
+// ── display (layer 7; the display symbols and view types live in view/, layer 0) ──
+// (display section)
+export { JUPYTER_DISPLAY, RESULT_VIEW } from "./view/displaySymbols.js";
+export type { ResultView, ViewTable, ViewColumn, ViewCell, MimeBundle } from "./view/types.js";
+export { show } from "./display/show.js";
+export { mimeBundle } from "./display/mimeBundle.js";
+export { toText } from "./display/toText.js";
+export { toMarkdown } from "./display/toMarkdown.js";
+export { toHtml } from "./display/toHtml.js";
+export type { Displayable, ChartSpec, ChartChannel, SpeciesChartOptions } from "./display/types.js";
+export { cpChart } from "./display/cpChart.js";
+export type { CpChartOptions } from "./display/cpChart.js";
+export { enthalpyChart } from "./display/enthalpyChart.js";
+export type { EnthalpyChartOptions } from "./display/enthalpyChart.js";
+export { flameChart } from "./display/flameChart.js";
+export { compositionChart } from "./display/compositionChart.js";
+export type { CompositionChartOptions } from "./display/compositionChart.js";
+export { dutyChart } from "./display/dutyChart.js";

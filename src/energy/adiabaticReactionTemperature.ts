@@ -8,6 +8,8 @@ import { solveExtents } from "../extent/solveExtents.js";
 import { findRoot } from "../numeric/roots.js";
 import { resolveSpeciesCached } from "../enthalpy/resolveInputs.js";
 import { resolveStream } from "./internal/energyStreams.js";
+import { attachView } from "../view/attachView.js";
+import { ADIABATIC_VIEW } from "./internal/energyView.js";
 
 /**
  * Input of {@link adiabaticReactionTemperature} and {@link adiabaticTemperatureRise}.
@@ -111,7 +113,7 @@ export interface AdiabaticReactionResult {
  * @see IUPAC Green Book, 3rd ed. (2007), §2.11; R. P. Brent (1973) for the root finder.
  */
 export function adiabaticReactionTemperature(input: AdiabaticReactionInput, options: AdiabaticReactionOptions = {}): AdiabaticReactionResult {
-  return solveAdiabatic("adiabaticReactionTemperature", input, options).result;
+  return attachView(solveAdiabatic("adiabaticReactionTemperature", input, options).result, ADIABATIC_VIEW);
 }
 
 /**
@@ -156,7 +158,7 @@ export interface AdiabaticTemperatureRiseResult extends AdiabaticReactionResult 
  */
 export function adiabaticTemperatureRise(input: AdiabaticReactionInput, options: AdiabaticReactionOptions = {}): AdiabaticTemperatureRiseResult {
   const { result, startT } = solveAdiabatic("adiabaticTemperatureRise", input, options);
-  return { ...result, deltaT: result.T - startT, startT };
+  return attachView({ ...result, deltaT: result.T - startT, startT }, ADIABATIC_VIEW);
 }
 
 function solveAdiabatic(fn: string, input: AdiabaticReactionInput, options: AdiabaticReactionOptions): { result: AdiabaticReactionResult; startT: number } {

@@ -6,6 +6,7 @@ import type { Reaction } from "../reaction/types.js";
 import type { Stream } from "../extent/types.js";
 import { resolveStream, type Entry, type ResolvedStream } from "./internal/energyStreams.js";
 import { prepareReaction, standardEnthalpyExact } from "../enthalpy/preparedReaction.js";
+import { HEAT_DUTY_PROTOTYPE } from "./internal/energyView.js";
 
 /**
  * Streams and optional reactions of an energy balance, for {@link heatDuty}.
@@ -230,21 +231,22 @@ export function heatDuty(input: HeatDutyInput, options: HeatDutyOptions = {}): H
   let latentHeat = 0;
   for (const p of phaseChanges) latentHeat += p.heat;
 
-  return {
-    duty: method === "formation" ? formation : reaction,
-    method,
-    formation,
-    reaction,
-    reactionHeat: clean(heat298 - latentHeat),
-    latentHeat: clean(latentHeat),
-    sensibleIn: clean(sIn),
-    sensibleOut: clean(sOut),
-    streams: { inlet: inHeat, outlet: outHeat },
-    phaseChanges,
-    pvTerm: clean(pvTerm),
-    warnings,
-    extrapolated,
-  };
+  // made on the display prototype (non-enumerable display methods, no per-call cost)
+  const result = Object.create(HEAT_DUTY_PROTOTYPE) as { -readonly [K in keyof HeatDutyResult]: HeatDutyResult[K] };
+  result.duty = method === "formation" ? formation : reaction;
+  result.method = method;
+  result.formation = formation;
+  result.reaction = reaction;
+  result.reactionHeat = clean(heat298 - latentHeat);
+  result.latentHeat = clean(latentHeat);
+  result.sensibleIn = clean(sIn);
+  result.sensibleOut = clean(sOut);
+  result.streams = { inlet: inHeat, outlet: outHeat };
+  result.phaseChanges = phaseChanges;
+  result.pvTerm = clean(pvTerm);
+  result.warnings = warnings;
+  result.extrapolated = extrapolated;
+  return result;
 }
 
 const EXTRAPOLATE = /* @__PURE__ */ Object.freeze({ extrapolate: true });

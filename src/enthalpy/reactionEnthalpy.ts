@@ -6,6 +6,7 @@ import type { Reaction } from "../reaction/types.js";
 import type Decimal from "decimal.js";
 import type { Rational } from "../numeric/rational.js";
 import { prepareReaction, standardEnthalpyExact, type PreparedReaction } from "./preparedReaction.js";
+import { REACTION_ENTHALPY_PROTOTYPE } from "./internal/enthalpyView.js";
 
 /**
  * Options of {@link reactionEnthalpy}.
@@ -143,11 +144,15 @@ export function reactionEnthalpy(reaction: Reaction | string, options: ReactionE
     value = zeroToPositive(value / divisor);
   }
   const uncertainty = propagatedUncertainty(p, divisor);
-  const result: ReactionEnthalpyResult = {
-    value, T, per: options.per ?? null, extrapolated, terms,
-    ...(exact !== undefined ? { exact } : {}),
-    ...(uncertainty !== undefined ? { uncertainty } : {}),
-  };
+  // made on the display prototype (non-enumerable display methods, no per-call cost), fields in the usual order
+  const result = Object.create(REACTION_ENTHALPY_PROTOTYPE) as { -readonly [K in keyof ReactionEnthalpyResult]: ReactionEnthalpyResult[K] };
+  result.value = value;
+  result.T = T;
+  result.per = options.per ?? null;
+  result.extrapolated = extrapolated;
+  result.terms = terms;
+  if (exact !== undefined) result.exact = exact;
+  if (uncertainty !== undefined) result.uncertainty = uncertainty;
   return result;
 }
 

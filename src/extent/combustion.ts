@@ -6,6 +6,8 @@ import type { Flows, FormulaLookup } from "./types.js";
 import { waterSaturationPressure } from "./waterSaturationPressure.js";
 import { compensatedSum } from "../numeric/compensatedSum.js";
 import { checkMixtureLimits } from "./mixtureLimits.js";
+import { attachView } from "../view/attachView.js";
+import { COMBUSTION_VIEW } from "./internal/extentView.js";
 
 /**
  * Dry air by mole fraction, with its argon and CO₂ (pass it as `oxidizer` where the argon and the
@@ -279,7 +281,7 @@ export function combustion(input: CombustionInput): CombustionResult {
   }
   const airMassKg = massKg(airFlows, fn);
   const dryOxidizerMolarMass = compensatedSum(Object.entries(oxidizer).map(([k, y]) => y * molarMassOf(k, fn, "oxidizer")));
-  return {
+  return attachView({
     theoreticalO2,
     theoreticalAir,
     air,
@@ -298,7 +300,7 @@ export function combustion(input: CombustionInput): CombustionResult {
     airToFuelMass: airMassKg / fuel.massKg,
     theoreticalAirToFuelMass: (theoreticalAir * dryOxidizerMolarMass) / 1000 / fuel.massKg,
     ashKg: fuel.ashKg,
-  };
+  }, COMBUSTION_VIEW);
 }
 
 interface FuelElements {

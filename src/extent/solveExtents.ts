@@ -34,6 +34,8 @@ import {
 } from "../numeric/safeRational.js";
 import { type StoichSystem, type YieldPair, buildSystem, resolveSpecies } from "./internal/extentSystem.js";
 import type { ExtentSpec, Flows } from "./types.js";
+import { attachView } from "../view/attachView.js";
+import { EXTENTS_VIEW } from "./internal/extentView.js";
 
 /**
  * Options of {@link solveExtents}.
@@ -189,9 +191,9 @@ export function solveExtents(input: SolveExtentsInput, options: SolveExtentsOpti
   for (let k = 0; k < specs.length; k++) rows.push(specRow(sys, specs[k] as ExtentSpec, k, fn));
   if (arithmetic === "float") {
     const fast = solveIn(FLOAT, sys, rows, fn);
-    if (fast !== null) return fast;
+    if (fast !== null) return attachView(fast, EXTENTS_VIEW);
   }
-  return solveExactPath(sys, rows, fn);
+  return attachView(solveExactPath(sys, rows, fn), EXTENTS_VIEW);
 }
 
 /** One linear equation Σⱼ a[j] ξⱼ = b built from a spec: in float now, exactly on demand. */

@@ -14,6 +14,8 @@ import {
   type Engine,
 } from "./internal/equilibriumEngine.js";
 import { resolveLimits } from "./internal/flameInput.js";
+import { attachView } from "../view/attachView.js";
+import { EQUILIBRIUM_VIEW } from "./internal/flameView.js";
 
 /**
  * What to bring to equilibrium, and at which conditions, for {@link equilibriumComposition}.
@@ -193,7 +195,7 @@ export function equilibriumComposition(input: EquilibriumInput, options: Equilib
     temperatureIterations = sol.outerIterations;
     energyResidual = sol.residual;
   }
-  return buildResult(engine, T, P, temperatureIterations, energyResidual);
+  return attachView(buildResult(engine, T, P, temperatureIterations, energyResidual), EQUILIBRIUM_VIEW);
 }
 
 /** Assemble the public result from a converged engine. */

@@ -3,6 +3,8 @@ import { RxthermError } from "../errors.js";
 import { solveFlamePoint, type FlamePoint } from "./internal/flameProblem.js";
 import { flamePointOf, prepareFlameInput, toFlameResult } from "./internal/flameInput.js";
 import type { AdiabaticFlameInput, AdiabaticFlameOptions } from "./types.js";
+import { attachView } from "../view/attachView.js";
+import { SWEEP_VIEW } from "./internal/flameView.js";
 
 /**
  * Which setting of an {@link AdiabaticFlameInput} a sweep varies, and over which values.
@@ -131,7 +133,7 @@ export function flameTemperatureSweep(input: AdiabaticFlameInput, sweep: FlameSw
     }
     for (const arr of Object.values(products)) if (arr.length < index + 1) arr.push(0);
   });
-  return { parameter, values, T, P, equivalenceRatio: phi, products, iterations, residual, extrapolated };
+  return attachView({ parameter, values, T, P, equivalenceRatio: phi, products, iterations, residual, extrapolated }, SWEEP_VIEW);
 }
 
 function withIndex(e: unknown, index: number, value: number): unknown {

@@ -2,6 +2,7 @@ import Decimal from "decimal.js";
 import { RxthermError, type RxthermErrorCode } from "../errors.js";
 import { ELEMENT_KEY_COUNT, INDEX_SYMBOLS, symbolIndex } from "./internal/elementIndex.js";
 import type { Formula, Phase } from "./types.js";
+import { FORMULA_PROTOTYPE } from "./internal/formulaView.js";
 
 /**
  * The documented limits of the formula grammar. Text beyond them is refused with a clear error
@@ -497,12 +498,13 @@ function finish(
     DCUM.length = 0;
     GDMUL.length = 0;
   }
-  return {
-    text: start === 0 && end === s.length ? s : s.slice(start, end),
-    elements,
-    charge,
-    phase,
-  };
+  // the prototype carries the (non-enumerable) display methods; no per-result cost beyond the allocation
+  const f = Object.create(FORMULA_PROTOTYPE) as { text: string; elements: Record<string, number>; charge: number; phase: Phase | null };
+  f.text = start === 0 && end === s.length ? s : s.slice(start, end);
+  f.elements = elements;
+  f.charge = charge;
+  f.phase = phase;
+  return f;
 }
 
 /** Zero the running totals of the first `distinct` elements (before throwing, so no state leaks into the next call). */

@@ -9,6 +9,8 @@ import {
   type Rational,
 } from "../numeric/rational.js";
 import { termCoefficient } from "./internal/reactionTerms.js";
+import { BALANCE_CHECK_VIEW } from "./internal/reactionView.js";
+import { attachView } from "../view/attachView.js";
 import { parseReaction } from "./parseReaction.js";
 import type { Reaction, Term } from "./types.js";
 
@@ -87,14 +89,14 @@ export function checkBalance(reaction: Reaction | string): BalanceCheck {
     exactResiduals[el] = rationalToString(v);
     if (v.num !== 0n) unbalancedElements.push(el);
   }
-  return {
+  return attachView({
     balanced: unbalancedElements.length === 0 && charge.num === 0n,
     residuals,
     charge: rationalToNumber(charge),
     exactResiduals,
     exactCharge: rationalToString(charge),
     unbalancedElements,
-  };
+  }, BALANCE_CHECK_VIEW);
 }
 
 const ZERO: Rational = /* @__PURE__ */ Object.freeze({ num: 0n, den: 1n });

@@ -15,6 +15,7 @@ export const LAYERS: Readonly<Record<string, number>> = Object.freeze({
   "errors.ts": 0,
   "units.ts": 0,
   numeric: 0,
+  view: 0,
   formula: 1,
   reaction: 2,
   extent: 3,

@@ -15,6 +15,7 @@ import { DEFAULT_FLAME_PRODUCTS, SULFUR_FLAME_PRODUCTS } from "../flameDefaults.
 import { flameSpecies } from "./flameLinks.js";
 import type { AdiabaticFlameInput, AdiabaticFlameOptions, AdiabaticFlameResult } from "../types.js";
 import type { Flows } from "../../extent/types.js";
+import { FLAME_PROTOTYPE } from "./flameView.js";
 
 /** Resolve and check the solver settings. */
 export function resolveLimits(
@@ -92,25 +93,26 @@ export function toFlameResult(setup: FlameSetup, point: FlamePoint, r: FlamePoin
     const k = keys[i]!;
     if (!(k in r.condensed) && !(checkPhase && isCondensedKey(setup, k))) products[k] = r.moles[k]! / gas;
   }
-  return {
-    T: r.T,
-    P: r.P,
-    products,
-    moles: r.moles,
-    condensed: r.condensed,
-    oxidizer: r.oxidizerMoles,
-    equivalenceRatio: point.phi,
-    theoreticalO2: setup.theoreticalO2,
-    mode: setup.mode,
-    process: setup.constantVolume ? "constant-volume" : "constant-pressure",
-    reactantEnergy: r.reactantEnergy,
-    residual: r.residual,
-    relativeResidual: r.relativeResidual,
-    iterations: r.iterations,
-    equilibriumIterations: r.equilibriumIterations,
-    elementResidual: r.elementResidual,
-    extrapolated: r.extrapolated,
-  };
+  // made on the display prototype (non-enumerable display methods, no per-result cost)
+  const out = Object.create(FLAME_PROTOTYPE) as { -readonly [K in keyof AdiabaticFlameResult]: AdiabaticFlameResult[K] };
+  out.T = r.T;
+  out.P = r.P;
+  out.products = products;
+  out.moles = r.moles;
+  out.condensed = r.condensed;
+  out.oxidizer = r.oxidizerMoles;
+  out.equivalenceRatio = point.phi;
+  out.theoreticalO2 = setup.theoreticalO2;
+  out.mode = setup.mode;
+  out.process = setup.constantVolume ? "constant-volume" : "constant-pressure";
+  out.reactantEnergy = r.reactantEnergy;
+  out.residual = r.residual;
+  out.relativeResidual = r.relativeResidual;
+  out.iterations = r.iterations;
+  out.equilibriumIterations = r.equilibriumIterations;
+  out.elementResidual = r.elementResidual;
+  out.extrapolated = r.extrapolated;
+  return out;
 }
 
 function isCondensedKey(setup: FlameSetup, key: string): boolean {

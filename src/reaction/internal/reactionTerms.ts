@@ -4,6 +4,8 @@
  */
 import type { Formula } from "../../formula/types.js";
 import type { Reaction, Term } from "../types.js";
+import { viewDescriptors, viewPrototype } from "../../view/attachView.js";
+import { reactionView } from "./reactionView.js";
 import {
   lcmBigInt,
   rationalFromDecimalString,
@@ -126,8 +128,17 @@ export function termCoefficient(term: Term): Rational {
 
 /** Frozen Reaction from term lists. */
 export function makeReaction(reactants: Term[], products: Term[]): Reaction {
-  return Object.freeze({ reactants: Object.freeze(reactants), products: Object.freeze(products) });
+  // the prototype carries the (non-enumerable) display methods; the reaction stays a frozen plain record
+  const r = Object.create(REACTION_PROTOTYPE) as { reactants: readonly Term[]; products: readonly Term[] };
+  r.reactants = Object.freeze(reactants);
+  r.products = Object.freeze(products);
+  return Object.freeze(r);
 }
+
+/** Prototype of every reaction made here: the display methods (a table of the terms). */
+const REACTION_PROTOTYPE = /* @__PURE__ */ viewPrototype(
+  /* @__PURE__ */ viewDescriptors((r: Reaction) => reactionView(r, equationText(r))),
+);
 
 /** Equation text `a A + b B -> c C` (coefficient 1 omitted, fractions as `13/2`). */
 export function equationText(reaction: Reaction, arrow = "->"): string {

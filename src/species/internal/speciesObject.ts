@@ -15,6 +15,10 @@ import { GAS_CONSTANT_J_PER_MOL_K, STANDARD_PRESSURE_PA, STANDARD_TEMPERATURE_K,
 import type { SpeciesEntry } from "../schema.js";
 import type { Species, SpeciesEvaluation, SpeciesTransition } from "../types.js";
 import { readSpeciesFormula } from "./speciesFormula.js";
+import { speciesView } from "./speciesView.js";
+import { JUPYTER_DISPLAY, RESULT_VIEW } from "../../view/displaySymbols.js";
+import { viewMimeBundle } from "../../view/renderView.js";
+import type { MimeBundle, ResultView } from "../../view/types.js";
 
 const D = /* @__PURE__ */ Decimal.clone({ precision: 34, rounding: Decimal.ROUND_HALF_EVEN });
 const EXTEND: RangeOptions = /* @__PURE__ */ Object.freeze({ extrapolate: true });
@@ -116,6 +120,16 @@ class TabulatedSpecies implements Species {
     if (!(T >= this.tMin && T <= this.tMax)) this.check("gibbs", T, options);
     const pt = this.pressureTerm("gibbs", P);
     return this.h(T) - T * this.s(T, pt);
+  }
+
+  /** The table view of this species (data, sources, properties on a temperature grid). */
+  [RESULT_VIEW](): ResultView {
+    return speciesView(this);
+  }
+
+  /** Notebook rich display: text, Markdown and HTML tables of the species view. */
+  [JUPYTER_DISPLAY](): MimeBundle {
+    return viewMimeBundle(speciesView(this));
   }
 
   evaluate(T: number, P?: number, options?: RangeOptions): SpeciesEvaluation {

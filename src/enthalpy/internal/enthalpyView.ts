@@ -1,0 +1,47 @@
+/**
+ * Private: the table view of a reaction enthalpy (value, uncertainty, and each species' term).
+ *
+ * @module
+ * @internal
+ */
+import { viewDescriptors, viewPrototype } from "../../view/attachView.js";
+import type { ResultView } from "../../view/types.js";
+
+/** Fields of a reactionEnthalpy result that its view reads. */
+interface ReactionEnthalpyFields {
+  readonly value: number;
+  readonly uncertainty?: number;
+  readonly T: number;
+  readonly exact?: string;
+  readonly per: string | null;
+  readonly extrapolated: boolean;
+  readonly terms: readonly { readonly species: string; readonly coefficient: number; readonly enthalpy: number }[];
+}
+
+/** The view of a reaction enthalpy. */
+export function reactionEnthalpyView(r: ReactionEnthalpyFields): ResultView {
+  const per = r.per === null ? "mol/mol reaction" : `mol/mol ${r.per}`;
+  return {
+    title: `reaction enthalpy at ${r.T} K`,
+    tables: [
+      {
+        columns: [
+          { label: "ΔrH", unit: r.per === null ? "kJ/mol" : `kJ/mol ${r.per}` }, { label: "uncertainty", unit: "kJ/mol" },
+          { label: "T", unit: "K" }, { label: "exact", unit: "J/mol" },
+        ],
+        rows: [[r.value / 1000, r.uncertainty !== undefined ? r.uncertainty / 1000 : null, r.T, r.exact ?? null]],
+      },
+      {
+        caption: "terms (products positive, reactants negative)",
+        columns: [
+          { label: "species" }, { label: "ν", unit: per }, { label: "H°(T)", unit: "kJ/mol" }, { label: "ν·H°(T)", unit: "kJ/mol" },
+        ],
+        rows: r.terms.map((t) => [t.species, t.coefficient, t.enthalpy / 1000, (t.coefficient * t.enthalpy) / 1000]),
+      },
+    ],
+    ...(r.extrapolated ? { notes: ["extrapolated outside the data range of at least one species: a screening number"] } : {}),
+  };
+}
+
+/** Prototype of every reaction enthalpy result: its display methods (built once; results are made on it). */
+export const REACTION_ENTHALPY_PROTOTYPE = /* @__PURE__ */ viewPrototype(/* @__PURE__ */ viewDescriptors(reactionEnthalpyView));
