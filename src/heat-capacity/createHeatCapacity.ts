@@ -1,4 +1,5 @@
 import { RxthermError } from "../errors.js";
+import { allWithin } from "../numeric/allWithin.js";
 import * as compiled from "./internal/cpCompile.js";
 import type { CpRange, RangeOptions } from "./types.js";
 
@@ -429,24 +430,4 @@ class PiecewiseHeatCapacity implements HeatCapacity {
       { label: this.label, T, rangeIndex, form: r.cp.form },
     );
   }
-}
-
-/**
- * True when every value of `ts` lies in [lo, hi] (false for NaN). Unrolled by four: this up-front
- * check is what lets the batch APIs promise that nothing is written when a temperature is bad, and
- * unrolling halves its cost next to the evaluation loop.
- */
-function allWithin(ts: Float64Array, lo: number, hi: number): boolean {
-  const n = ts.length;
-  const m = n - (n & 3);
-  let j = 0;
-  for (; j < m; j += 4) {
-    const a = ts[j]!, b = ts[j + 1]!, c = ts[j + 2]!, d = ts[j + 3]!;
-    if (!(a >= lo && a <= hi && b >= lo && b <= hi && c >= lo && c <= hi && d >= lo && d <= hi)) return false;
-  }
-  for (; j < n; j++) {
-    const a = ts[j]!;
-    if (!(a >= lo && a <= hi)) return false;
-  }
-  return true;
 }

@@ -2,9 +2,18 @@ import { describe, expect, it } from "vitest";
 import { builtInLibrary } from "../../src/species/builtInLibrary.js";
 import { citation, SOURCES } from "../../src/species/citation.js";
 import { RxthermError } from "../../src/errors.js";
+import { builtInSpeciesData } from "../../src/species/data/builtInSpeciesData.js";
+import { validateSpeciesData } from "../../src/species/validateSpeciesData.js";
 
 describe("builtInLibrary", () => {
   const lib = builtInLibrary();
+
+  it("its data pass validateSpeciesData unchanged (they are trusted at run time, not re-validated)", () => {
+    const data = builtInSpeciesData();
+    const valid = validateSpeciesData(data);
+    expect(valid).toEqual(data); // the schema neither adds nor drops anything: run time can use the data as they are
+    expect(lib.keys().length).toBe(new Set(data.species.filter((e) => e.alternative !== true).map((e) => e.key)).size);
+  });
 
   it("the @example: 73 species; methane by name; CH4 in two data sets, JANAF-based first", () => {
     expect(lib.keys().length).toBe(73);
