@@ -91,6 +91,8 @@ export type {
   Species, Library, LibraryGetOptions, SpeciesEvaluation, SpeciesTransition,
 } from "./species/types.js";
 export { species } from "./species/species.js";
+export { findSpecies } from "./species/findSpecies.js";
+export type { SpeciesQuery } from "./species/findSpecies.js";
 export { createLibrary } from "./species/createLibrary.js";
 export type { CreateLibraryOptions } from "./species/createLibrary.js";
 export { builtInLibrary } from "./species/builtInLibrary.js";
