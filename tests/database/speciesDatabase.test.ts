@@ -80,7 +80,10 @@ describe("speciesDatabase", () => {
       const cpTol = name === "NH3" ? 0.015 : 0.005;
       const hTol = name === "NH3" ? 0.01 : 0.005;
       const at298 = rows.find((r) => r.T === 298.15)!;
-      expect(Math.abs(sp.hf298 / 1000 - at298.dfH), `${name} ${janaf_table} ΔfH°`).toBeLessThan(0.5);
+      // OH: the database's record takes ΔfH° = 37.3 ± 0.3 kJ/mol from B. Ruscic et al., J. Phys. Chem. A 106
+      // (2002) 2727, which revised the NIST-JANAF value (38.987 kJ/mol, table H-038) down by 1.7 kJ/mol
+      if (name === "OH") expect(sp.hf298 / 1000).toBeCloseTo(37.3, 1);
+      else expect(Math.abs(sp.hf298 / 1000 - at298.dfH), `${name} ${janaf_table} ΔfH°`).toBeLessThan(0.5);
       for (const r of rows) {
         expect(Math.abs(sp.cp(r.T) - r.Cp) / r.Cp, `${name} ${janaf_table} Cp ${r.T} K`).toBeLessThan(cpTol);
         const dH = Math.abs((sp.enthalpy(r.T) - sp.hf298) / 1000 - r.H_minus_H298);
