@@ -111,6 +111,11 @@ export function generateSpeciesDatabase(source: SourceFile): GeneratedDatabase {
       fixed.push({ label: rec.label, what: `phase ${rec.phase} (the name text mentions both solid and liquid) read as ${phaseFix}, as the label's "(…)" says` });
       rec = { ...rec, phase: phaseFix };
     }
+    const cpMin = lowestCp(rec);
+    if (!(cpMin > 0)) {
+      skipped.push({ label: rec.label, phase: rec.phase, why: `Cp from the polynomial falls to ${cpMin.toFixed(1)} J/(mol·K) inside the record's range (checked at 200 points per range)` });
+      continue;
+    }
     const reading = readIdentity(rec);
     if (reading === null) {
       skipped.push({ label: rec.label, phase: rec.phase, why: check === "ok" ? "no element list could be confirmed against the stated molar mass" : `self-check: ${check}; the label does not give a formula that matches the stated molar mass` });
@@ -287,6 +292,18 @@ function rangesOf(rec: SourceRecord): number[][] {
   return [[rec.Tlow_K, rec.Tmid_K, ...rec.low], [rec.Tmid_K, rec.Thigh_K, ...rec.high]];
 }
 
+/** Lowest Cp of the record's polynomial over its range, J/(mol·K) (200 points per range and both ends). */
+function lowestCp(rec: SourceRecord): number {
+  let min = Infinity;
+  for (const [lo, hi, ...a] of rangesOf(rec)) {
+    for (let i = 0; i <= 200; i++) {
+      const T = lo! + ((hi! - lo!) * i) / 200;
+      min = Math.min(min, R * (a[0]! + T * (a[1]! + T * (a[2]! + T * (a[3]! + T * a[4]!)))));
+    }
+  }
+  return min;
+}
+
 /** 298.15 K inside the record's range (a start up to 300 K counts: the NASA convention). */
 function holds298(rec: SourceRecord): boolean {
   return rec.Tlow_K <= 300 && rec.Thigh_K >= T0;
@@ -377,6 +394,7 @@ function docsText(source: SourceFile, records: CompactRecord[], skipped: { label
       : s.why.includes("step at 1000 K") ? "self-check: the two ranges do not join at 1000 K (step in Cp above 0.2 % or in S above 0.1 J/(mol·K))"
         : s.why.includes("H(298.15)") ? "self-check: stated ΔfH° and polynomial disagree at 298.15 K inside the range"
           : s.why.includes("coefficients") ? "self-check: coefficients incomplete"
+            : s.why.startsWith("Cp from the polynomial") ? "Cp of the polynomial not positive inside the range"
             : "no element list (a mixture or pseudo-species) that the label and molar mass could confirm";
     reasons.set(r, (reasons.get(r) ?? 0) + 1);
   }

@@ -27,7 +27,7 @@ let layered: Library | undefined;
 
 /**
  * The opt-in species database: a {@link Library} of every usable record of the Burcat–Ruscic
- * thermochemical database, 2005 edition (1,307 species: gases, liquids and crystals; NASA
+ * thermochemical database, 2005 edition (1,306 species: gases, liquids and crystals; NASA
  * 7-coefficient polynomials as published, nothing refitted), for the species the built-in set lacks.
  *
  * Pass it wherever a library is accepted: `species(key, db)`, `findSpecies(query, db)`,
@@ -53,9 +53,9 @@ let layered: Library | undefined;
  * @category Species database
  * @example
  * const db = speciesDatabase();
- * db.keys().length // => 1307
+ * db.keys().length // => 1306
  * species("acetone", db).key // => "acetone-C3H6O(g)"
- * Math.round(species("NH3(g)", db).enthalpy(1000)) // => -45939 + 32621 = -13318 (J/mol, rounded; database record "NH3 Anharmonic")
+ * Math.round(species("NH3(g)", db).enthalpy(1000)) // => -13378 (J/mol; ΔfH° −45.940 kJ/mol + H − H298 32.56 kJ/mol, record "NH3 Anharmonic")
  * speciesDatabase({ withBuiltIn: true }).get("CO2(g)").dataset // => "nist-janaf" (the built-in entry wins)
  * @see A. Burcat, B. Ruscic, Third Millennium Ideal Gas and Condensed Phase Thermochemical Database for Combustion
  *   with Updates from Active Thermochemical Tables, ANL-05/20 and TAE 960, Argonne National Laboratory / Technion (2005)

@@ -7,6 +7,7 @@ import type { CpRange, RangeOptions } from "./types.js";
 // local const binding is a direct reference that the JIT inlines, whereas some module loaders (the
 // CommonJS interop of TypeScript runners) turn every imported name into a getter call.
 const { REFERENCE_T_K, STRIDE, H_0, H_1, H_2, H_3, H_4, H_5, H_INV, H_LN, S_0 } = compiled;
+const { CP_0, CP_1, CP_2, CP_3, CP_4, CP_M1, CP_M2 } = compiled;
 const { absoluteConstants, cpAt, hAt, sAt, segmentIndex, writeSegment, prepareRanges, rangePieces } = compiled;
 
 /**
@@ -105,8 +106,16 @@ export interface HeatCapacity {
   deltaHBatch(fromK: number, temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions): Float64Array;
   /** ∫Cp/T dT from `fromK` to every temperature of `temperaturesK` into `out`, J/(mol·K). */
   deltaSBatch(fromK: number, temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions): Float64Array;
-  /** ∫Cp dT from 298.15 K to every temperature of `temperaturesK` into `out`, J/mol. */
-  sensibleEnthalpyBatch(temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions): Float64Array;
+  /**
+   * ∫Cp dT from 298.15 K to every temperature of `temperaturesK` into `out`, J/mol, plus `offsetJPerMol`
+   * (default 0; e.g. ΔfH°(298.15 K) for absolute enthalpies, added inside the same loop).
+   */
+  sensibleEnthalpyBatch(temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions, offsetJPerMol?: number): Float64Array;
+  /**
+   * ∫Cp/T dT from 298.15 K to every temperature of `temperaturesK` into `out`, J/(mol·K), plus
+   * `offsetJPerMolK` (default 0; e.g. S°(298.15 K) for absolute entropies).
+   */
+  sensibleEntropyBatch(temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions, offsetJPerMolK?: number): Float64Array;
 }
 
 /**
@@ -307,14 +316,19 @@ class PiecewiseHeatCapacity implements HeatCapacity {
   cpBatch(temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions): Float64Array {
     const res = this.prepareBatch("cpBatch", temperaturesK, out, options);
     const k = this.k, len = temperaturesK.length;
-    let lo = Infinity, hi = -Infinity, o = 0;
+    // coefficients in locals while T stays in one segment, as in hBatch
+    let lo = Infinity, hi = -Infinity;
+    let c0 = 0, c1 = 0, c2 = 0, c3 = 0, c4 = 0, m1 = 0, m2 = 0;
     for (let j = 0; j < len; j++) {
       const T = temperaturesK[j]!;
       if (!(T > lo && T <= hi)) {
         const i = segmentIndex(this.upper, this.n, T);
-        lo = this.lowerX[i]!; hi = this.upperX[i]!; o = i * STRIDE;
+        lo = this.lowerX[i]!; hi = this.upperX[i]!;
+        const o = i * STRIDE;
+        c0 = k[o + CP_0]!; c1 = k[o + CP_1]!; c2 = k[o + CP_2]!; c3 = k[o + CP_3]!; c4 = k[o + CP_4]!; m1 = k[o + CP_M1]!; m2 = k[o + CP_M2]!;
       }
-      res[j] = cpAt(k, o, T);
+      const inv = 1 / T;
+      res[j] = c0 + T * (c1 + T * (c2 + T * (c3 + T * c4))) + inv * (m1 + inv * m2);
     }
     return res;
   }
@@ -326,25 +340,22 @@ class PiecewiseHeatCapacity implements HeatCapacity {
     return res;
   }
 
-  sensibleEnthalpyBatch(temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions): Float64Array {
+  sensibleEnthalpyBatch(temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions, offsetJPerMol = 0): Float64Array {
     const res = this.prepareBatch("sensibleEnthalpyBatch", temperaturesK, out, options);
-    this.hBatch(temperaturesK, res, 0);
+    this.hBatch(temperaturesK, res, -offsetJPerMol);
     return res;
   }
 
   deltaSBatch(fromK: number, temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions): Float64Array {
     this.check("deltaSBatch", fromK, options);
     const res = this.prepareBatch("deltaSBatch", temperaturesK, out, options);
-    const k = this.k, len = temperaturesK.length, s0 = this.s(fromK);
-    let lo = Infinity, hi = -Infinity, o = 0;
-    for (let j = 0; j < len; j++) {
-      const T = temperaturesK[j]!;
-      if (!(T > lo && T <= hi)) {
-        const i = segmentIndex(this.upper, this.n, T);
-        lo = this.lowerX[i]!; hi = this.upperX[i]!; o = i * STRIDE;
-      }
-      res[j] = sAt(k, o, T) - s0;
-    }
+    this.sBatch(temperaturesK, res, this.s(fromK));
+    return res;
+  }
+
+  sensibleEntropyBatch(temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions, offsetJPerMolK = 0): Float64Array {
+    const res = this.prepareBatch("sensibleEntropyBatch", temperaturesK, out, options);
+    this.sBatch(temperaturesK, res, -offsetJPerMolK);
     return res;
   }
 
@@ -378,6 +389,20 @@ class PiecewiseHeatCapacity implements HeatCapacity {
       res[j] = hl === 0
         ? h0 + T * (h1 + T * (h2 + T * (h3 + T * (h4 + T * h5)))) + hi1 / T
         : h0 + T * (h1 + T * (h2 + T * (h3 + T * (h4 + T * h5)))) + hi1 / T + hl * Math.log(T);
+    }
+  }
+
+  /** Hot loop of the entropy batches: ∫Cp/T dT antiderivative minus `minus`, J/(mol·K). */
+  private sBatch(ts: Float64Array, res: Float64Array, minus: number): void {
+    const k = this.k, len = ts.length;
+    let lo = Infinity, hi = -Infinity, o = 0;
+    for (let j = 0; j < len; j++) {
+      const T = ts[j]!;
+      if (!(T > lo && T <= hi)) {
+        const i = segmentIndex(this.upper, this.n, T);
+        lo = this.lowerX[i]!; hi = this.upperX[i]!; o = i * STRIDE;
+      }
+      res[j] = sAt(k, o, T) - minus;
     }
   }
 

@@ -14,7 +14,6 @@ import { RxthermError } from "../../errors.js";
 import { createHeatCapacity, type HeatCapacity } from "../../heat-capacity/createHeatCapacity.js";
 import type { CpRange, RangeOptions } from "../../heat-capacity/types.js";
 import type { Formula, Phase } from "../../formula/types.js";
-import { allWithin } from "../../numeric/allWithin.js";
 import { GAS_CONSTANT_J_PER_MOL_K, STANDARD_PRESSURE_PA, STANDARD_TEMPERATURE_K } from "../../units.js";
 import type { SpeciesEntry } from "../schema.js";
 import type { Species, SpeciesEvaluation, SpeciesTransition } from "../types.js";
@@ -182,37 +181,38 @@ class TabulatedSpecies implements Species {
   }
 
   cpBatch(T: Float64Array, out?: Float64Array, options?: RangeOptions): Float64Array {
-    const res = this.#prepareBatch("cpBatch", T, out, options);
-    return (this.#model ?? this.#compile()).cpBatch(T, res, EXTEND);
+    const res = this.#prepareBatch("cpBatch", T, out);
+    const m = this.#model ?? this.#compile();
+    try {
+      return m.cpBatch(T, res, options);
+    } catch (e) {
+      throw this.#batchError("cpBatch", T, options, e);
+    }
   }
 
   enthalpyBatch(T: Float64Array, out?: Float64Array, options?: RangeOptions): Float64Array {
-    const res = this.#prepareBatch("enthalpyBatch", T, out, options);
-    (this.#model ?? this.#compile()).sensibleEnthalpyBatch(T, res, EXTEND);
-    const n = T.length, hf = this.hf298;
-    if (this.#trT.length === 0) {
-      for (let j = 0; j < n; j++) res[j] = T[j] === STANDARD_TEMPERATURE_K ? hf : hf + res[j]!;
-    } else {
-      for (let j = 0; j < n; j++) {
-        const t = T[j]!;
-        res[j] = t === STANDARD_TEMPERATURE_K ? hf : hf + res[j]! + this.#transitionSum(t, this.#trH);
-      }
+    const res = this.#prepareBatch("enthalpyBatch", T, out);
+    const m = this.#model ?? this.#compile();
+    try {
+      // ΔfH° is added inside the model's loop: one pass over the temperatures
+      m.sensibleEnthalpyBatch(T, res, options, this.hf298);
+    } catch (e) {
+      throw this.#batchError("enthalpyBatch", T, options, e);
     }
+    if (this.#trT.length !== 0) for (let j = 0; j < T.length; j++) res[j] = res[j]! + this.#transitionSum(T[j]!, this.#trH);
     return res;
   }
 
   entropyBatch(T: Float64Array, P?: number, out?: Float64Array, options?: RangeOptions): Float64Array {
     const pt = this.#pressureTerm("entropyBatch", P);
-    const res = this.#prepareBatch("entropyBatch", T, out, options);
+    const res = this.#prepareBatch("entropyBatch", T, out);
     const m = this.#model ?? this.#compile();
-    m.deltaSBatch(STANDARD_TEMPERATURE_K, T, res, EXTEND);
-    // deltaSBatch subtracts the antiderivative at 298.15 K, which the compiled model holds at 0
-    const n = T.length, base = this.s298 - pt + m.sensibleEntropy(STANDARD_TEMPERATURE_K, EXTEND);
-    if (this.#trT.length === 0) {
-      for (let j = 0; j < n; j++) res[j] = base + res[j]!;
-    } else {
-      for (let j = 0; j < n; j++) res[j] = base + res[j]! + this.#transitionSum(T[j]!, this.#trS);
+    try {
+      m.sensibleEntropyBatch(T, res, options, this.s298 - pt);
+    } catch (e) {
+      throw this.#batchError("entropyBatch", T, options, e);
     }
+    if (this.#trT.length !== 0) for (let j = 0; j < T.length; j++) res[j] = res[j]! + this.#transitionSum(T[j]!, this.#trS);
     return res;
   }
 
@@ -260,8 +260,8 @@ class TabulatedSpecies implements Species {
     return this.#gas ? GAS_CONSTANT_J_PER_MOL_K * Math.log(P / STANDARD_PRESSURE_PA) : 0;
   }
 
-  /** Check the arrays and every temperature before anything is written; return the output array. */
-  #prepareBatch(fn: string, T: Float64Array, out: Float64Array | undefined, options: RangeOptions | undefined): Float64Array {
+  /** Check the arrays (the model checks every temperature before it writes anything); return the output array. */
+  #prepareBatch(fn: string, T: Float64Array, out: Float64Array | undefined): Float64Array {
     if (!(T instanceof Float64Array)) {
       throw new RxthermError("INVALID_ARGUMENT", `${fn} (${this.key}) requires the temperatures as a Float64Array`, { species: this.key });
     }
@@ -270,13 +270,20 @@ class TabulatedSpecies implements Species {
         species: this.key, length: T.length, outLength: out instanceof Float64Array ? out.length : undefined,
       });
     }
-    if (!allWithin(T, this.#tMin, this.#tMax)) {
-      for (let j = 0; j < T.length; j++) {
-        const t = T[j]!;
-        if (!(t >= this.#tMin && t <= this.#tMax)) this.#check(fn, t, options, j);
-      }
-    }
     return out ?? new Float64Array(T.length);
+  }
+
+  /**
+   * The model rejected a temperature (before writing anything; species and model share one range):
+   * the same error as the scalar functions, naming this species and function.
+   */
+  #batchError(fn: string, T: Float64Array, options: RangeOptions | undefined, e: unknown): unknown {
+    if (!(e instanceof RxthermError)) return e;
+    for (let j = 0; j < T.length; j++) {
+      const t = T[j]!;
+      if (!(t >= this.#tMin && t <= this.#tMax)) this.#check(fn, t, options, j);
+    }
+    return e;
   }
 
   /** Validate T; true when outside the range and extrapolation is allowed; otherwise throws. */
