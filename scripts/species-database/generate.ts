@@ -174,10 +174,9 @@ export function generateSpeciesDatabase(source: SourceFile): GeneratedDatabase {
     const s298 = Number(polyS(first, T0).toPrecision(12));
     const name = collapse(w.rec.name) || collapse(w.rec.label);
     const casList = w.rec.cas.split(/\s+/).filter((c) => CAS.test(c));
-    // the Hill formula and the key without phase are added as aliases when the database is read
     const plainName = collapse(nameRest(w.rec.name)).replace(/\s*[([].*$/, "");
-    const aliases = unique([collapse(w.rec.label), w.rest, collapse(nameRest(w.rec.name)), plainName, ...casList]
-      .filter((a) => a !== "" && a !== key && a !== name));
+    const aliases = unique([collapse(w.rec.label), w.rest, collapse(nameRest(w.rec.name)), plainName, ...casList, w.hill]
+      .filter((a) => a !== "" && a !== key && a !== name && a !== w.formula));
     const notes = [`Burcat–Ruscic 2005 record "${collapse(w.rec.label)}"${w.parts.length > 1 ? ` (${w.parts.length} records of one phase, chained)` : ""}, origin ${w.rec.source_code || "not stated"}, ${w.rec.date || "undated"}`];
     if (!holds) notes.push("ΔfH° and S° at 298.15 K are those of the polynomial extended to 298.15 K (the phase is outside its range there), so that H(T) and S(T) inside the range are the database's");
     else notes.push("S°(298.15 K) from the polynomial (a7)");

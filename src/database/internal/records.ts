@@ -4,7 +4,6 @@
  * @module
  * @internal
  */
-import { formatFormula } from "../../formula/formatFormula.js";
 import type { Formula, Phase } from "../../formula/types.js";
 import type { CpRange } from "../../heat-capacity/types.js";
 import type { SpeciesParts } from "../../species/libraryFromParts.js";
@@ -20,12 +19,12 @@ type Compact = [
 
 let parsed: readonly SpeciesParts[] | undefined;
 
-/** Every database species as parts (cached; the parts are frozen and shared). */
+/** Every database species as parts (cached and shared; callers copy what they change). */
 export function databaseParts(): readonly SpeciesParts[] {
   if (parsed === undefined) {
     const rows = JSON.parse(BURCAT_RUSCIC_2005_RECORDS) as Compact[];
     const sources = Object.freeze({ hf298: DATASET, s298: DATASET, cp: DATASET });
-    parsed = Object.freeze(rows.map((r) => toParts(r, sources)));
+    parsed = rows.map((r) => toParts(r, sources));
   }
   return parsed;
 }
@@ -34,15 +33,12 @@ function toParts(r: Compact, sources: Readonly<Record<string, string>>): Species
   const [key, text, phase, flat, charge, name, aliases, cas, hf298J, s298, ranges, note] = r;
   const elements: Record<string, number> = {};
   for (let i = 0; i < flat.length; i += 2) elements[flat[i] as string] = flat[i + 1] as number;
+  // parts stay private to this module: only what the species exposes is frozen (the formula); the
+  // species copies its aliases and the heat-capacity model copies the ranges
   const formula: Formula = Object.freeze({ text, elements: Object.freeze(elements), charge, phase });
-  const hill = formatFormula({ text, elements, charge, phase: null });
-  const cpRanges: CpRange[] = ranges.map((g) => Object.freeze({
-    TminK: g[0]!, TmaxK: g[1]!, cp: Object.freeze({ form: "nasa7" as const, a: Object.freeze(g.slice(2)) }),
-  }));
-  return Object.freeze({
-    key, formula, phase, name,
-    aliases: hill === text || aliases.includes(hill) ? aliases : [...aliases, hill],
-    ...(cas !== "" ? { cas } : {}),
+  const cpRanges: CpRange[] = ranges.map((g) => ({ TminK: g[0]!, TmaxK: g[1]!, cp: { form: "nasa7" as const, a: g.slice(2) } }));
+  return {
+    key, formula, phase, name, aliases, ...(cas !== "" ? { cas } : {}),
     dataset: DATASET, note, hf298Exact: hf298J, s298, sources, ranges: cpRanges, transitions: [],
-  });
+  };
 }

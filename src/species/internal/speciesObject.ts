@@ -21,6 +21,8 @@ import { readSpeciesFormula } from "./speciesFormula.js";
 
 const D = /* @__PURE__ */ Decimal.clone({ precision: 34, rounding: Decimal.ROUND_HALF_EVEN });
 const EXTEND: RangeOptions = Object.freeze({ extrapolate: true });
+const NO_TRANSITIONS: readonly SpeciesTransition[] = /* @__PURE__ */ Object.freeze([]);
+const NO_STEPS = /* @__PURE__ */ new Float64Array(0);
 /** Data whose lowest range starts by this temperature (the NASA 300 K convention) are read down to 298.15 K. */
 const NASA_LOW_K = 300;
 
@@ -121,7 +123,7 @@ class TabulatedSpecies implements Species {
     this.hf298 = Number(p.hf298Exact);
     if (p.hf298UncertaintyJPerMol !== undefined) this.hf298Uncertainty = p.hf298UncertaintyJPerMol;
     this.s298 = p.s298;
-    this.sources = Object.freeze({ ...p.sources });
+    this.sources = Object.isFrozen(p.sources) ? p.sources : Object.freeze({ ...p.sources }); // shared when already frozen
     // Data that start between 298.15 K and 300 K (the NASA convention) are read down to 298.15 K
     // with the lowest range's form, so that the reference state itself is inside the range. Data
     // that start higher (a liquid above its melting point) keep their range: 298.15 K is then an
@@ -137,15 +139,21 @@ class TabulatedSpecies implements Species {
     this.#tMax = ranges[ranges.length - 1]!.TmaxK;
     this.range = Object.freeze([this.#tMin, this.#tMax] as const);
     this.#gas = p.phase === "g";
-    const tr = [...p.transitions].sort((a, b) => a.TK - b.TK);
-    this.transitions = Object.freeze(tr.map((t) => Object.freeze({
-      TK: t.TK, dHJPerMol: t.dHKJPerMol * 1000, source: t.source, ...(t.label !== undefined ? { label: t.label } : {}),
-    })));
-    // transitions are counted relative to 298.15 K: above it they add when T passes them,
-    // below it they are removed when T goes under them
-    this.#trT = Float64Array.from(tr.map((t) => t.TK));
-    this.#trH = Float64Array.from(tr.map((t) => t.dHKJPerMol * 1000));
-    this.#trS = Float64Array.from(tr.map((t) => (t.dHKJPerMol * 1000) / t.TK));
+    if (p.transitions.length === 0) {
+      // most species: shared empty values (a library of a thousand species allocates nothing here)
+      this.transitions = NO_TRANSITIONS;
+      this.#trT = this.#trH = this.#trS = NO_STEPS;
+    } else {
+      const tr = [...p.transitions].sort((a, b) => a.TK - b.TK);
+      this.transitions = Object.freeze(tr.map((t) => Object.freeze({
+        TK: t.TK, dHJPerMol: t.dHKJPerMol * 1000, source: t.source, ...(t.label !== undefined ? { label: t.label } : {}),
+      })));
+      // transitions are counted relative to 298.15 K: above it they add when T passes them,
+      // below it they are removed when T goes under them
+      this.#trT = Float64Array.from(tr.map((t) => t.TK));
+      this.#trH = Float64Array.from(tr.map((t) => t.dHKJPerMol * 1000));
+      this.#trS = Float64Array.from(tr.map((t) => (t.dHKJPerMol * 1000) / t.TK));
+    }
     Object.freeze(this);
   }
 
