@@ -6,7 +6,7 @@
  *
  * Data: N2(g), NIST Chemistry WebBook Shomate set (three ranges, 100–6000 K), as in the built-in library.
  */
-import { measure, report, type BenchResult } from "./harness.js";
+import { paired, report } from "./harness.js";
 import { species } from "../src/species/species.js";
 
 const N = 4096;
@@ -53,18 +53,6 @@ function handEntropy(ts: Float64Array, out: Float64Array): Float64Array {
     out[i] = s0 + A * Math.log(T) + T * (s1 + T * (s2 + T * s3)) + sm2 / (T * T);
   }
   return out;
-}
-
-/** Case and baseline in alternating rounds; the round with the median ratio (load drifts on a shared machine). */
-function paired(caseName: string, fn: () => unknown, baseName: string, baseFn: () => unknown, rounds = 5): [BenchResult, BenchResult] {
-  const pairs: [BenchResult, BenchResult][] = [];
-  for (let r = 0; r < rounds; r++) {
-    const b = measure(baseName, baseFn, { batches: 9, warmupMs: 100 });
-    const c = measure(caseName, fn, { batches: 9, warmupMs: 100 });
-    pairs.push([c, b]);
-  }
-  pairs.sort((x, y) => x[0].medianNs / x[1].medianNs - y[0].medianNs / y[1].medianNs);
-  return pairs[Math.floor(pairs.length / 2)]!;
 }
 
 export function run(): void {

@@ -10,6 +10,7 @@ import { species } from "../../src/species/species.js";
 import { heatDuty } from "../../src/energy/heatDuty.js";
 import { adiabaticFlameTemperature } from "../../src/flame/adiabaticFlameTemperature.js";
 import { caught } from "../_helpers/caught.js";
+import { demoData } from "../species/helpers.js";
 
 // NIST-JANAF Thermochemical Tables, 4th ed. (Chase 1998): rows in tests/fixtures/database-janaf.json
 interface Row { T: number; Cp: number; S: number; H_minus_H298: number; dfH: number }
@@ -133,14 +134,7 @@ describe("speciesDatabase({ withBuiltIn: true }): the built-in set over the data
   });
 
   it("user data go on top with createLibrary({ base })", () => {
-    const lib = createLibrary({
-      sources: { pilot: "Pilot methanol reactor data sheet (invented demo scenario)" },
-      species: [{
-        key: "C5H8O2(l)", formula: "C5H8O2", phase: "l", name: "demo solvent",
-        hf298KJPerMol: -390, hf298Source: "pilot", s298JPerMolK: 230, s298Source: "pilot",
-        heatCapacity: { source: "pilot", ranges: [{ TminK: 280, TmaxK: 400, cp: { form: "constant", cpJPerMolK: 180 } }] },
-      }],
-    }, { base: layered });
+    const lib = createLibrary(demoData(), { base: layered }); // invented demo scenario (a pilot methanol reactor)
     expect(lib.get("demo solvent").key).toBe("C5H8O2(l)");
     expect(lib.get("oxetane-C3H6O(g)").key).toBe("oxetane-C3H6O(g)");
     expect(lib.get("CO2(g)").dataset).toBe("nist-janaf");
