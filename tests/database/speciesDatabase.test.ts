@@ -124,7 +124,8 @@ describe("speciesDatabase({ withBuiltIn: true }): the built-in set over the data
     expect(variant.key).toBe("CO2(g)");
     expect(variant.enthalpy(1500)).toBeCloseTo(db.get("CO2(g)").enthalpy(1500), 9);
     // the database key of a paired species finds the built-in entry
-    expect(layered.get("acetone-C3H6O(g)")).toBe(builtInLibrary().get("CH3COCH3(g)"));
+    const acetone = findSpecies({ name: "acetone", phase: "g" })[0]!; // the built-in acetone vapour, whatever its key
+    expect(layered.get("acetone-C3H6O(g)")).toBe(acetone);
   });
 
   it("species only the database holds keep their key; every built-in key stays", () => {
