@@ -8,6 +8,7 @@ import type { CpRange, RangeOptions } from "./types.js";
 // CommonJS interop of TypeScript runners) turn every imported name into a getter call.
 const { REFERENCE_T_K, STRIDE, H_0, H_1, H_2, H_3, H_4, H_5, H_INV, H_LN, S_0 } = compiled;
 const { CP_0, CP_1, CP_2, CP_3, CP_4, CP_M1, CP_M2 } = compiled;
+const { S_LN, S_INV, S_INV2, S_1, S_2, S_3, S_4 } = compiled;
 const { absoluteConstants, cpAt, hAt, sAt, segmentIndex, writeSegment, prepareRanges, rangePieces } = compiled;
 
 /**
@@ -315,20 +316,20 @@ class PiecewiseHeatCapacity implements HeatCapacity {
   // ── batch evaluations ─────────────────────────────────────────────────────
   cpBatch(temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions): Float64Array {
     const res = this.prepareBatch("cpBatch", temperaturesK, out, options);
-    const k = this.k, len = temperaturesK.length;
-    // coefficients in locals while T stays in one segment, as in hBatch
-    let lo = Infinity, hi = -Infinity;
-    let c0 = 0, c1 = 0, c2 = 0, c3 = 0, c4 = 0, m1 = 0, m2 = 0;
-    for (let j = 0; j < len; j++) {
-      const T = temperaturesK[j]!;
-      if (!(T > lo && T <= hi)) {
-        const i = segmentIndex(this.upper, this.n, T);
-        lo = this.lowerX[i]!; hi = this.upperX[i]!;
-        const o = i * STRIDE;
-        c0 = k[o + CP_0]!; c1 = k[o + CP_1]!; c2 = k[o + CP_2]!; c3 = k[o + CP_3]!; c4 = k[o + CP_4]!; m1 = k[o + CP_M1]!; m2 = k[o + CP_M2]!;
+    const k = this.k, len = temperaturesK.length, n = this.n;
+    // one run per segment with the coefficients in locals, as in hBatch
+    let j = 0;
+    while (j < len) {
+      const i = segmentIndex(this.upper, n, temperaturesK[j]!);
+      const lo = this.lowerX[i]!, hi = this.upperX[i]!;
+      const o = i * STRIDE;
+      const c0 = k[o + CP_0]!, c1 = k[o + CP_1]!, c2 = k[o + CP_2]!, c3 = k[o + CP_3]!, c4 = k[o + CP_4]!, m1 = k[o + CP_M1]!, m2 = k[o + CP_M2]!;
+      for (; j < len; j++) {
+        const T = temperaturesK[j]!;
+        if (!(T > lo && T <= hi)) break;
+        const inv = 1 / T;
+        res[j] = c0 + T * (c1 + T * (c2 + T * (c3 + T * c4))) + inv * (m1 + inv * m2);
       }
-      const inv = 1 / T;
-      res[j] = c0 + T * (c1 + T * (c2 + T * (c3 + T * c4))) + inv * (m1 + inv * m2);
     }
     return res;
   }
@@ -373,36 +374,49 @@ class PiecewiseHeatCapacity implements HeatCapacity {
   /** Hot loop of the enthalpy batches: ∫Cp dT antiderivative minus `minus`, J/mol. */
   private hBatch(ts: Float64Array, res: Float64Array, minus: number): void {
     const k = this.k, len = ts.length, n = this.n;
-    // Coefficients are held in locals while T stays in one segment (a temperature sweep or an
-    // iteration stays in one segment for long runs); a new segment costs one lookup.
-    let lo = Infinity, hi = -Infinity;
-    let h0 = 0, h1 = 0, h2 = 0, h3 = 0, h4 = 0, h5 = 0, hi1 = 0, hl = 0;
-    for (let j = 0; j < len; j++) {
-      const T = ts[j]!;
-      if (!(T > lo && T <= hi)) {
-        const i = segmentIndex(this.upper, n, T);
-        lo = this.lowerX[i]!; hi = this.upperX[i]!;
-        const o = i * STRIDE;
-        h0 = k[o + H_0]! - minus; h1 = k[o + H_1]!; h2 = k[o + H_2]!; h3 = k[o + H_3]!;
-        h4 = k[o + H_4]!; h5 = k[o + H_5]!; hi1 = k[o + H_INV]!; hl = k[o + H_LN]!;
+    // One run per segment: the coefficients go into locals and an inner loop without the ln-term test
+    // runs while T stays in the segment (a temperature sweep or an iteration stays in one segment for
+    // long runs); leaving it ends the run and costs one lookup.
+    let j = 0;
+    while (j < len) {
+      const i = segmentIndex(this.upper, n, ts[j]!);
+      const lo = this.lowerX[i]!, hi = this.upperX[i]!;
+      const o = i * STRIDE;
+      const h0 = k[o + H_0]! - minus, h1 = k[o + H_1]!, h2 = k[o + H_2]!, h3 = k[o + H_3]!;
+      const h4 = k[o + H_4]!, h5 = k[o + H_5]!, hi1 = k[o + H_INV]!, hl = k[o + H_LN]!;
+      if (hl === 0) {
+        for (; j < len; j++) {
+          const T = ts[j]!;
+          if (!(T > lo && T <= hi)) break;
+          res[j] = h0 + T * (h1 + T * (h2 + T * (h3 + T * (h4 + T * h5)))) + hi1 / T;
+        }
+      } else {
+        for (; j < len; j++) {
+          const T = ts[j]!;
+          if (!(T > lo && T <= hi)) break;
+          res[j] = h0 + T * (h1 + T * (h2 + T * (h3 + T * (h4 + T * h5)))) + hi1 / T + hl * Math.log(T);
+        }
       }
-      res[j] = hl === 0
-        ? h0 + T * (h1 + T * (h2 + T * (h3 + T * (h4 + T * h5)))) + hi1 / T
-        : h0 + T * (h1 + T * (h2 + T * (h3 + T * (h4 + T * h5)))) + hi1 / T + hl * Math.log(T);
     }
   }
 
   /** Hot loop of the entropy batches: ∫Cp/T dT antiderivative minus `minus`, J/(mol·K). */
   private sBatch(ts: Float64Array, res: Float64Array, minus: number): void {
-    const k = this.k, len = ts.length;
-    let lo = Infinity, hi = -Infinity, o = 0;
-    for (let j = 0; j < len; j++) {
-      const T = ts[j]!;
-      if (!(T > lo && T <= hi)) {
-        const i = segmentIndex(this.upper, this.n, T);
-        lo = this.lowerX[i]!; hi = this.upperX[i]!; o = i * STRIDE;
+    const k = this.k, len = ts.length, n = this.n;
+    // one run per segment with the coefficients in locals, as in hBatch
+    let j = 0;
+    while (j < len) {
+      const i = segmentIndex(this.upper, n, ts[j]!);
+      const lo = this.lowerX[i]!, hi = this.upperX[i]!;
+      const o = i * STRIDE;
+      const s0 = k[o + S_0]! - minus, sl = k[o + S_LN]!, s1 = k[o + S_1]!, s2 = k[o + S_2]!, s3 = k[o + S_3]!, s4 = k[o + S_4]!;
+      const si1 = k[o + S_INV]!, si2 = k[o + S_INV2]!;
+      for (; j < len; j++) {
+        const T = ts[j]!;
+        if (!(T > lo && T <= hi)) break;
+        const inv = 1 / T;
+        res[j] = s0 + sl * Math.log(T) + T * (s1 + T * (s2 + T * (s3 + T * s4))) + inv * (si1 + inv * si2);
       }
-      res[j] = sAt(k, o, T) - minus;
     }
   }
 
