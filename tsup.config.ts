@@ -6,8 +6,11 @@ const pkg = JSON.parse(readFileSync(new URL("./package.json", import.meta.url), 
 // ESM + CJS + .d.ts; no side effects at import (package.json "sideEffects": false).
 export default defineConfig([
   {
-    entry: { index: "src/index.ts" },
+    // rxtherm/database is its own entry: the main entry never bundles or loads its data
+    entry: { index: "src/index.ts", database: "src/database/index.ts" },
     format: ["esm", "cjs"],
+    // shared code in one chunk for both formats, so that rxtherm and rxtherm/database share one species layer
+    splitting: true,
     dts: true,
     // keep the command line built by the second config (the two builds run side by side)
     clean: ["!cli.js", "!cli.js.map"],

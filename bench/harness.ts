@@ -141,3 +141,23 @@ export function runPeer<T>(script: string, input: unknown): T | null {
   }
   return JSON.parse(r.stdout) as T;
 }
+
+/**
+ * Measure a case and its baseline in alternating rounds and keep the round with the median ratio:
+ * on a shared machine the load drifts between measurements, and pairing keeps both under the same load.
+ * @param caseName - label of the library case
+ * @param fn - the library case
+ * @param baseName - label of the baseline
+ * @param baseFn - the baseline
+ * @param rounds - number of alternating rounds
+ */
+export function paired(caseName: string, fn: () => unknown, baseName: string, baseFn: () => unknown, rounds = 5): [BenchResult, BenchResult] {
+  const pairs: [BenchResult, BenchResult][] = [];
+  for (let r = 0; r < rounds; r++) {
+    const b = measure(baseName, baseFn, { batches: 9, warmupMs: 100 });
+    const c = measure(caseName, fn, { batches: 9, warmupMs: 100 });
+    pairs.push([c, b]);
+  }
+  pairs.sort((x, y) => x[0].medianNs / x[1].medianNs - y[0].medianNs / y[1].medianNs);
+  return pairs[Math.floor(pairs.length / 2)]!;
+}

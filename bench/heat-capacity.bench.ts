@@ -7,7 +7,7 @@
  * Data: NIST Chemistry WebBook Shomate sets (N2) and GRI-Mech 3.0 NASA-7 sets (O2), as in
  * tests/fixtures/heat-capacity-*.json.
  */
-import { measure, report, type BenchResult } from "./harness.js";
+import { paired, report, type BenchResult } from "./harness.js";
 import { createHeatCapacity } from "../src/heat-capacity/createHeatCapacity.js";
 
 const N = 4096;
@@ -80,21 +80,6 @@ function inlinedNasa7x2(ts: Float64Array, out: Float64Array): Float64Array {
       : -9050 + T * (27.293 + T * (0.0061655 + T * (-2.1007e-9 + T * (4.354e-13 - T * 3.604e-17))));
   }
   return out;
-}
-
-/**
- * Measure a case and its baseline in alternating rounds and keep the round with the median ratio:
- * on a shared machine the load drifts between measurements, and pairing keeps both under the same load.
- */
-function paired(caseName: string, fn: () => unknown, baseName: string, baseFn: () => unknown, rounds = 5): [BenchResult, BenchResult] {
-  const pairs: [BenchResult, BenchResult][] = [];
-  for (let r = 0; r < rounds; r++) {
-    const b = measure(baseName, baseFn, { batches: 9, warmupMs: 100 });
-    const c = measure(caseName, fn, { batches: 9, warmupMs: 100 });
-    pairs.push([c, b]);
-  }
-  pairs.sort((x, y) => x[0].medianNs / x[1].medianNs - y[0].medianNs / y[1].medianNs);
-  return pairs[Math.floor(pairs.length / 2)]!;
 }
 
 function line(title: string, [r, base]: [BenchResult, BenchResult]): void {

@@ -99,6 +99,8 @@ export type {
 export { species } from "./species/species.js";
 export { noteExtrapolation } from "./species/noteExtrapolation.js";
 export type { ExtrapolatedPoint } from "./species/noteExtrapolation.js";
+export { findSpecies } from "./species/findSpecies.js";
+export type { SpeciesQuery } from "./species/findSpecies.js";
 export { createLibrary } from "./species/createLibrary.js";
 export type { CreateLibraryOptions } from "./species/createLibrary.js";
 export { builtInLibrary } from "./species/builtInLibrary.js";

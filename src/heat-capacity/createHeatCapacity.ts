@@ -1,5 +1,6 @@
 import { RxthermError } from "../errors.js";
 import { slipHintDetails, withSlipHint } from "../units.js";
+import { allWithin } from "../numeric/allWithin.js";
 import * as compiled from "./internal/cpCompile.js";
 import type { CpRange, RangeOptions } from "./types.js";
 
@@ -14,6 +15,9 @@ const H_INV = compiled.H_INV, H_LN = compiled.H_LN;
 const absoluteConstants = compiled.absoluteConstants, cpAt = compiled.cpAt, hAt = compiled.hAt, sAt = compiled.sAt;
 const segmentIndex = compiled.segmentIndex, writeSegment = compiled.writeSegment;
 const prepareRanges = compiled.prepareRanges, rangePieces = compiled.rangePieces;
+const CP_0 = compiled.CP_0, CP_1 = compiled.CP_1, CP_2 = compiled.CP_2, CP_3 = compiled.CP_3, CP_4 = compiled.CP_4;
+const CP_M1 = compiled.CP_M1, CP_M2 = compiled.CP_M2;
+const S_LN = compiled.S_LN, S_INV = compiled.S_INV, S_INV2 = compiled.S_INV2, S_1 = compiled.S_1, S_2 = compiled.S_2, S_3 = compiled.S_3, S_4 = compiled.S_4;
 
 /**
  * Options of {@link createHeatCapacity}.
@@ -111,8 +115,16 @@ export interface HeatCapacity {
   deltaHBatch(fromK: number, temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions): Float64Array;
   /** ∫Cp/T dT from `fromK` to every temperature of `temperaturesK` into `out`, J/(mol·K). */
   deltaSBatch(fromK: number, temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions): Float64Array;
-  /** ∫Cp dT from 298.15 K to every temperature of `temperaturesK` into `out`, J/mol. */
-  sensibleEnthalpyBatch(temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions): Float64Array;
+  /**
+   * ∫Cp dT from 298.15 K to every temperature of `temperaturesK` into `out`, J/mol, plus `offsetJPerMol`
+   * (default 0; e.g. ΔfH°(298.15 K) for absolute enthalpies, added inside the same loop).
+   */
+  sensibleEnthalpyBatch(temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions, offsetJPerMol?: number): Float64Array;
+  /**
+   * ∫Cp/T dT from 298.15 K to every temperature of `temperaturesK` into `out`, J/(mol·K), plus
+   * `offsetJPerMolK` (default 0; e.g. S°(298.15 K) for absolute entropies).
+   */
+  sensibleEntropyBatch(temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions, offsetJPerMolK?: number): Float64Array;
 }
 
 /**
@@ -312,15 +324,20 @@ class PiecewiseHeatCapacity implements HeatCapacity {
   // ── batch evaluations ─────────────────────────────────────────────────────
   cpBatch(temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions): Float64Array {
     const res = this.prepareBatch("cpBatch", temperaturesK, out, options);
-    const k = this.k, len = temperaturesK.length;
-    let lo = Infinity, hi = -Infinity, o = 0;
-    for (let j = 0; j < len; j++) {
-      const T = temperaturesK[j]!;
-      if (!(T > lo && T <= hi)) {
-        const i = segmentIndex(this.upper, this.n, T);
-        lo = this.lowerX[i]!; hi = this.upperX[i]!; o = i * STRIDE;
+    const k = this.k, len = temperaturesK.length, n = this.n;
+    // one run per segment with the coefficients in locals, as in hBatch
+    let j = 0;
+    while (j < len) {
+      const i = segmentIndex(this.upper, n, temperaturesK[j]!);
+      const lo = this.lowerX[i]!, hi = this.upperX[i]!;
+      const o = i * STRIDE;
+      const c0 = k[o + CP_0]!, c1 = k[o + CP_1]!, c2 = k[o + CP_2]!, c3 = k[o + CP_3]!, c4 = k[o + CP_4]!, m1 = k[o + CP_M1]!, m2 = k[o + CP_M2]!;
+      for (; j < len; j++) {
+        const T = temperaturesK[j]!;
+        if (!(T > lo && T <= hi)) break;
+        const inv = 1 / T;
+        res[j] = c0 + T * (c1 + T * (c2 + T * (c3 + T * c4))) + inv * (m1 + inv * m2);
       }
-      res[j] = cpAt(k, o, T);
     }
     return res;
   }
@@ -332,25 +349,22 @@ class PiecewiseHeatCapacity implements HeatCapacity {
     return res;
   }
 
-  sensibleEnthalpyBatch(temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions): Float64Array {
+  sensibleEnthalpyBatch(temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions, offsetJPerMol = 0): Float64Array {
     const res = this.prepareBatch("sensibleEnthalpyBatch", temperaturesK, out, options);
-    this.hBatch(temperaturesK, res, 0);
+    this.hBatch(temperaturesK, res, -offsetJPerMol);
     return res;
   }
 
   deltaSBatch(fromK: number, temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions): Float64Array {
     this.check("deltaSBatch", fromK, options);
     const res = this.prepareBatch("deltaSBatch", temperaturesK, out, options);
-    const k = this.k, len = temperaturesK.length, s0 = this.s(fromK);
-    let lo = Infinity, hi = -Infinity, o = 0;
-    for (let j = 0; j < len; j++) {
-      const T = temperaturesK[j]!;
-      if (!(T > lo && T <= hi)) {
-        const i = segmentIndex(this.upper, this.n, T);
-        lo = this.lowerX[i]!; hi = this.upperX[i]!; o = i * STRIDE;
-      }
-      res[j] = sAt(k, o, T) - s0;
-    }
+    this.sBatch(temperaturesK, res, this.s(fromK));
+    return res;
+  }
+
+  sensibleEntropyBatch(temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions, offsetJPerMolK = 0): Float64Array {
+    const res = this.prepareBatch("sensibleEntropyBatch", temperaturesK, out, options);
+    this.sBatch(temperaturesK, res, -offsetJPerMolK);
     return res;
   }
 
@@ -368,22 +382,49 @@ class PiecewiseHeatCapacity implements HeatCapacity {
   /** Hot loop of the enthalpy batches: ∫Cp dT antiderivative minus `minus`, J/mol. */
   private hBatch(ts: Float64Array, res: Float64Array, minus: number): void {
     const k = this.k, len = ts.length, n = this.n;
-    // Coefficients are held in locals while T stays in one segment (a temperature sweep or an
-    // iteration stays in one segment for long runs); a new segment costs one lookup.
-    let lo = Infinity, hi = -Infinity;
-    let h0 = 0, h1 = 0, h2 = 0, h3 = 0, h4 = 0, h5 = 0, hi1 = 0, hl = 0;
-    for (let j = 0; j < len; j++) {
-      const T = ts[j]!;
-      if (!(T > lo && T <= hi)) {
-        const i = segmentIndex(this.upper, n, T);
-        lo = this.lowerX[i]!; hi = this.upperX[i]!;
-        const o = i * STRIDE;
-        h0 = k[o + H_0]! - minus; h1 = k[o + H_1]!; h2 = k[o + H_2]!; h3 = k[o + H_3]!;
-        h4 = k[o + H_4]!; h5 = k[o + H_5]!; hi1 = k[o + H_INV]!; hl = k[o + H_LN]!;
+    // One run per segment: the coefficients go into locals and an inner loop without the ln-term test
+    // runs while T stays in the segment (a temperature sweep or an iteration stays in one segment for
+    // long runs); leaving it ends the run and costs one lookup.
+    let j = 0;
+    while (j < len) {
+      const i = segmentIndex(this.upper, n, ts[j]!);
+      const lo = this.lowerX[i]!, hi = this.upperX[i]!;
+      const o = i * STRIDE;
+      const h0 = k[o + H_0]! - minus, h1 = k[o + H_1]!, h2 = k[o + H_2]!, h3 = k[o + H_3]!;
+      const h4 = k[o + H_4]!, h5 = k[o + H_5]!, hi1 = k[o + H_INV]!, hl = k[o + H_LN]!;
+      if (hl === 0) {
+        for (; j < len; j++) {
+          const T = ts[j]!;
+          if (!(T > lo && T <= hi)) break;
+          res[j] = h0 + T * (h1 + T * (h2 + T * (h3 + T * (h4 + T * h5)))) + hi1 / T;
+        }
+      } else {
+        for (; j < len; j++) {
+          const T = ts[j]!;
+          if (!(T > lo && T <= hi)) break;
+          res[j] = h0 + T * (h1 + T * (h2 + T * (h3 + T * (h4 + T * h5)))) + hi1 / T + hl * Math.log(T);
+        }
       }
-      res[j] = hl === 0
-        ? h0 + T * (h1 + T * (h2 + T * (h3 + T * (h4 + T * h5)))) + hi1 / T
-        : h0 + T * (h1 + T * (h2 + T * (h3 + T * (h4 + T * h5)))) + hi1 / T + hl * Math.log(T);
+    }
+  }
+
+  /** Hot loop of the entropy batches: ∫Cp/T dT antiderivative minus `minus`, J/(mol·K). */
+  private sBatch(ts: Float64Array, res: Float64Array, minus: number): void {
+    const k = this.k, len = ts.length, n = this.n;
+    // one run per segment with the coefficients in locals, as in hBatch
+    let j = 0;
+    while (j < len) {
+      const i = segmentIndex(this.upper, n, ts[j]!);
+      const lo = this.lowerX[i]!, hi = this.upperX[i]!;
+      const o = i * STRIDE;
+      const s0 = k[o + S_0]! - minus, sl = k[o + S_LN]!, s1 = k[o + S_1]!, s2 = k[o + S_2]!, s3 = k[o + S_3]!, s4 = k[o + S_4]!;
+      const si1 = k[o + S_INV]!, si2 = k[o + S_INV2]!;
+      for (; j < len; j++) {
+        const T = ts[j]!;
+        if (!(T > lo && T <= hi)) break;
+        const inv = 1 / T;
+        res[j] = s0 + sl * Math.log(T) + T * (s1 + T * (s2 + T * (s3 + T * s4))) + inv * (si1 + inv * si2);
+      }
     }
   }
 
@@ -436,24 +477,4 @@ class PiecewiseHeatCapacity implements HeatCapacity {
       { label: this.label, T, rangeIndex, form: r.cp.form },
     );
   }
-}
-
-/**
- * True when every value of `ts` lies in [lo, hi] (false for NaN). Unrolled by four: this up-front
- * check is what lets the batch APIs promise that nothing is written when a temperature is bad, and
- * unrolling halves its cost next to the evaluation loop.
- */
-function allWithin(ts: Float64Array, lo: number, hi: number): boolean {
-  const n = ts.length;
-  const m = n - (n & 3);
-  let j = 0;
-  for (; j < m; j += 4) {
-    const a = ts[j]!, b = ts[j + 1]!, c = ts[j + 2]!, d = ts[j + 3]!;
-    if (!(a >= lo && a <= hi && b >= lo && b <= hi && c >= lo && c <= hi && d >= lo && d <= hi)) return false;
-  }
-  for (; j < n; j++) {
-    const a = ts[j]!;
-    if (!(a >= lo && a <= hi)) return false;
-  }
-  return true;
 }

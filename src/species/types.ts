@@ -17,6 +17,8 @@ export interface Species {
   readonly phase: Phase;
   /** Common name, when known. */
   readonly name?: string;
+  /** CAS registry number, when the data give one (e.g. `"124-38-9"`). */
+  readonly cas?: string;
   /** Standard enthalpy of formation at 298.15 K, J/mol. */
   readonly hf298: number;
   /** Standard enthalpy of formation at 298.15 K as exact decimal text in J/mol, for exact Hess sums. */
@@ -45,6 +47,28 @@ export interface Species {
   readonly note?: string;
   /** Phase transitions inside the Cp ranges (T in K, ΔH in J/mol), in increasing T. */
   readonly transitions: readonly SpeciesTransition[];
+  /**
+   * Cp°(T) at every temperature of `T` (K) into `out` (allocated when omitted), J/(mol·K).
+   *
+   * Every temperature is checked before anything is written: one outside {@link Species.range}
+   * throws `OUT_OF_RANGE` (details `{ species, T, range, index }`) unless `{ extrapolate: true }`;
+   * one that is not a finite number above 0 K throws `INVALID_ARGUMENT`; `out` is then untouched.
+   * Sorted or slowly varying temperatures are fastest (the range lookup is skipped while T stays in one range).
+   */
+  cpBatch(T: Float64Array, out?: Float64Array, options?: RangeOptions): Float64Array;
+  /**
+   * H°(T) = ΔfH°(298.15 K) + ∫Cp dT at every temperature of `T` (K) into `out` (allocated when
+   * omitted), J/mol; the same values as {@link Species.enthalpy}, with the same checks as
+   * {@link Species.cpBatch} (nothing written when a temperature is rejected).
+   */
+  enthalpyBatch(T: Float64Array, out?: Float64Array, options?: RangeOptions): Float64Array;
+  /**
+   * S(T, P) at every temperature of `T` (K) into `out` (allocated when omitted), J/(mol·K); for
+   * gases S°(T) − R·ln(P/P°), P° = 1 bar; the same values as {@link Species.entropy}, with the same
+   * checks as {@link Species.cpBatch} (nothing written when a temperature or P is rejected).
+   * @defaultValue P = 100 000 Pa
+   */
+  entropyBatch(T: Float64Array, P?: number, out?: Float64Array, options?: RangeOptions): Float64Array;
   /** Cp°, H°, S° and G° at once, with whether T lay outside the data range (see {@link SpeciesEvaluation}). */
   evaluate(T: number, P?: number, options?: RangeOptions): SpeciesEvaluation;
 }

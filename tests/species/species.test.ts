@@ -2,6 +2,7 @@ import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { test, fc } from "../_helpers/property.js";
 import { species } from "../../src/species/species.js";
+import { builtInLibrary } from "../../src/species/builtInLibrary.js";
 import { GAS_CONSTANT_J_PER_MOL_K } from "../../src/units.js";
 import { caught } from "../_helpers/caught.js";
 
@@ -237,5 +238,104 @@ describe("Species invariants (fast-check)", () => {
     const d = sp.entropy(T) - sp.entropy(T, P);
     if (sp.phase === "g") expect(d).toBeCloseTo(GAS_CONSTANT_J_PER_MOL_K * Math.log(P / 1e5), 9);
     else expect(d).toBe(0);
+  });
+});
+
+describe("Species batch evaluation: enthalpyBatch, cpBatch, entropyBatch", () => {
+  const withTransition = () => builtInLibrary().all().find((s) => s.transitions.length > 0)!;
+
+  it("species(\"CO2(g)\").enthalpyBatch gives the scalar values; 1000 K matches NIST-JANAF", () => {
+    const co2 = species("CO2(g)");
+    const T = Float64Array.from([298.15, 500, 1000, 1500, 2500]);
+    const h = co2.enthalpyBatch(T);
+    // NIST-JANAF 4th ed. 1998, table C-095: ΔfH° = −393.522 kJ/mol, H − H298 = 33.397 kJ/mol at 1000 K
+    expect(h[2]).toBeCloseTo(-393522 + 33397, -1);
+    expect(h[0]).toBeCloseTo(co2.hf298, 6); // within rounding: the scalar returns ΔfH° exactly at 298.15 K
+    T.forEach((t, i) => {
+      expect(h[i]).toBeCloseTo(co2.enthalpy(t), 6);
+    });
+    const cp = co2.cpBatch(T);
+    const s = co2.entropyBatch(T);
+    const s10 = co2.entropyBatch(T, 1e6);
+    T.forEach((t, i) => {
+      expect(cp[i]).toBeCloseTo(co2.cp(t), 10);
+      expect(s[i]).toBeCloseTo(co2.entropy(t), 9);
+      expect(s10[i]).toBeCloseTo(co2.entropy(t, 1e6), 9);
+    });
+    // NIST-JANAF 4th ed. 1998, table C-095: Cp = 54.308 J/(mol·K) and S° = 269.299 J/(mol·K) at 1000 K
+    expect(cp[2]).toBeCloseTo(54.308, 1);
+    expect(s[2]).toBeCloseTo(269.299, 1);
+  });
+
+  it("writes into out when given and returns it; allocates otherwise", () => {
+    const T = Float64Array.from([300, 400]);
+    const out = new Float64Array(3).fill(7);
+    expect(species("N2(g)").enthalpyBatch(T, out)).toBe(out);
+    expect(out[2]).toBe(7);
+    expect(species("N2(g)").cpBatch(T)).toHaveLength(2);
+  });
+
+  it("adds the transition steps like the scalar enthalpy and entropy (a species with a phase transition)", () => {
+    const sp = withTransition();
+    const [lo, hi] = sp.range;
+    const T = Float64Array.from({ length: 41 }, (_, i) => lo + ((hi - lo) * i) / 40);
+    const h = sp.enthalpyBatch(T);
+    const s = sp.entropyBatch(T);
+    T.forEach((t, i) => {
+      expect(h[i]).toBeCloseTo(sp.enthalpy(t), 6);
+      expect(s[i]).toBeCloseTo(sp.entropy(t), 9);
+    });
+  });
+
+  it("a temperature out of range throws OUT_OF_RANGE naming the function, species and index; nothing is written", () => {
+    const n2 = species("N2(g)");
+    const out = new Float64Array(3).fill(-1);
+    const e = caught(() => n2.enthalpyBatch(Float64Array.from([300, 400, 1e5]), out));
+    expect(e.code).toBe("OUT_OF_RANGE");
+    expect(e.message).toContain("enthalpyBatch (N2(g))");
+    expect(e.details).toMatchObject({ species: "N2(g)", T: 1e5, index: 2, range: n2.range });
+    expect([...out]).toEqual([-1, -1, -1]);
+    expect(caught(() => n2.cpBatch(Float64Array.from([Number.NaN]))).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => n2.entropyBatch(Float64Array.from([300]), -1)).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => n2.cpBatch([300] as unknown as Float64Array)).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => n2.cpBatch(Float64Array.from([300, 400]), new Float64Array(1))).code).toBe("INVALID_ARGUMENT");
+  });
+
+  it("{ extrapolate: true } evaluates outside the range like the scalar functions", () => {
+    const n2 = species("N2(g)");
+    const T = Float64Array.from([n2.range[1] + 500]);
+    expect(n2.enthalpyBatch(T, undefined, { extrapolate: true })[0]).toBeCloseTo(n2.enthalpy(T[0]!, { extrapolate: true }), 6);
+  });
+
+  it("does not change the temperatures", () => {
+    const T = Float64Array.from([300, 800, 1200]);
+    species("CO2(g)").enthalpyBatch(T);
+    species("CO2(g)").entropyBatch(T, 2e5);
+    expect([...T]).toEqual([300, 800, 1200]);
+  });
+
+  test.prop([fc.constantFrom("N2(g)", "CO2(g)", "H2O(g)", "CH4(g)", "H2O(l)"), fc.array(fc.double({ min: 0, max: 1, noNaN: true }), { minLength: 1, maxLength: 40 })])(
+    "batch = scalar at every temperature, sorted or not", (k, fs) => {
+      const sp = species(k);
+      const [lo, hi] = sp.range;
+      const T = Float64Array.from(fs.map((f) => lo + f * (hi - lo)));
+      const h = sp.enthalpyBatch(T), c = sp.cpBatch(T), s = sp.entropyBatch(T);
+      T.forEach((t, i) => {
+        expect(Math.abs(h[i]! - sp.enthalpy(t))).toBeLessThan(1e-9 * Math.abs(sp.enthalpy(t)) + 1e-6);
+        expect(Math.abs(c[i]! - sp.cp(t))).toBeLessThan(1e-12 * sp.cp(t));
+        expect(Math.abs(s[i]! - sp.entropy(t))).toBeLessThan(1e-10 * sp.entropy(t));
+      });
+    });
+});
+
+describe("Species objects expose only their documented fields", () => {
+  it("no private state among the enumerable properties (cpRanges, model, trT... are private)", () => {
+    const documented = new Set(["key", "formula", "phase", "name", "aliases", "cas", "dataset", "note", "hf298", "hf298Exact",
+      "hf298Uncertainty", "s298", "range", "sources", "transitions"]);
+    for (const sp of builtInLibrary().all()) {
+      for (const k of Object.keys(sp)) expect(documented.has(k), `${sp.key}.${k}`).toBe(true);
+      expect(Object.isFrozen(sp)).toBe(true);
+    }
+    expect(JSON.parse(JSON.stringify(species("N2(g)")))).not.toHaveProperty("cpRanges");
   });
 });

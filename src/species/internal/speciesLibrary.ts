@@ -7,6 +7,7 @@
  */
 import { RxthermError } from "../../errors.js";
 import type { Library, LibraryGetOptions, Species } from "../types.js";
+import { queryFormula, sameComposition } from "./composition.js";
 
 /** All entries of one key: the default and every data-set variant. */
 export interface KeyRecord {
@@ -16,6 +17,10 @@ export interface KeyRecord {
   /** Data-set label of the default entry. */
   readonly defaultDataset: string;
 }
+
+/** What an UNKNOWN_SPECIES message adds after the close matches: where else to look. */
+export const DEFAULT_MISSING_HINT =
+  "search by formula, name or CAS number with findSpecies(query, library), or look in the opt-in database (speciesDatabase() from rxtherm/database, about 1,300 species)";
 
 /** Label used for an entry without a dataset. */
 export const NO_DATASET = "user";
@@ -31,9 +36,12 @@ export class SpeciesLibrary implements Library {
   /** formula text and key-without-phase → keys */
   private readonly formulas: ReadonlyMap<string, readonly string[]>;
   private readonly sortedKeys: readonly string[];
+  /** Where else to look, added to UNKNOWN_SPECIES messages. */
+  private readonly missingHint: string;
 
-  constructor(records: Map<string, KeyRecord>, sources: Record<string, string>) {
+  constructor(records: Map<string, KeyRecord>, sources: Record<string, string>, missingHint: string = DEFAULT_MISSING_HINT) {
     this.records = records;
+    this.missingHint = missingHint;
     this.sourceTexts = Object.freeze({ ...sources });
     const names = new Map<string, string[]>();
     const formulas = new Map<string, string[]>();
@@ -60,6 +68,11 @@ export class SpeciesLibrary implements Library {
   /** The key records (for merging). */
   recordMap(): ReadonlyMap<string, KeyRecord> {
     return this.records;
+  }
+
+  /** The hint of UNKNOWN_SPECIES messages (for merging). */
+  hint(): string {
+    return this.missingHint;
   }
 
   /** The source texts (for merging). */
@@ -161,15 +174,24 @@ export class SpeciesLibrary implements Library {
     const suggestions = this.suggest(q);
     throw new RxthermError(
       "UNKNOWN_SPECIES",
-      `library.get: no species ${JSON.stringify(q)} in the library${suggestions.length > 0 ? `; did you mean ${suggestions.join(", ")}?` : ""}`,
+      `library.get: no species ${JSON.stringify(q)} in the library${suggestions.length > 0 ? ` (did you mean ${suggestions.join(", ")}?)` : ""}; ${this.missingHint}`,
       { key: q, suggestions },
     );
   }
 
-  /** Up to five keys whose key, formula or name is close to the query (edit distance, case-insensitive). */
+  /**
+   * Up to five keys: first those of the same composition when the query reads as a formula (element
+   * order ignored, `"OCH2"` → `CH2O(g)`), then those whose key, formula or name is close to the query
+   * (edit distance, case-insensitive).
+   */
   private suggest(q: string): string[] {
     const target = q.toLowerCase();
     const scored: { key: string; d: number }[] = [];
+    const m = PHASE_SUFFIX.exec(q);
+    const f = queryFormula(m === null ? q : m[1]!.trim());
+    if (f !== null) {
+      for (const key of this.sortedKeys) if (sameComposition(this.records.get(key)!.defaultSpecies.formula, f)) scored.push({ key, d: -1 });
+    }
     const consider = (text: string, key: string): void => {
       const d = editDistance(target, text.toLowerCase());
       const limit = Math.max(1, Math.min(3, Math.floor(text.length / 3)));
@@ -190,6 +212,7 @@ export function mergeLibrary(
   base: SpeciesLibrary | null,
   entries: readonly { species: Species; alternative: boolean }[],
   sources: Record<string, string>,
+  missingHint?: string,
 ): SpeciesLibrary {
   const records = new Map<string, KeyRecord>(base?.recordMap() ?? []);
   for (const { species, alternative } of entries) {
@@ -212,7 +235,7 @@ export function mergeLibrary(
     }
     records.set(species.key, Object.freeze({ key: species.key, byDataset, defaultSpecies: def, defaultDataset: defDataset }));
   }
-  return new SpeciesLibrary(records, { ...(base?.sourceMap() ?? {}), ...sources });
+  return new SpeciesLibrary(records, { ...(base?.sourceMap() ?? {}), ...sources }, missingHint ?? base?.hint());
 }
 
 function stripPhase(key: string): string {
