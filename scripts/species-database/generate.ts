@@ -29,6 +29,7 @@ interface SourceRecord {
   low: number[];
   high: number[];
   hf298_kJ_per_mol: number;
+  hf298_note?: string[];
   source_code: string;
   date: string;
   selfcheck: string;
@@ -86,6 +87,8 @@ export function readSource(text: string): SourceFile {
 export function generateSpeciesDatabase(source: SourceFile): GeneratedDatabase {
   const skipped: { label: string; phase: string; why: string }[] = [];
   const fixed: { label: string; what: string }[] = [];
+  /** Records whose stated ΔfH° is replaced by the polynomial's H(298.15 K) (see the check below). */
+  const statedOverride = new Map<SourceRecord, number>();
   const chained: { label: string; parts: number }[] = [];
   interface Work { rec: SourceRecord; parts: SourceRecord[]; formula: string; hill: string; elements: Record<string, number>; charge: number; paren: string; rest: string }
   const work: Work[] = [];
@@ -106,6 +109,21 @@ export function generateSpeciesDatabase(source: SourceFile): GeneratedDatabase {
       skipped.push({ label: rec.label, phase: rec.phase, why: `self-check: ${check} (the two published ranges do not join; not refitted)` });
       continue;
     }
+    // the stated ΔfH° against the polynomial's own H(298.15 K), which the source's self-check does not test
+    // when the stated value is corrupt (COS states −1.38e-8 kJ/mol; its polynomial and note give −138.4)
+    if (holds298(rec)) {
+      const hPoly = polyH(rec, T0) / 1000;
+      if (Math.abs(rec.hf298_kJ_per_mol - hPoly) > 2) {
+        const noted = Number(/[-+]?\d+(?:\.\d+)?/.exec((rec.hf298_note ?? []).join(" "))?.[0] ?? Number.NaN);
+        if (Math.abs(noted - hPoly) <= 1) {
+          statedOverride.set(rec, hPoly);
+          fixed.push({ label: rec.label, what: `stated ΔfH° ${rec.hf298_kJ_per_mol} kJ/mol disagrees with the polynomial's H(298.15 K), ${hPoly.toFixed(3)} kJ/mol, which the record's note gives first (${(rec.hf298_note ?? []).join("; ")}); the polynomial's value is used, so that H(T) is the record's polynomial throughout` });
+        } else {
+          skipped.push({ label: rec.label, phase: rec.phase, why: `stated ΔfH° ${rec.hf298_kJ_per_mol.toFixed(3)} kJ/mol and the polynomial's H(298.15 K) ${hPoly.toFixed(3)} kJ/mol disagree by ${Math.abs(rec.hf298_kJ_per_mol - hPoly).toFixed(1)} kJ/mol inside the range` });
+          continue;
+        }
+      }
+    }
     const phaseFix = labelPhase(rec);
     if (phaseFix !== null) {
       fixed.push({ label: rec.label, what: `phase ${rec.phase} (the name text mentions both solid and liquid) read as ${phaseFix}, as the label's "(…)" says` });
@@ -123,7 +141,7 @@ export function generateSpeciesDatabase(source: SourceFile): GeneratedDatabase {
     }
     if (reading.fixedFrom !== null) fixed.push({ label: rec.label, what: `element list ${JSON.stringify(reading.fixedFrom)} replaced by ${reading.formula}, read from the label and confirmed by the stated molar mass ${rec.M_g_per_mol} g/mol` });
     const inRange = holds298(rec);
-    if (check.startsWith("H(298.15)")) {
+    if (check.startsWith("H(298.15)") && !statedOverride.has(rec)) {
       if (inRange) {
         skipped.push({ label: rec.label, phase: rec.phase, why: `self-check: ${check}, with 298.15 K inside the record's range: the stated ΔfH° and the polynomial disagree` });
         continue;
@@ -169,7 +187,8 @@ export function generateSpeciesDatabase(source: SourceFile): GeneratedDatabase {
     const ranges = w.parts.flatMap(rangesOf);
     const first = w.parts[0]!;
     const holds = holds298(first);
-    const hf = holds ? new DEC(String(first.hf298_kJ_per_mol)).times(1000) : new DEC(polyH(first, T0).toPrecision(12));
+    const override = statedOverride.get(first);
+    const hf = holds && override === undefined ? new DEC(String(first.hf298_kJ_per_mol)).times(1000) : new DEC(polyH(first, T0).toPrecision(12));
     const hfText = hf.isZero() ? "0" : hf.toFixed();
     const s298 = Number(polyS(first, T0).toPrecision(12));
     const name = collapse(w.rec.name) || collapse(w.rec.label);

@@ -73,8 +73,9 @@ function buildLayered(): Library {
   const db = speciesDatabase();
   const pairs = counterparts(base, db);
   const builtInKeyOf = new Map<string, string>();
+  // where the built-in entry is itself this database's record, the database copy keeps its own key
   for (const [bKey, d] of pairs) if (!base.datasets(bKey).includes(DATASET)) builtInKeyOf.set(d.key, bKey);
-  const paired = new Set([...pairs.values()].map((d) => d.key));
+  const paired = new Set([...pairs].filter(([bKey]) => !base.datasets(bKey).includes(DATASET)).map(([, d]) => d.key));
   const baseKeys = new Set(base.keys());
   const entries: { species: Species; alternative: boolean }[] = [];
   for (const parts of databaseParts()) {
@@ -82,6 +83,9 @@ function buildLayered(): Library {
     if (bKey !== undefined) {
       const species = speciesFromParts({ ...parts, key: bKey, aliases: [...parts.aliases, parts.key.replace(/\([a-z]+\)$/, "")] });
       entries.push({ species, alternative: true });
+    } else if (baseKeys.has(parts.key) && base.datasets(parts.key).includes(DATASET)) {
+      // the built-in set already holds this record under the same key: the built-in entry stays
+      continue;
     } else if (!paired.has(parts.key)) {
       // a key the built-in set also uses for a species the rule could not pair stays the built-in's
       entries.push({ species: db.get(parts.key), alternative: baseKeys.has(parts.key) });

@@ -123,9 +123,14 @@ describe("speciesDatabase({ withBuiltIn: true }): the built-in set over the data
     const variant = layered.get("CO2(g)", { dataset: "burcat-ruscic-2005" });
     expect(variant.key).toBe("CO2(g)");
     expect(variant.enthalpy(1500)).toBeCloseTo(db.get("CO2(g)").enthalpy(1500), 9);
-    // the database key of a paired species finds the built-in entry
+    // the database key of a paired species finds the built-in entry (NO2: built-in NIST-JANAF/GRI-Mech data)
+    expect(layered.get("NO2(g)")).toBe(builtInLibrary().get("NO2(g)"));
+    // where the built-in entry is itself this database's record (acetone vapour), the database key keeps the
+    // database copy: the same published record under both keys
     const acetone = findSpecies({ name: "acetone", phase: "g" })[0]!; // the built-in acetone vapour, whatever its key
-    expect(layered.get("acetone-C3H6O(g)")).toBe(acetone);
+    expect(acetone.dataset).toBe("burcat-ruscic-2005");
+    const copy = layered.get("acetone-C3H6O(g)");
+    expect(copy.enthalpy(800) - copy.hf298).toBeCloseTo(acetone.enthalpy(800) - acetone.hf298, 6);
   });
 
   it("species only the database holds keep their key; every built-in key stays", () => {

@@ -89,6 +89,9 @@ export function buildSpeciesFromParts(parts: SpeciesParts): Species {
   return new TabulatedSpecies(parts);
 }
 
+// Built inside a pure function call: the class has computed (symbol-keyed) display methods, which a
+// bundler would otherwise keep as possible side effects, pulling the species layer into every bundle.
+const TabulatedSpecies = /* @__PURE__ */ (() =>
 class TabulatedSpecies implements Species {
   readonly key: string;
   readonly formula: Formula;
@@ -323,4 +326,4 @@ class TabulatedSpecies implements Species {
       index === undefined ? { species: this.key, T, range, ...slipHintDetails(T) } : { species: this.key, T, range, index, ...slipHintDetails(T) },
     );
   }
-}
+})();
