@@ -12,6 +12,7 @@
  * @module
  */
 import { RxthermError } from "../errors.js";
+import { describeValue } from "../guards.js";
 
 /**
  * An exact rational number `num/den`, normalised: `den > 0n`, `gcd(|num|, den) = 1n`, and
@@ -28,8 +29,19 @@ export interface Rational {
   readonly den: bigint;
 }
 
-/** Values that {@link rationalFrom} accepts. @category Numeric */
-export type RationalLike = Rational | bigint | number | string;
+/**
+ * Values that {@link rationalFrom} accepts. A rational may also come back from JSON with plain
+ * numbers or integer text for its parts (`{ num: 25, den: 2 }`, `{ num: "25", den: "2" }`): the
+ * parts are converted exactly when they are integers, otherwise the value is rejected.
+ *
+ * @category Numeric
+ */
+export type RationalLike =
+  | Rational
+  | { readonly num: bigint | number | string; readonly den: bigint | number | string }
+  | bigint
+  | number
+  | string;
 
 /**
  * Greatest common divisor of two BigInts (always ≥ 0; gcd(0, 0) = 0).
@@ -45,6 +57,14 @@ export type RationalLike = Rational | bigint | number | string;
  * @see Euclid, Elements VII.2 (the Euclidean algorithm)
  */
 export function gcdBigInt(a: bigint, b: bigint): bigint {
+  // The one guard against the endless loop of a number or undefined reaching Euclid's loop
+  // (0 % 0 is NaN, and NaN !== 0n for ever): only BigInts go in.
+  if (typeof a !== "bigint" || typeof b !== "bigint") {
+    throw new RxthermError("INVALID_ARGUMENT", "gcdBigInt requires two bigint integers", {
+      a: describeValue(a),
+      b: describeValue(b),
+    });
+  }
   if (a < 0n) a = -a;
   if (b < 0n) b = -b;
   while (b !== 0n) {
@@ -185,7 +205,17 @@ export function rationalFrom(value: RationalLike): Rational {
   if (typeof value === "bigint") return Object.freeze({ num: value, den: 1n });
   if (typeof value === "number") return rationalFromNumber(value);
   if (typeof value === "string") return rationalFromDecimalString(value);
-  return normalise(value.num, value.den);
+  if (typeof value === "object" && value !== null) {
+    const num = integerPart(value.num, "num");
+    const den = integerPart(value.den, "den");
+    if (den === 0n) {
+      throw new RxthermError("INVALID_ARGUMENT", "rationalFrom requires a non-zero denominator", { num: String(num), den: "0" });
+    }
+    return normalise(num, den);
+  }
+  throw new RxthermError("INVALID_ARGUMENT", `rationalFrom requires a rational, bigint, number or text, got ${describeValue(value)}`, {
+    value: describeValue(value),
+  });
 }
 
 /**
@@ -371,6 +401,7 @@ export function divideByGcd(values: readonly bigint[]): bigint[] {
 
 const SAFE = 9007199254740991n;
 const MAX_EXPONENT = 10000;
+const INTEGER_RE = /^[+-]?\d+$/;
 const FRACTION_RE = /^([+-]?\d+)\s*\/\s*(\d+)$/;
 const DECIMAL_RE = /^([+-]?)(\d*)(?:\.(\d*))?(?:[eE]([+-]?\d+))?$/;
 
@@ -388,10 +419,24 @@ function normalise(num: bigint, den: bigint): Rational {
   return Object.freeze({ num, den });
 }
 
+/** One part of a rational given as an object: a bigint, a safe-integer number or integer text. */
+function integerPart(v: unknown, name: "num" | "den"): bigint {
+  if (typeof v === "bigint") return v;
+  if (typeof v === "number" && Number.isSafeInteger(v)) return BigInt(v);
+  if (typeof v === "string" && INTEGER_RE.test(v.trim())) return BigInt(v.trim());
+  throw new RxthermError(
+    "INVALID_ARGUMENT",
+    `rationalFrom requires ${name} to be a bigint, a safe integer or integer text, got ${describeValue(v)}`,
+    { [name]: describeValue(v) },
+  );
+}
+
 function toBigIntStrict(v: bigint | number, name: string): bigint {
   if (typeof v === "bigint") return v;
   if (!Number.isSafeInteger(v)) {
-    throw new RxthermError("INVALID_ARGUMENT", `rational requires ${name} to be a safe integer or bigint, got ${v}`, { [name]: v });
+    throw new RxthermError("INVALID_ARGUMENT", `rational requires ${name} to be a safe integer or bigint, got ${describeValue(v)}`, {
+      [name]: typeof v === "number" ? v : describeValue(v),
+    });
   }
   return BigInt(v);
 }

@@ -1,0 +1,79 @@
+/**
+ * Small shared guards for values that come from outside: a safe text for any value (for error
+ * messages), the check of an options argument, and deep freezing of what the library hands out.
+ * Layer 0; not re-exported from the package entry point.
+ *
+ * @module
+ * @internal
+ */
+import { RxthermError } from "./errors.js";
+
+/**
+ * Text for any value in an error message or its details. Never throws: Symbols, BigInts,
+ * null-prototype objects, proxies and revoked proxies all get a short description.
+ */
+export function describeValue(v: unknown): string {
+  switch (typeof v) {
+    case "bigint":
+      return `${v.toString()}n`;
+    case "symbol":
+      return "a symbol";
+    case "function":
+      return "a function";
+    case "number":
+    case "boolean":
+    case "undefined":
+      return String(v);
+    case "string":
+      return JSON.stringify(v.length > 40 ? `${v.slice(0, 40)}…` : v);
+    default:
+      if (v === null) return "null";
+      try {
+        return Array.isArray(v) ? "an array" : "an object";
+      } catch {
+        return "an object";
+      }
+  }
+}
+
+/**
+ * The options argument of `fn`: `undefined` becomes `{}`; anything that is not an object
+ * (null, a number, an array...) is INVALID_ARGUMENT with `details.path` = `path`.
+ */
+export function optionsOf<T extends object>(options: T | undefined, fn: string, path = "options"): T {
+  if (options === undefined) return {} as T;
+  if (typeof options !== "object" || options === null || Array.isArray(options)) {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${path} to be an object when given, got ${describeValue(options)}`, {
+      path,
+      value: describeValue(options),
+    });
+  }
+  return options;
+}
+
+/**
+ * A record of user data (flows, element counts...): a non-array object whose prototype is
+ * `Object.prototype` or `null`, so no key can come from a prototype. Otherwise INVALID_ARGUMENT
+ * with `details.path`.
+ */
+export function requireRecord(value: unknown, fn: string, path: string): Readonly<Record<string, unknown>> {
+  if (typeof value !== "object" || value === null || Array.isArray(value)) {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${path} to be an object, got ${describeValue(value)}`, {
+      path,
+      value: describeValue(value),
+    });
+  }
+  const proto = Object.getPrototypeOf(value) as unknown;
+  if (proto !== Object.prototype && proto !== null) {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${path} to be a plain object (no inherited keys)`, { path });
+  }
+  return value as Readonly<Record<string, unknown>>;
+}
+
+/** Freeze `value` and every object reachable from it (arrays, plain objects); returns `value`. */
+export function deepFreeze<T>(value: T): T {
+  if (typeof value !== "object" || value === null || Object.isFrozen(value)) return value;
+  Object.freeze(value);
+  for (const key of Object.keys(value)) deepFreeze((value as Record<string, unknown>)[key]);
+  return value;
+}
