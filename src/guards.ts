@@ -77,3 +77,18 @@ export function deepFreeze<T>(value: T): T {
   for (const key of Object.keys(value)) deepFreeze((value as Record<string, unknown>)[key]);
   return value;
 }
+
+/**
+ * True when `value` and everything reachable from it (to a depth of 8) is frozen, so that a
+ * cache may key on its identity: nothing reachable can change later. Library results
+ * (parsed and balanced reactions, formulas) are frozen this way; a user-built object usually is
+ * not, and is then read afresh on every call.
+ */
+export function isDeepFrozen(value: unknown, depth = 8): boolean {
+  if (typeof value !== "object" || value === null) return true;
+  if (!Object.isFrozen(value) || depth === 0) return false;
+  for (const key of Object.keys(value)) {
+    if (!isDeepFrozen((value as Record<string, unknown>)[key], depth - 1)) return false;
+  }
+  return true;
+}

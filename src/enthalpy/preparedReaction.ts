@@ -8,6 +8,7 @@
  */
 import Decimal from "decimal.js";
 import { RxthermError } from "../errors.js";
+import { isDeepFrozen } from "../guards.js";
 import type { Library, Species } from "../species/types.js";
 import type { Reaction } from "../reaction/types.js";
 import { rationalAdd, rationalFromDecimalString, rationalNeg, type Rational } from "../numeric/rational.js";
@@ -54,10 +55,13 @@ export function prepareReaction(fn: string, input: Reaction | string, library: L
     perLib = new WeakMap();
     prepared.set(libKey, perLib);
   }
-  const hit = perLib.get(reaction);
+  // Only a reaction that can no longer change is cached by identity (issue 11): results of
+  // parseReaction / balanceReaction are deeply frozen; a user-built object is read afresh.
+  const cacheable = typeof input === "string" || isDeepFrozen(reaction);
+  const hit = cacheable ? perLib.get(reaction) : undefined;
   if (hit) return hit;
   const p = build(fn, reaction, library);
-  perLib.set(reaction, p);
+  if (cacheable) perLib.set(reaction, p);
   return p;
 }
 

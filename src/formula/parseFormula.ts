@@ -19,14 +19,14 @@ import type { Formula, Phase } from "./types.js";
  * @example
  * FORMULA_LIMITS.maxNestingDepth // => 16
  */
-export const FORMULA_LIMITS = {
+export const FORMULA_LIMITS = /* @__PURE__ */ Object.freeze({
   maxLength: 4096,
   maxNestingDepth: 16,
   maxCount: 1e9,
   minCount: 1e-6,
   maxDecimalPlaces: 24,
   maxCharge: 99,
-} as const;
+} as const);
 
 /**
  * Parse a chemical formula such as `CuSO4·5H2O`, `[Fe(CN)6]^4-`, `Fe0.947O` or `H2O(g)`.
@@ -497,12 +497,14 @@ function finish(
     DCUM.length = 0;
     GDMUL.length = 0;
   }
-  return {
+  // Frozen, so an edit to a returned formula can never reach a later result (issue 11).
+  Object.freeze(elements);
+  return Object.freeze({
     text: start === 0 && end === s.length ? s : s.slice(start, end),
     elements,
     charge,
     phase,
-  };
+  });
 }
 
 /** Zero the running totals of the first `distinct` elements (before throwing, so no state leaks into the next call). */

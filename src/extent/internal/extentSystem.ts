@@ -7,6 +7,7 @@
  * @internal
  */
 import { RxthermError } from "../../errors.js";
+import { isDeepFrozen } from "../../guards.js";
 import { molarMass } from "../../formula/molarMass.js";
 import { parseFormula } from "../../formula/parseFormula.js";
 import type { Formula } from "../../formula/types.js";
@@ -127,6 +128,9 @@ export function prepareReaction(reaction: Reaction | string, index: number, fn: 
       reaction: index,
     });
   }
+  // Cached by identity only when nothing in it can change any more (issue 11): a user-built,
+  // unfrozen reaction is checked and read afresh on every call.
+  if (!isDeepFrozen(reaction)) return prepareObject(reaction, index, fn);
   const hit = reactionObjectCache.get(reaction);
   if (hit !== undefined) return hit;
   const prepared = prepareObject(reaction, index, fn);

@@ -15,6 +15,7 @@ import { GAS_CONSTANT_J_PER_MOL_K, STANDARD_PRESSURE_PA, STANDARD_TEMPERATURE_K 
 import type { SpeciesEntry } from "../schema.js";
 import type { Species, SpeciesEvaluation, SpeciesTransition } from "../types.js";
 import { readSpeciesFormula } from "./speciesFormula.js";
+import { deepFreeze } from "../../guards.js";
 
 const D = /* @__PURE__ */ Decimal.clone({ precision: 34, rounding: Decimal.ROUND_HALF_EVEN });
 const EXTEND: RangeOptions = Object.freeze({ extrapolate: true });
@@ -73,7 +74,7 @@ class TabulatedSpecies implements Species {
     this.sources = Object.freeze(sources);
     // Data that start between 298.15 K and 300 K (the NASA convention) are read down to 298.15 K
     // with the lowest range's form, so that the reference state itself is inside the range.
-    const ranges: CpRange[] = e.heatCapacity.ranges.map((r) => Object.freeze({ TminK: r.TminK, TmaxK: r.TmaxK, cp: Object.freeze(structuredClone(r.cp)) }));
+    const ranges: CpRange[] = e.heatCapacity.ranges.map((r) => Object.freeze({ TminK: r.TminK, TmaxK: r.TmaxK, cp: deepFreeze(structuredClone(r.cp)) }));
     const lowest = ranges[0]!;
     if (lowest.TminK > STANDARD_TEMPERATURE_K) ranges[0] = Object.freeze({ ...lowest, TminK: STANDARD_TEMPERATURE_K });
     this.cpRanges = Object.freeze(ranges);
