@@ -98,7 +98,7 @@ export class RxthermError extends Error {
    * @param value - any value
    * @returns true when `value` is an rxtherm error of any build
    */
-  static [Symbol.hasInstance](value: unknown): boolean {
+  static override [Symbol.hasInstance](value: unknown): boolean {
     return typeof value === "object" && value !== null && (value as Record<symbol, unknown>)[ERROR_BRAND] === true;
   }
 

@@ -92,3 +92,32 @@ export function isDeepFrozen(value: unknown, depth = 8): boolean {
   }
   return true;
 }
+
+/** Largest array a function takes from a caller before TOO_LARGE (rows, points, values). */
+export const MAX_INPUT_ARRAY_LENGTH = 100_000;
+
+/**
+ * An array given by the caller: a real array without holes, of at most `maxLength` entries.
+ * INVALID_ARGUMENT (not an array, or a hole at `details.path`) or TOO_LARGE.
+ */
+export function requireArray(value: unknown, fn: string, path: string, maxLength = MAX_INPUT_ARRAY_LENGTH): readonly unknown[] {
+  if (!Array.isArray(value)) {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${path} to be an array, got ${describeValue(value)}`, {
+      path,
+      value: describeValue(value),
+    });
+  }
+  if (value.length > maxLength) {
+    throw new RxthermError("TOO_LARGE", `${fn} accepts at most ${maxLength} entries in ${path}, got ${value.length}`, {
+      path,
+      limit: maxLength,
+      size: value.length,
+    });
+  }
+  for (let i = 0; i < value.length; i++) {
+    if (!(i in value)) {
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${path} without holes, but entry ${i} is missing`, { path: `${path}[${i}]` });
+    }
+  }
+  return value;
+}

@@ -7,6 +7,7 @@ import { solveExtents } from "../extent/solveExtents.js";
 import { findRoot } from "../numeric/roots.js";
 import { resolveSpeciesCached } from "../enthalpy/resolveInputs.js";
 import { resolveStream } from "./internal/energyStreams.js";
+import { optionsOf } from "../guards.js";
 
 /**
  * Input of {@link adiabaticReactionTemperature} and {@link adiabaticTemperatureRise}.
@@ -104,6 +105,7 @@ export interface AdiabaticReactionResult {
  * @see IUPAC Green Book, 3rd ed. (2007), §2.11; R. P. Brent (1973) for the root finder.
  */
 export function adiabaticReactionTemperature(input: AdiabaticReactionInput, options: AdiabaticReactionOptions = {}): AdiabaticReactionResult {
+  options = optionsOf(options, "adiabaticReactionTemperature");
   return solveAdiabatic("adiabaticReactionTemperature", input, options).result;
 }
 
@@ -148,6 +150,7 @@ export interface AdiabaticTemperatureRiseResult extends AdiabaticReactionResult 
  * @see T. Grewer, Thermal Hazards of Chemical Reactions, Elsevier 1994 (adiabatic temperature rise as a screening criterion).
  */
 export function adiabaticTemperatureRise(input: AdiabaticReactionInput, options: AdiabaticReactionOptions = {}): AdiabaticTemperatureRiseResult {
+  options = optionsOf(options, "adiabaticTemperatureRise");
   const { result, startT } = solveAdiabatic("adiabaticTemperatureRise", input, options);
   return { ...result, deltaT: result.T - startT, startT };
 }

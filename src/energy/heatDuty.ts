@@ -5,6 +5,7 @@ import type { Reaction } from "../reaction/types.js";
 import type { Stream } from "../extent/types.js";
 import { resolveStream, type Entry, type ResolvedStream } from "./internal/energyStreams.js";
 import { prepareReaction, standardEnthalpyExact } from "../enthalpy/preparedReaction.js";
+import { optionsOf } from "../guards.js";
 
 /**
  * Streams and optional reactions of an energy balance, for {@link heatDuty}.
@@ -158,6 +159,7 @@ export interface HeatDutyResult {
  *   G. Kirchhoff, Pogg. Ann. 103 (1858) 177.
  */
 export function heatDuty(input: HeatDutyInput, options: HeatDutyOptions = {}): HeatDutyResult {
+  options = optionsOf(options, "heatDuty");
   const fn = "heatDuty";
   if (input === null || typeof input !== "object") throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object with inlet and outlet`, { input });
   const library = input.library;

@@ -6,6 +6,7 @@ import { molarMass } from "../formula/molarMass.js";
 import { resolveSpecies } from "./resolveInputs.js";
 import { ExactDecimal } from "./preparedReaction.js";
 import { combustionProducts } from "./internal/combustionProducts.js";
+import { optionsOf } from "../guards.js";
 
 /**
  * Options of {@link heatingValue}.
@@ -67,6 +68,7 @@ export const NORMAL_MOLAR_VOLUME_M3_PER_MOL = (GAS_CONSTANT_J_PER_MOL_K * NORMAL
  *   ISO 13443:1996 (natural gas — standard reference conditions, 0 °C and 101.325 kPa for "normal").
  */
 export function heatingValue(fuel: string | Flows, options: HeatingValueOptions = {}): number {
+  options = optionsOf(options, "heatingValue");
   const { basis, per } = resolveOptions("heatingValue", options);
   const mixture = normalise("heatingValue", fuel);
   let perMol = 0;

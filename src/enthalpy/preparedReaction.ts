@@ -13,6 +13,7 @@ import type { Library, Species } from "../species/types.js";
 import type { Reaction } from "../reaction/types.js";
 import { rationalAdd, rationalFromDecimalString, rationalNeg, type Rational } from "../numeric/rational.js";
 import { reactionResiduals, resolveSpecies, toReaction } from "./resolveInputs.js";
+import { libraryOf } from "../species/species.js";
 
 /** Private decimal constructor: 34 significant digits, round half even (never Decimal.set). */
 export const ExactDecimal = /* @__PURE__ */ Decimal.clone({ precision: 34, rounding: Decimal.ROUND_HALF_EVEN });
@@ -49,6 +50,7 @@ export function prepareReaction(fn: string, input: Reaction | string, library: L
       parsedText.set(input, reaction);
     }
   } else reaction = toReaction(fn, input);
+  if (library !== undefined) libraryOf(library, fn, "options.library");
   const libKey: object = library ?? DEFAULT_LIBRARY;
   let perLib = prepared.get(libKey);
   if (!perLib) {

@@ -5,6 +5,7 @@ import type { Reaction } from "../reaction/types.js";
 import type Decimal from "decimal.js";
 import type { Rational } from "../numeric/rational.js";
 import { prepareReaction, standardEnthalpyExact, type PreparedReaction } from "./preparedReaction.js";
+import { optionsOf } from "../guards.js";
 
 /**
  * Options of {@link reactionEnthalpy}.
@@ -108,6 +109,7 @@ export interface ReactionEnthalpyResult {
  *   IUPAC Green Book, 3rd ed. (2007), §2.11 (standard reaction quantities).
  */
 export function reactionEnthalpy(reaction: Reaction | string, options: ReactionEnthalpyOptions = {}): ReactionEnthalpyResult {
+  options = optionsOf(options, "reactionEnthalpy");
   const T = options.T ?? STANDARD_TEMPERATURE_K;
   checkTemperature("reactionEnthalpy", T);
   const p = prepareReaction("reactionEnthalpy", reaction, options.library);

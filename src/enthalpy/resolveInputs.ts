@@ -9,7 +9,7 @@
 import { RxthermError } from "../errors.js";
 import type { Library, Species } from "../species/types.js";
 import type { Reaction } from "../reaction/types.js";
-import { species } from "../species/species.js";
+import { libraryOf, species } from "../species/species.js";
 import { parseReaction } from "../reaction/parseReaction.js";
 import { checkBalance } from "../reaction/checkBalance.js";
 
@@ -34,6 +34,7 @@ const BUILT_IN = {};
 
 /** {@link resolveSpecies} with a per-library cache of key → Species (libraries are immutable). */
 export function resolveSpeciesCached(fn: string, key: string, library: Library | undefined): Species {
+  if (library !== undefined) libraryOf(library, fn, "library");
   const lib: object = library ?? BUILT_IN;
   let map = speciesCache.get(lib);
   if (!map) {

@@ -13,6 +13,7 @@ import {
 import { solveLinearSystem } from "../numeric/linearAlgebra.js";
 import { buildSystem, resolveSpecies, validateFlows } from "./internal/extentSystem.js";
 import type { Flows } from "./types.js";
+import { optionsOf } from "../guards.js";
 
 /**
  * Input of {@link reconcileExtents}.
@@ -97,6 +98,7 @@ export interface ReconcileExtentsResult {
  * @see C. F. Gauss, Theoria combinationis observationum erroribus minimis obnoxiae (1821–1823): least squares through the normal equations; element-balance closure: common practice
  */
 export function reconcileExtents(input: ReconcileExtentsInput, options: ReconcileExtentsOptions = {}): ReconcileExtentsResult {
+  options = optionsOf(options, "reconcileExtents");
   const fn = "reconcileExtents";
   if (input === null || typeof input !== "object") {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object { feed, reactions, measured }`, {});

@@ -32,6 +32,7 @@ import {
 } from "../numeric/safeRational.js";
 import { type StoichSystem, type YieldPair, buildSystem, resolveSpecies } from "./internal/extentSystem.js";
 import type { ExtentSpec, Flows } from "./types.js";
+import { optionsOf } from "../guards.js";
 
 /**
  * Options of {@link solveExtents}.
@@ -158,6 +159,7 @@ export interface SolveExtentsResult {
  * @see IUPAC Compendium of Chemical Terminology (the Gold Book), entry "extent of reaction, ξ"; conversion, yield and selectivity as defined above (common practice — definitions of yield and selectivity vary between sources, so check the one your plant uses)
  */
 export function solveExtents(input: SolveExtentsInput, options: SolveExtentsOptions = {}): SolveExtentsResult {
+  options = optionsOf(options, "solveExtents");
   const fn = "solveExtents";
   if (input === null || typeof input !== "object") {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object { feed, reactions, specs }`, {});

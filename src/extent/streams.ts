@@ -7,6 +7,7 @@ import { RxthermError } from "../errors.js";
 import { molarMassOf, validateFlows } from "./internal/extentSystem.js";
 import type { Flows } from "./types.js";
 import { compensatedSum } from "../numeric/compensatedSum.js";
+import { optionsOf } from "../guards.js";
 
 /**
  * Options of the mass-flow conversions {@link massToMolarFlows} and {@link molarToMassFlows}.
@@ -38,6 +39,7 @@ export interface MassFlowOptions {
  * @see IUPAC/CIAAW standard atomic weights (molar masses)
  */
 export function massToMolarFlows(massFlows: Flows, options: MassFlowOptions = {}): Flows {
+  options = optionsOf(options, "massToMolarFlows");
   const fn = "massToMolarFlows";
   const factor = unitFactor(options, fn);
   validateFlows(massFlows, fn, "mass");
@@ -62,6 +64,7 @@ export function massToMolarFlows(massFlows: Flows, options: MassFlowOptions = {}
  * @see IUPAC/CIAAW standard atomic weights (molar masses)
  */
 export function molarToMassFlows(flows: Flows, options: MassFlowOptions = {}): Flows {
+  options = optionsOf(options, "molarToMassFlows");
   const fn = "molarToMassFlows";
   const factor = unitFactor(options, fn);
   validateFlows(flows, fn, "flows");
@@ -150,6 +153,7 @@ export function totalFlow(flows: Flows): number {
  * @see IUPAC/CIAAW standard atomic weights (molar masses)
  */
 export function totalMassFlow(flows: Flows, options: MassFlowOptions = {}): number {
+  options = optionsOf(options, "totalMassFlow");
   const fn = "totalMassFlow";
   const factor = unitFactor(options, fn);
   validateFlows(flows, fn, "flows");

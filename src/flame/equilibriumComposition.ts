@@ -13,6 +13,7 @@ import {
   type Engine,
 } from "./internal/equilibriumEngine.js";
 import { resolveLimits } from "./internal/flameInput.js";
+import { optionsOf } from "../guards.js";
 
 /**
  * What to bring to equilibrium, and at which conditions, for {@link equilibriumComposition}.
@@ -141,6 +142,7 @@ export interface EquilibriumResult {
  *   W. R. Smith, R. W. Missen, Chemical Reaction Equilibrium Analysis, Wiley 1982, ch. 6 (element potentials)
  */
 export function equilibriumComposition(input: EquilibriumInput, options: EquilibriumOptions = {}): EquilibriumResult {
+  options = optionsOf(options, "equilibriumComposition");
   const fn = "equilibriumComposition";
   if (input === null || typeof input !== "object") {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object`, { input });

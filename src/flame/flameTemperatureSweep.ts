@@ -2,6 +2,7 @@ import { RxthermError } from "../errors.js";
 import { solveFlamePoint, type FlamePoint } from "./internal/flameProblem.js";
 import { flamePointOf, prepareFlameInput, toFlameResult } from "./internal/flameInput.js";
 import type { AdiabaticFlameInput, AdiabaticFlameOptions } from "./types.js";
+import { optionsOf } from "../guards.js";
 
 /**
  * Which setting of an {@link AdiabaticFlameInput} a sweep varies, and over which values.
@@ -69,6 +70,7 @@ export interface FlameSweepResult {
  * @see NIST-JANAF Thermochemical Tables, 4th ed. (Chase 1998) for the built-in product data
  */
 export function flameTemperatureSweep(input: AdiabaticFlameInput, sweep: FlameSweep, options: AdiabaticFlameOptions = {}): FlameSweepResult {
+  options = optionsOf(options, "flameTemperatureSweep");
   const fn = "flameTemperatureSweep";
   if (sweep === null || typeof sweep !== "object" || !Array.isArray(sweep.values) || sweep.values.length === 0) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a sweep { parameter, values } with at least one value`, { sweep });

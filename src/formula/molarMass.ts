@@ -4,6 +4,7 @@ import { checkFormula } from "./internal/checkFormula.js";
 import { INDEX_MICRO_WEIGHTS, INDEX_WEIGHTS, symbolIndexOf } from "./internal/elementIndex.js";
 import { parseFormula } from "./parseFormula.js";
 import type { Formula } from "./types.js";
+import { optionsOf } from "../guards.js";
 
 /**
  * Options of {@link molarMass}.
@@ -54,6 +55,7 @@ export const ELECTRON_MOLAR_MASS_G_PER_MOL = 0.000548579909;
  * @see J. Meija et al., Atomic weights of the elements 2013, Pure Appl. Chem. 88 (2016) 265–291
  */
 export function molarMass(formula: string | Formula, options: MolarMassOptions = {}): number {
+  options = optionsOf(options, "molarMass");
   const f = typeof formula === "string" ? parseFormula(formula) : checked(formula);
   const electron = options.electronMass ?? false;
   if (typeof electron !== "boolean") {

@@ -1,6 +1,7 @@
 import { RxthermError } from "../errors.js";
 import * as compiled from "./internal/cpCompile.js";
 import type { CpRange, RangeOptions } from "./types.js";
+import { optionsOf } from "../guards.js";
 
 // Module-local aliases of the compiled-form helpers. The hot paths call these per evaluation; a
 // local const binding is a direct reference that the JIT inlines, whereas some module loaders (the
@@ -146,6 +147,7 @@ export interface HeatCapacity {
  * @see B. J. McBride, M. J. Zehe, S. Gordon, NASA/TP-2002-211556 (2002): the 7- and 9-coefficient polynomials
  */
 export function createHeatCapacity(ranges: readonly CpRange[], options: CreateHeatCapacityOptions = {}): HeatCapacity {
+  options = optionsOf(options, "createHeatCapacity");
   const label = options.label;
   const tol = options.boundaryToleranceK ?? 1e-6;
   if (typeof tol !== "number" || !(tol >= 0) || !Number.isFinite(tol)) {

@@ -3,6 +3,7 @@ import { GAS_CONSTANT_J_PER_MOL_K } from "../units.js";
 import { CELSIUS_OFFSET_K, REFERENCE_T_K, STRIDE, canonical, formCp, hAt, sAt, writeSegment } from "./internal/cpCompile.js";
 import { leastSquares } from "../numeric/leastSquares.js";
 import type { CpForm, CpRange } from "./types.js";
+import { optionsOf } from "../guards.js";
 
 /**
  * One measured or tabulated heat capacity: temperature `T` in K and `cp` in J/(mol·K).
@@ -129,6 +130,7 @@ export interface FitCpResult {
  * @see NIST Chemistry WebBook, SRD 69: Shomate equation and the meaning of F, G, H
  */
 export function fitCp(points: readonly CpPoint[], form: FitCpFormName, options: FitCpOptions = {}): FitCpResult {
+  options = optionsOf(options, "fitCp");
   const fn = "fitCp";
   if (!Array.isArray(points)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an array of points`, { points });
   points.forEach((p, index) => {

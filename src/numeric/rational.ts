@@ -12,7 +12,7 @@
  * @module
  */
 import { RxthermError } from "../errors.js";
-import { describeValue } from "../guards.js";
+import { describeValue, requireArray } from "../guards.js";
 
 /**
  * An exact rational number `num/den`, normalised: `den > 0n`, `gcd(|num|, den) = 1n`, and
@@ -229,6 +229,8 @@ export function rationalFrom(value: RationalLike): Rational {
  * @category Numeric
  */
 export function rationalAdd(a: Rational, b: Rational): Rational {
+  checkRational(a, "rationalAdd", "a");
+  checkRational(b, "rationalAdd", "b");
   if (a.den === 1n && b.den === 1n) return Object.freeze({ num: a.num + b.num, den: 1n });
   return normalise(a.num * b.den + b.num * a.den, a.den * b.den);
 }
@@ -244,6 +246,8 @@ export function rationalAdd(a: Rational, b: Rational): Rational {
  * @category Numeric
  */
 export function rationalSub(a: Rational, b: Rational): Rational {
+  checkRational(a, "rationalSub", "a");
+  checkRational(b, "rationalSub", "b");
   if (a.den === 1n && b.den === 1n) return Object.freeze({ num: a.num - b.num, den: 1n });
   return normalise(a.num * b.den - b.num * a.den, a.den * b.den);
 }
@@ -259,6 +263,8 @@ export function rationalSub(a: Rational, b: Rational): Rational {
  * @category Numeric
  */
 export function rationalMul(a: Rational, b: Rational): Rational {
+  checkRational(a, "rationalMul", "a");
+  checkRational(b, "rationalMul", "b");
   if (a.den === 1n && b.den === 1n) return Object.freeze({ num: a.num * b.num, den: 1n });
   return normalise(a.num * b.num, a.den * b.den);
 }
@@ -275,6 +281,8 @@ export function rationalMul(a: Rational, b: Rational): Rational {
  * @category Numeric
  */
 export function rationalDiv(a: Rational, b: Rational): Rational {
+  checkRational(a, "rationalDiv", "a");
+  checkRational(b, "rationalDiv", "b");
   if (b.num === 0n) {
     throw new RxthermError("INVALID_ARGUMENT", "rationalDiv requires a non-zero divisor", { dividend: rationalToString(a) });
   }
@@ -291,6 +299,7 @@ export function rationalDiv(a: Rational, b: Rational): Rational {
  * @category Numeric
  */
 export function rationalNeg(a: Rational): Rational {
+  checkRational(a, "rationalNeg", "a");
   return Object.freeze({ num: a.num === 0n ? 0n : -a.num, den: a.den });
 }
 
@@ -305,6 +314,8 @@ export function rationalNeg(a: Rational): Rational {
  * @category Numeric
  */
 export function rationalCompare(a: Rational, b: Rational): -1 | 0 | 1 {
+  checkRational(a, "rationalCompare", "a");
+  checkRational(b, "rationalCompare", "b");
   const l = a.num * b.den;
   const r = b.num * a.den;
   return l < r ? -1 : l > r ? 1 : 0;
@@ -320,6 +331,7 @@ export function rationalCompare(a: Rational, b: Rational): -1 | 0 | 1 {
  * @category Numeric
  */
 export function rationalIsZero(a: Rational): boolean {
+  checkRational(a, "rationalIsZero", "a");
   return a.num === 0n;
 }
 
@@ -334,6 +346,7 @@ export function rationalIsZero(a: Rational): boolean {
  * @category Numeric
  */
 export function rationalToNumber(a: Rational): number {
+  checkRational(a, "rationalToNumber", "a");
   const { num, den } = a;
   if (num === 0n) return 0;
   if (den === 1n) return Number(num);
@@ -352,6 +365,7 @@ export function rationalToNumber(a: Rational): number {
  * @category Numeric
  */
 export function rationalToString(a: Rational): string {
+  checkRational(a, "rationalToString", "a");
   return a.den === 1n ? a.num.toString() : `${a.num}/${a.den}`;
 }
 
@@ -370,6 +384,7 @@ export function rationalToString(a: Rational): string {
  * @category Numeric
  */
 export function scaleToCoprimeIntegers(values: readonly RationalLike[]): bigint[] {
+  requireArray(values, "scaleToCoprimeIntegers", "values");
   const rs = values.map(rationalFrom);
   let l = 1n;
   for (const r of rs) l = lcmBigInt(l, r.den);
@@ -388,6 +403,7 @@ export function scaleToCoprimeIntegers(values: readonly RationalLike[]): bigint[
  * @category Numeric
  */
 export function divideByGcd(values: readonly bigint[]): bigint[] {
+  requireArray(values, "divideByGcd", "values");
   let g = 0n;
   for (const v of values) {
     g = gcdBigInt(g, v);
@@ -429,6 +445,17 @@ function integerPart(v: unknown, name: "num" | "den"): bigint {
     `rationalFrom requires ${name} to be a bigint, a safe integer or integer text, got ${describeValue(v)}`,
     { [name]: describeValue(v) },
   );
+}
+
+/** The shared guard of the rational operations: a normalised-shape rational (bigint parts, den > 0). */
+function checkRational(r: Rational, fn: string, path: string): void {
+  if (typeof r !== "object" || r === null || typeof r.num !== "bigint" || typeof r.den !== "bigint" || r.den <= 0n) {
+    throw new RxthermError(
+      "INVALID_ARGUMENT",
+      `${fn} requires ${path} to be a Rational (bigint num, bigint den > 0; build one with rationalFrom), got ${describeValue(r)}`,
+      { path },
+    );
+  }
 }
 
 function toBigIntStrict(v: bigint | number, name: string): bigint {

@@ -6,6 +6,7 @@
  * @module
  */
 import { RxthermError } from "../errors.js";
+import { optionsOf } from "../guards.js";
 
 /**
  * Options of {@link findRoot}.
@@ -105,6 +106,7 @@ export function findRoot(
   bracket: readonly [number, number],
   options: FindRootOptions = {},
 ): RootResult {
+  options = optionsOf(options, "findRoot");
   const opts = resolveOptions(bracket, options);
   const evaluate = (x: number): number => {
     const v = f(x);

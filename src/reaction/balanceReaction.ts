@@ -20,6 +20,7 @@ import {
 } from "./internal/reactionTerms.js";
 import { parseReaction } from "./parseReaction.js";
 import type { Reaction, Term } from "./types.js";
+import { optionsOf } from "../guards.js";
 
 /**
  * The species to balance: an equation text (its coefficients are ignored) or the species of
@@ -93,6 +94,7 @@ export interface BalanceReactionOptions {
  * @see IUPAC Green Book, 3rd ed. (2007), §2.10.1 (stoichiometric numbers); G. Strang, Linear Algebra and Its Applications, 4th ed. (2006), §2.2 (null space)
  */
 export function balanceReaction(input: BalanceInput, options: BalanceReactionOptions = {}): Reaction {
+  options = optionsOf(options, "balanceReaction");
   const { entries, signs, nReactants } = readInput(input);
   const n = entries.length;
   const keys = entries.map((e) => e.species);

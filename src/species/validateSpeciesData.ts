@@ -4,6 +4,7 @@ import type { CpRange } from "../heat-capacity/types.js";
 import { readSpeciesFormula } from "./internal/speciesFormula.js";
 import { SOURCES } from "./citation.js";
 import { speciesDataSchema, speciesEntrySchema, type SpeciesData, type SpeciesEntry } from "./schema.js";
+import { optionsOf } from "../guards.js";
 
 /**
  * One problem found by {@link validateSpeciesData}: where it is (a path into the data, as zod
@@ -96,6 +97,7 @@ const UNSAFE_KEYS = new Set(["__proto__", "constructor", "prototype"]);
  * @see zod 4 issue paths (`path`), which the issue list follows
  */
 export function validateSpeciesData(data: unknown, options: ValidateSpeciesDataOptions = {}): SpeciesData {
+  options = optionsOf(options, "validateSpeciesData");
   const issues: SpeciesDataIssue[] = [];
   findUnsafeKeys(data, [], issues, new Set());
   if (issues.length > 0) throw fail(issues);
