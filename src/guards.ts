@@ -25,7 +25,7 @@ export function describeValue(v: unknown): string {
     case "undefined":
       return String(v);
     case "string":
-      return JSON.stringify(v.length > 40 ? `${v.slice(0, 40)}…` : v);
+      return v.length > 60 ? `${v.slice(0, 60)}…` : v;
     default:
       if (v === null) return "null";
       try {

@@ -9,6 +9,7 @@
  * @module
  */
 import { RxthermError } from "./errors.js";
+import { describeValue } from "./guards.js";
 
 /** Temperature units accepted by {@link toKelvin} and {@link fromKelvin}. @category Units */
 export type TemperatureUnit = "K" | "C" | "F" | "R";
@@ -135,11 +136,11 @@ export function toMol(value: number, unit: AmountUnit): number {
 
 function finite(value: number, fn: string): void {
   if (typeof value !== "number" || !Number.isFinite(value)) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a finite number, got ${String(value)}`, { value });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a finite number, got ${describeValue(value)}`, { value });
   }
 }
 function badUnit(fn: string, unit: unknown): RxthermError {
-  return new RxthermError("INVALID_ARGUMENT", `${fn} does not know the unit ${String(unit)}`, { unit });
+  return new RxthermError("INVALID_ARGUMENT", `${fn} does not know the unit ${describeValue(unit)}`, { unit });
 }
 /** Remove float noise from offsets such as 373.15 − 273.15 (12 significant digits). */
 function roundOff(x: number): number {

@@ -7,7 +7,7 @@ import { solveExtents } from "../extent/solveExtents.js";
 import { findRoot } from "../numeric/roots.js";
 import { resolveSpeciesCached } from "../enthalpy/resolveInputs.js";
 import { resolveStream } from "./internal/energyStreams.js";
-import { optionsOf } from "../guards.js";
+import { optionsOf, describeValue } from "../guards.js";
 
 /**
  * Input of {@link adiabaticReactionTemperature} and {@link adiabaticTemperatureRise}.
@@ -162,9 +162,9 @@ function solveAdiabatic(fn: string, input: AdiabaticReactionInput, options: Adia
   const ro = extrapolate ? EXTRAPOLATE : undefined;
   const toleranceK = options.toleranceK ?? 1e-9;
   const vessel = options.vessel ?? "constant-pressure";
-  if (vessel !== "constant-pressure" && vessel !== "constant-volume") throw new RxthermError("INVALID_ARGUMENT", `${fn} option vessel must be "constant-pressure" or "constant-volume", got ${String(vessel)}`, { vessel });
+  if (vessel !== "constant-pressure" && vessel !== "constant-volume") throw new RxthermError("INVALID_ARGUMENT", `${fn} option vessel must be "constant-pressure" or "constant-volume", got ${describeValue(vessel)}`, { vessel });
   const rigid = vessel === "constant-volume";
-  if (!(toleranceK > 0) || !Number.isFinite(toleranceK)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires toleranceK > 0, got ${String(toleranceK)}`, { toleranceK });
+  if (!(toleranceK > 0) || !Number.isFinite(toleranceK)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires toleranceK > 0, got ${describeValue(toleranceK)}`, { toleranceK });
   const inlets: readonly Stream[] = input.inlet === undefined || input.inlet === null
     ? []
     : Array.isArray(input.inlet) ? (input.inlet as readonly Stream[]) : [input.inlet as Stream];

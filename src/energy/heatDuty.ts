@@ -5,7 +5,7 @@ import type { Reaction } from "../reaction/types.js";
 import type { Stream } from "../extent/types.js";
 import { resolveStream, type Entry, type ResolvedStream } from "./internal/energyStreams.js";
 import { prepareReaction, standardEnthalpyExact } from "../enthalpy/preparedReaction.js";
-import { optionsOf } from "../guards.js";
+import { optionsOf, describeValue } from "../guards.js";
 
 /**
  * Streams and optional reactions of an energy balance, for {@link heatDuty}.
@@ -167,8 +167,8 @@ export function heatDuty(input: HeatDutyInput, options: HeatDutyOptions = {}): H
   const ro = extrapolate ? EXTRAPOLATE : undefined;
   const method = options.method ?? "formation";
   const vessel = options.vessel ?? "constant-pressure";
-  if (vessel !== "constant-pressure" && vessel !== "constant-volume") throw new RxthermError("INVALID_ARGUMENT", `${fn} option vessel must be "constant-pressure" or "constant-volume", got ${String(vessel)}`, { vessel });
-  if (method !== "formation" && method !== "reaction") throw new RxthermError("INVALID_ARGUMENT", `${fn} option method must be "formation" or "reaction", got ${String(method)}`, { method });
+  if (vessel !== "constant-pressure" && vessel !== "constant-volume") throw new RxthermError("INVALID_ARGUMENT", `${fn} option vessel must be "constant-pressure" or "constant-volume", got ${describeValue(vessel)}`, { vessel });
+  if (method !== "formation" && method !== "reaction") throw new RxthermError("INVALID_ARGUMENT", `${fn} option method must be "formation" or "reaction", got ${describeValue(method)}`, { method });
   const inlets = asStreams(fn, input.inlet, "inlet");
   const outlets = asStreams(fn, input.outlet, "outlet");
   const warnings: string[] = [];
@@ -330,7 +330,7 @@ function heatFromReactions(
   let heat = 0;
   reactions.forEach((r, j) => {
     const xi = extents[j];
-    if (typeof xi !== "number" || !Number.isFinite(xi)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires finite extents, got ${String(xi)} at index ${j}`, { index: j, extent: xi });
+    if (typeof xi !== "number" || !Number.isFinite(xi)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires finite extents, got ${describeValue(xi)} at index ${j}`, { index: j, extent: xi });
     const p = prepareReaction(fn, r, library);
     const dh = standardEnthalpyExact(p).toNumber();
     heat += xi * dh;

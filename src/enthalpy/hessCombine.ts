@@ -6,6 +6,7 @@ import {
 } from "../numeric/rational.js";
 import { toReaction } from "./resolveInputs.js";
 import { ExactDecimal, exactWeightedSum } from "./preparedReaction.js";
+import { describeValue } from "../guards.js";
 
 /**
  * One known reaction and its enthalpy, for {@link hessCombine}.
@@ -118,7 +119,7 @@ function enthalpyText(h: number | string, index: number): string {
       if (v.isFinite()) return v.toString();
     } catch { /* fall through */ }
   }
-  throw new RxthermError("INVALID_ARGUMENT", `hessCombine requires each known enthalpy to be a finite number or decimal text, got ${String(h)} at index ${index}`, { index, enthalpy: h });
+  throw new RxthermError("INVALID_ARGUMENT", `hessCombine requires each known enthalpy to be a finite number or decimal text, got ${describeValue(h)} at index ${index}`, { index, enthalpy: h });
 }
 
 function netVector(r: Reaction): Map<string, Rational> {

@@ -5,7 +5,7 @@ import type { Reaction } from "../reaction/types.js";
 import type Decimal from "decimal.js";
 import type { Rational } from "../numeric/rational.js";
 import { prepareReaction, standardEnthalpyExact, type PreparedReaction } from "./preparedReaction.js";
-import { optionsOf } from "../guards.js";
+import { optionsOf, describeValue } from "../guards.js";
 
 /**
  * Options of {@link reactionEnthalpy}.
@@ -192,7 +192,7 @@ function indexOfSpecies(p: PreparedReaction, key: string): number {
 /** T must be a finite number > 0 K. */
 export function checkTemperature(fn: string, T: unknown, label = "T"): void {
   if (typeof T !== "number" || !Number.isFinite(T) || T <= 0) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${label} to be a finite temperature above 0 K, got ${String(T)}`, { [label]: T });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${label} to be a finite temperature above 0 K, got ${describeValue(T)}`, { [label]: T });
   }
 }
 

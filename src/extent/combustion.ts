@@ -4,6 +4,7 @@ import { formulaOf, molarMassOf, validateFlows } from "./internal/extentSystem.j
 import type { Flows } from "./types.js";
 import { waterSaturationPressure } from "./waterSaturationPressure.js";
 import { compensatedSum } from "../numeric/compensatedSum.js";
+import { describeValue } from "../guards.js";
 
 /**
  * Dry air by mole fraction, the default oxidizer of {@link combustion}: O₂ 0.209476 and Ar
@@ -326,7 +327,7 @@ function ultimateElements(fuel: UltimateFuel, fn: string): FuelElements {
   const u = fuel.ultimate;
   const massKg = fuel.massFlowKg ?? 1;
   if (typeof massKg !== "number" || !Number.isFinite(massKg) || massKg <= 0) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires fuel.massFlowKg > 0, got ${String(massKg)}`, { massFlowKg: massKg });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires fuel.massFlowKg > 0, got ${describeValue(massKg)}`, { massFlowKg: massKg });
   }
   const fields = ["C", "H", "O", "N", "S", "moisture", "ash"] as const;
   let total = 0;
@@ -334,7 +335,7 @@ function ultimateElements(fuel: UltimateFuel, fn: string): FuelElements {
   for (const k of fields) {
     const v = u[k] ?? 0;
     if (typeof v !== "number" || !Number.isFinite(v) || v < 0 || v > 1) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ultimate-analysis mass fractions in [0, 1], got ${String(v)} for ${k}`, {
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ultimate-analysis mass fractions in [0, 1], got ${describeValue(v)} for ${k}`, {
         field: k,
         value: v,
       });
@@ -371,12 +372,12 @@ function resolveExcess(input: CombustionInput, theoreticalO2: number, fn: string
   let e = 0;
   if (equivalenceRatio !== undefined) {
     if (typeof equivalenceRatio !== "number" || !Number.isFinite(equivalenceRatio) || equivalenceRatio <= 0) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires equivalenceRatio > 0, got ${String(equivalenceRatio)}`, { equivalenceRatio });
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires equivalenceRatio > 0, got ${describeValue(equivalenceRatio)}`, { equivalenceRatio });
     }
     e = 1 / equivalenceRatio - 1;
   } else if (excessAir !== undefined) {
     if (typeof excessAir !== "number" || !Number.isFinite(excessAir)) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a finite excessAir, got ${String(excessAir)}`, { excessAir });
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a finite excessAir, got ${describeValue(excessAir)}`, { excessAir });
     }
     e = excessAir;
   }
@@ -395,7 +396,7 @@ function resolveExcess(input: CombustionInput, theoreticalO2: number, fn: string
 function fraction(v: number | undefined, dflt: number, name: string, fn: string): number {
   if (v === undefined) return dflt;
   if (typeof v !== "number" || !Number.isFinite(v) || v < 0 || v > 1) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${name} in [0, 1], got ${String(v)}`, { [name]: v });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${name} in [0, 1], got ${describeValue(v)}`, { [name]: v });
   }
   return v;
 }
@@ -435,7 +436,7 @@ function oxidizerComposition(input: CombustionInput, fn: string): Flows {
   if (input.oxygenEnrichment !== undefined) {
     const x = input.oxygenEnrichment;
     if (typeof x !== "number" || !Number.isFinite(x) || x < yO2 || x > 1) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires oxygenEnrichment between the oxidizer's O2 fraction ${yO2} and 1, got ${String(x)}`, {
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires oxygenEnrichment between the oxidizer's O2 fraction ${yO2} and 1, got ${describeValue(x)}`, {
         oxygenEnrichment: x,
         range: [yO2, 1],
       });
@@ -453,14 +454,14 @@ function humidityFraction(h: AirHumidity | undefined, fn: string): number {
   if ("waterMoleFraction" in h) {
     y = h.waterMoleFraction;
     if (typeof y !== "number" || !Number.isFinite(y) || y < 0 || y >= 1) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires humidity.waterMoleFraction in [0, 1), got ${String(y)}`, { waterMoleFraction: y });
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires humidity.waterMoleFraction in [0, 1), got ${describeValue(y)}`, { waterMoleFraction: y });
     }
     return y;
   }
   const rh = fraction(h.relativeHumidity, 0, "relativeHumidity", fn);
   const P = h.pressurePa ?? 101325;
   if (typeof P !== "number" || !Number.isFinite(P) || P <= 0) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires humidity.pressurePa > 0, got ${String(P)}`, { pressurePa: P });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires humidity.pressurePa > 0, got ${describeValue(P)}`, { pressurePa: P });
   }
   y = (rh * waterSaturationPressure(h.temperatureK)) / P;
   if (y >= 1) {

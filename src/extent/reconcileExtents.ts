@@ -13,7 +13,7 @@ import {
 import { solveLinearSystem } from "../numeric/linearAlgebra.js";
 import { buildSystem, resolveSpecies, validateFlows } from "./internal/extentSystem.js";
 import type { Flows } from "./types.js";
-import { optionsOf } from "../guards.js";
+import { optionsOf, describeValue } from "../guards.js";
 
 /**
  * Input of {@link reconcileExtents}.
@@ -122,7 +122,7 @@ export function reconcileExtents(input: ReconcileExtentsInput, options: Reconcil
     seen.add(s);
     const w = weights[key] ?? weights[sys.species[s] as string] ?? 1;
     if (typeof w !== "number" || !Number.isFinite(w) || w <= 0) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires weights > 0, got ${String(w)} for ${key}`, { species: key, weight: w });
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires weights > 0, got ${describeValue(w)} for ${key}`, { species: key, weight: w });
     }
     measuredIdx.push(s);
     measuredQ.push(rationalFromNumber(value));

@@ -32,7 +32,7 @@ import {
 } from "../numeric/safeRational.js";
 import { type StoichSystem, type YieldPair, buildSystem, resolveSpecies } from "./internal/extentSystem.js";
 import type { ExtentSpec, Flows } from "./types.js";
-import { optionsOf } from "../guards.js";
+import { optionsOf, describeValue } from "../guards.js";
 
 /**
  * Options of {@link solveExtents}.
@@ -166,7 +166,7 @@ export function solveExtents(input: SolveExtentsInput, options: SolveExtentsOpti
   }
   const arithmetic = options.arithmetic ?? "exact";
   if (arithmetic !== "exact" && arithmetic !== "float") {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires options.arithmetic "exact" or "float", got ${String(arithmetic)}`, { arithmetic });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires options.arithmetic "exact" or "float", got ${describeValue(arithmetic)}`, { arithmetic });
   }
   const sys = buildSystem(input.feed, input.reactions, fn);
   const specs = input.specs;
@@ -208,14 +208,14 @@ interface SpecRow {
 function specNumber(s: Record<string, unknown>, field: string, k: number, fn: string): number {
   const v = s[field];
   if (typeof v !== "number" || !Number.isFinite(v)) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn}: spec ${k} needs a finite number for ${field}, got ${String(v)}`, { spec: k, field, value: v });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn}: spec ${k} needs a finite number for ${field}, got ${describeValue(v)}`, { spec: k, field, value: v });
   }
   return v;
 }
 
 function specReaction(R: number, v: unknown, k: number, fn: string): number {
   if (typeof v !== "number" || !Number.isInteger(v) || v < 0 || v >= R) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn}: spec ${k} names reaction ${String(v)}, but reactions are numbered 0..${R - 1}`, {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn}: spec ${k} names reaction ${describeValue(v)}, but reactions are numbered 0..${R - 1}`, {
       spec: k,
       reaction: v,
     });

@@ -7,7 +7,7 @@ import { RxthermError } from "../errors.js";
 import { molarMassOf, validateFlows } from "./internal/extentSystem.js";
 import type { Flows } from "./types.js";
 import { compensatedSum } from "../numeric/compensatedSum.js";
-import { optionsOf } from "../guards.js";
+import { optionsOf, describeValue } from "../guards.js";
 
 /**
  * Options of the mass-flow conversions {@link massToMolarFlows} and {@link molarToMassFlows}.
@@ -80,6 +80,7 @@ export function molarToMassFlows(flows: Flows, options: MassFlowOptions = {}): F
  * @returns species key → mole fraction (dimensionless, sums to 1)
  * @throws {@link RxthermError} `INVALID_ARGUMENT` for an empty or all-zero stream or a non-finite flow
  * @throws {@link RxthermError} `NEGATIVE_FLOW` for a negative flow
+ * @throws formula parse errors (their own codes) for a key that is not a formula (`{ xyz: 1 }`, `__proto__`)
  * @example
  * moleFractions({ N2: 3, O2: 1 }) // => { N2: 0.75, O2: 0.25 }
  * @category Stoichiometry
@@ -87,7 +88,7 @@ export function molarToMassFlows(flows: Flows, options: MassFlowOptions = {}): F
  */
 export function moleFractions(flows: Flows): Record<string, number> {
   const fn = "moleFractions";
-  validateFlows(flows, fn, "flows", false);
+  validateFlows(flows, fn, "flows");
   const total = compensatedSum(Object.values(flows));
   if (!(total > 0)) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a stream with a positive total flow`, { total });
@@ -164,6 +165,6 @@ function unitFactor(options: MassFlowOptions, fn: string): number {
   const u = options.massUnit ?? "kg";
   if (u === "kg") return 1000;
   if (u === "g") return 1;
-  throw new RxthermError("INVALID_ARGUMENT", `${fn} requires massUnit "kg" or "g", got ${String(u)}`, { massUnit: u });
+  throw new RxthermError("INVALID_ARGUMENT", `${fn} requires massUnit "kg" or "g", got ${describeValue(u)}`, { massUnit: u });
 }
 

@@ -1,4 +1,5 @@
 import { RxthermError } from "../errors.js";
+import { describeValue } from "../guards.js";
 
 /**
  * Saturation (vapour) pressure of water between its triple point and critical point.
@@ -17,7 +18,7 @@ import { RxthermError } from "../errors.js";
  */
 export function waterSaturationPressure(temperatureK: number): number {
   if (typeof temperatureK !== "number" || !Number.isFinite(temperatureK) || temperatureK < 273.15 || temperatureK > 647.096) {
-    throw new RxthermError("OUT_OF_RANGE", `waterSaturationPressure requires 273.15 <= T <= 647.096 K, got ${String(temperatureK)}`, {
+    throw new RxthermError("OUT_OF_RANGE", `waterSaturationPressure requires 273.15 <= T <= 647.096 K, got ${describeValue(temperatureK)}`, {
       T: temperatureK,
       range: [273.15, 647.096],
     });

@@ -13,7 +13,7 @@ import {
   type Engine,
 } from "./internal/equilibriumEngine.js";
 import { resolveLimits } from "./internal/flameInput.js";
-import { optionsOf } from "../guards.js";
+import { optionsOf, describeValue } from "../guards.js";
 
 /**
  * What to bring to equilibrium, and at which conditions, for {@link equilibriumComposition}.
@@ -150,7 +150,7 @@ export function equilibriumComposition(input: EquilibriumInput, options: Equilib
   const lim = resolveLimits(fn, options);
   const P = input.P ?? ATMOSPHERE_PA;
   if (typeof P !== "number" || !(P > 0) || !Number.isFinite(P)) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires P > 0 Pa, got ${String(P)}`, { P });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires P > 0 Pa, got ${describeValue(P)}`, { P });
   }
   const hasT = input.T !== undefined;
   const hasH = input.H !== undefined;
@@ -158,10 +158,10 @@ export function equilibriumComposition(input: EquilibriumInput, options: Equilib
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires exactly one of T and H`, { T: input.T, H: input.H });
   }
   if (hasT && (typeof input.T !== "number" || !(input.T > 0) || !Number.isFinite(input.T))) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires T > 0 K, got ${String(input.T)}`, { T: input.T });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires T > 0 K, got ${describeValue(input.T)}`, { T: input.T });
   }
   if (hasH && (typeof input.H !== "number" || !Number.isFinite(input.H))) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a finite H in J, got ${String(input.H)}`, { H: input.H });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a finite H in J, got ${describeValue(input.H)}`, { H: input.H });
   }
   if (!Array.isArray(input.species) || input.species.length === 0) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a non-empty list of product species`, { species: input.species });
@@ -178,7 +178,7 @@ export function equilibriumComposition(input: EquilibriumInput, options: Equilib
   } else {
     const initial = options.initialT ?? 2000;
     if (!(initial > 0) || !Number.isFinite(initial)) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires initialT > 0 K, got ${String(initial)}`, { initialT: initial });
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires initialT > 0 K, got ${describeValue(initial)}`, { initialT: initial });
     }
     const sol = solveEnergy(engine, input.H!, "P", P, initial, lim);
     T = sol.T;
@@ -233,7 +233,7 @@ function elementTotals(fn: string, input: EquilibriumInput): Map<string, number>
   }
   for (const [key, n] of Object.entries(src)) {
     if (typeof n !== "number" || !Number.isFinite(n) || n < 0) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires every amount to be a finite number ≥ 0, got ${String(n)} for ${key}`, { species: key, amount: n });
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires every amount to be a finite number ≥ 0, got ${describeValue(n)} for ${key}`, { species: key, amount: n });
     }
     if (n === 0) continue;
     if (hasFeed) {

@@ -2,7 +2,7 @@ import { RxthermError } from "../errors.js";
 import { solveFlamePoint, type FlamePoint } from "./internal/flameProblem.js";
 import { flamePointOf, prepareFlameInput, toFlameResult } from "./internal/flameInput.js";
 import type { AdiabaticFlameInput, AdiabaticFlameOptions } from "./types.js";
-import { optionsOf } from "../guards.js";
+import { optionsOf, describeValue } from "../guards.js";
 
 /**
  * Which setting of an {@link AdiabaticFlameInput} a sweep varies, and over which values.
@@ -78,7 +78,7 @@ export function flameTemperatureSweep(input: AdiabaticFlameInput, sweep: FlameSw
   const { parameter } = sweep;
   const known = ["equivalenceRatio", "excessAir", "T", "fuelT", "oxidizerT", "P"];
   if (!known.includes(parameter)) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} cannot vary ${String(parameter)}; choose one of ${known.join(", ")}`, { parameter });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} cannot vary ${describeValue(parameter)}; choose one of ${known.join(", ")}`, { parameter });
   }
   const values = [...sweep.values];
   // validate every value up front (nothing half-done): each must be a valid input on its own

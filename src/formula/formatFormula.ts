@@ -1,7 +1,7 @@
 import { RxthermError } from "../errors.js";
 import { checkFormula } from "./internal/checkFormula.js";
 import type { Formula } from "./types.js";
-import { optionsOf } from "../guards.js";
+import { optionsOf, describeValue } from "../guards.js";
 
 /**
  * Options of {@link formatFormula}.
@@ -52,7 +52,7 @@ export function formatFormula(formula: Formula, options: FormatFormulaOptions = 
   checkFormula(formula, "formatFormula");
   const order = options.order ?? "hill";
   if (order !== "hill" && order !== "input") {
-    throw new RxthermError("INVALID_ARGUMENT", `formatFormula accepts order "hill" or "input", got ${String(order)}`, { order });
+    throw new RxthermError("INVALID_ARGUMENT", `formatFormula accepts order "hill" or "input", got ${describeValue(order)}`, { order });
   }
   const writeCharge = options.charge ?? true;
   const writePhase = options.phase ?? true;

@@ -2,6 +2,7 @@ import Decimal from "decimal.js";
 import { RxthermError, type RxthermErrorCode } from "../errors.js";
 import { ELEMENT_KEY_COUNT, INDEX_SYMBOLS, symbolIndex } from "./internal/elementIndex.js";
 import type { Formula, Phase } from "./types.js";
+import { describeValue } from "../guards.js";
 
 /**
  * The documented limits of the formula grammar. Text beyond them is refused with a clear error
@@ -787,7 +788,7 @@ function unknownElement(s: string, col: number, len: number, end: number): never
 }
 
 function describe(v: unknown): string {
-  if (typeof v === "number" || typeof v === "boolean" || typeof v === "bigint") return `${typeof v} ${String(v)}`;
+  if (typeof v === "number" || typeof v === "boolean" || typeof v === "bigint") return `${typeof v} ${describeValue(v)}`;
   if (v === null) return "null";
   return typeof v;
 }

@@ -1,7 +1,7 @@
 import { RxthermError } from "../errors.js";
 import * as compiled from "./internal/cpCompile.js";
 import type { CpRange, RangeOptions } from "./types.js";
-import { optionsOf } from "../guards.js";
+import { optionsOf, describeValue } from "../guards.js";
 
 // Module-local aliases of the compiled-form helpers. The hot paths call these per evaluation; a
 // local const binding is a direct reference that the JIT inlines, whereas some module loaders (the
@@ -151,7 +151,7 @@ export function createHeatCapacity(ranges: readonly CpRange[], options: CreateHe
   const label = options.label;
   const tol = options.boundaryToleranceK ?? 1e-6;
   if (typeof tol !== "number" || !(tol >= 0) || !Number.isFinite(tol)) {
-    throw new RxthermError("INVALID_ARGUMENT", `createHeatCapacity requires boundaryToleranceK >= 0, got ${String(tol)}`, { boundaryToleranceK: tol });
+    throw new RxthermError("INVALID_ARGUMENT", `createHeatCapacity requires boundaryToleranceK >= 0, got ${describeValue(tol)}`, { boundaryToleranceK: tol });
   }
   const sorted = prepareRanges("createHeatCapacity", label, ranges, tol);
   return new PiecewiseHeatCapacity(sorted, label);
@@ -408,7 +408,7 @@ class PiecewiseHeatCapacity implements HeatCapacity {
     if (typeof T !== "number" || !Number.isFinite(T) || T <= 0) {
       throw new RxthermError(
         "INVALID_ARGUMENT",
-        `${fn}${this.label ? ` (${this.label})` : ""} requires a finite temperature > 0 K, got ${String(T)}`,
+        `${fn}${this.label ? ` (${this.label})` : ""} requires a finite temperature > 0 K, got ${describeValue(T)}`,
         index === undefined ? { label: this.label, T } : { label: this.label, T, index },
       );
     }

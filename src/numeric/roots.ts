@@ -6,7 +6,7 @@
  * @module
  */
 import { RxthermError } from "../errors.js";
-import { optionsOf } from "../guards.js";
+import { optionsOf, describeValue } from "../guards.js";
 
 /**
  * Options of {@link findRoot}.
@@ -111,7 +111,7 @@ export function findRoot(
   const evaluate = (x: number): number => {
     const v = f(x);
     if (typeof v !== "number" || !Number.isFinite(v)) {
-      throw new RxthermError("INVALID_ARGUMENT", `findRoot requires f to return a finite number, got ${String(v)} at x = ${x}`, { x, value: v });
+      throw new RxthermError("INVALID_ARGUMENT", `findRoot requires f to return a finite number, got ${describeValue(v)} at x = ${x}`, { x, value: v });
     }
     return v;
   };
@@ -168,7 +168,7 @@ function resolveOptions(bracket: readonly [number, number], o: FindRootOptions):
   const bad = (msg: string, details: Record<string, unknown>): RxthermError =>
     new RxthermError("INVALID_ARGUMENT", `findRoot requires ${msg}`, details);
   if (!Array.isArray(bracket) || bracket.length !== 2 || !Number.isFinite(bracket[0]) || !Number.isFinite(bracket[1]) || bracket[0] === bracket[1]) {
-    throw bad(`a bracket of two different finite numbers, got ${String(bracket)}`, { bracket });
+    throw bad(`a bracket of two different finite numbers, got ${describeValue(bracket)}`, { bracket });
   }
   const toleranceX = o.toleranceX ?? 1e-10;
   const toleranceF = o.toleranceF ?? 0;
@@ -180,7 +180,7 @@ function resolveOptions(bracket: readonly [number, number], o: FindRootOptions):
   if (!Number.isInteger(maxIterations) || maxIterations < 1) throw bad(`an integer maxIterations >= 1, got ${maxIterations}`, { maxIterations });
   if (!Number.isInteger(maxExpansions) || maxExpansions < 0) throw bad(`an integer maxExpansions >= 0, got ${maxExpansions}`, { maxExpansions });
   if (!Array.isArray(limits) || limits.length !== 2 || Number.isNaN(limits[0]) || Number.isNaN(limits[1]) || !(limits[0] < limits[1])) {
-    throw bad(`limits [lower, upper] with lower < upper, got ${String(limits)}`, { limits });
+    throw bad(`limits [lower, upper] with lower < upper, got ${describeValue(limits)}`, { limits });
   }
   const a = Math.min(bracket[0], bracket[1]);
   const b = Math.max(bracket[0], bracket[1]);

@@ -20,7 +20,7 @@ import {
 } from "./internal/reactionTerms.js";
 import { parseReaction } from "./parseReaction.js";
 import type { Reaction, Term } from "./types.js";
-import { optionsOf } from "../guards.js";
+import { optionsOf, describeValue } from "../guards.js";
 
 /**
  * The species to balance: an equation text (its coefficients are ignored) or the species of
@@ -277,7 +277,7 @@ function readFixed(options: BalanceReactionOptions, keys: readonly string[]): Ma
       r = { num: 0n, den: 1n };
     }
     if (r.num <= 0n) {
-      throw new RxthermError("INVALID_ARGUMENT", `balanceReaction requires positive fixed coefficients, got ${String(value)} for "${species}"`, {
+      throw new RxthermError("INVALID_ARGUMENT", `balanceReaction requires positive fixed coefficients, got ${describeValue(value)} for "${species}"`, {
         species,
         value: String(value),
       });

@@ -2,6 +2,7 @@ import { RxthermError } from "../errors.js";
 import { rationalFrom, rationalMul, type Rational, type RationalLike } from "../numeric/rational.js";
 import { makeReaction, makeTerm, termCoefficient } from "./internal/reactionTerms.js";
 import type { Reaction, Term } from "./types.js";
+import { describeValue } from "../guards.js";
 
 /**
  * Multiply every coefficient of a reaction by a positive factor, exactly.
@@ -26,7 +27,7 @@ export function scaleReaction(reaction: Reaction, factor: RationalLike): Reactio
     k = { num: 0n, den: 1n };
   }
   if (k.num <= 0n) {
-    throw new RxthermError("INVALID_ARGUMENT", `scaleReaction requires a positive factor, got ${String(factor)} (use reverseReaction to swap sides)`, {
+    throw new RxthermError("INVALID_ARGUMENT", `scaleReaction requires a positive factor, got ${describeValue(factor)} (use reverseReaction to swap sides)`, {
       factor: String(factor),
     });
   }

@@ -7,7 +7,7 @@
  * @internal
  */
 import { RxthermError } from "../../errors.js";
-import { isDeepFrozen } from "../../guards.js";
+import { describeValue, isDeepFrozen, requireRecord } from "../../guards.js";
 import { molarMass } from "../../formula/molarMass.js";
 import { parseFormula } from "../../formula/parseFormula.js";
 import type { Formula } from "../../formula/types.js";
@@ -41,6 +41,10 @@ export interface PreparedReaction {
 }
 
 const FORMULA_CACHE_LIMIT = 2048;
+/** Largest flow magnitude accepted (mol or mol/s); larger values overflow sums of squares and mass flows. */
+export const MAX_FLOW = 1e100;
+/** Most species in one stream or feed. */
+export const MAX_STREAM_SPECIES = 10_000;
 const formulaCache = new Map<string, Formula>();
 const reactionTextCache = new Map<string, PreparedReaction>();
 const reactionObjectCache = new WeakMap<object, PreparedReaction>();
@@ -84,11 +88,18 @@ export function molarMassOf(key: string, fn: string, role: string): number {
  */
 export function validateFlows(flows: Flows, fn: string, role: string, parseKeys = true): void {
   if (flows === null || typeof flows !== "object" || Array.isArray(flows)) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${role} to be an object of species flows`, { role });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${role} to be an object of species flows`, { role, path: role });
   }
-  for (const [key, value] of Object.entries(flows)) {
-    if (typeof value !== "number" || !Number.isFinite(value)) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires finite numeric ${role} flows, got ${String(value)} for ${key}`, {
+  requireRecord(flows, fn, role);
+  const entries = Object.entries(flows);
+  if (entries.length > MAX_STREAM_SPECIES) {
+    throw new RxthermError("TOO_LARGE", `${fn} accepts at most ${MAX_STREAM_SPECIES} species in ${role}, got ${entries.length}`, {
+      role, path: role, limit: MAX_STREAM_SPECIES, size: entries.length,
+    });
+  }
+  for (const [key, value] of entries) {
+    if (typeof value !== "number" || !Number.isFinite(value) || Math.abs(value) > MAX_FLOW) {
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires finite numeric ${role} flows of at most ${MAX_FLOW} in magnitude, got ${describeValue(value)} for ${key}`, {
         role,
         species: key,
         value,

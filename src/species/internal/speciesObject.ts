@@ -15,7 +15,7 @@ import { GAS_CONSTANT_J_PER_MOL_K, STANDARD_PRESSURE_PA, STANDARD_TEMPERATURE_K 
 import type { SpeciesEntry } from "../schema.js";
 import type { Species, SpeciesEvaluation, SpeciesTransition } from "../types.js";
 import { readSpeciesFormula } from "./speciesFormula.js";
-import { deepFreeze } from "../../guards.js";
+import { deepFreeze, describeValue } from "../../guards.js";
 
 const D = /* @__PURE__ */ Decimal.clone({ precision: 34, rounding: Decimal.ROUND_HALF_EVEN });
 const EXTEND: RangeOptions = Object.freeze({ extrapolate: true });
@@ -160,7 +160,7 @@ class TabulatedSpecies implements Species {
   private pressureTerm(fn: string, P: number | undefined): number {
     if (P === undefined) return 0;
     if (typeof P !== "number" || !Number.isFinite(P) || P <= 0) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} (${this.key}) requires a finite pressure > 0 Pa, got ${String(P)}`, { species: this.key, P });
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} (${this.key}) requires a finite pressure > 0 Pa, got ${describeValue(P)}`, { species: this.key, P });
     }
     return this.gas ? GAS_CONSTANT_J_PER_MOL_K * Math.log(P / STANDARD_PRESSURE_PA) : 0;
   }
@@ -168,7 +168,7 @@ class TabulatedSpecies implements Species {
   /** Validate T; true when outside the range and extrapolation is allowed; otherwise throws. */
   private check(fn: string, T: number, options: RangeOptions | undefined): boolean {
     if (typeof T !== "number" || !Number.isFinite(T) || T <= 0) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} (${this.key}) requires a finite temperature > 0 K, got ${String(T)}`, { species: this.key, T });
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} (${this.key}) requires a finite temperature > 0 K, got ${describeValue(T)}`, { species: this.key, T });
     }
     if (T >= this.tMin && T <= this.tMax) return false;
     if (options?.extrapolate === true) return true;
