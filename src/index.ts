@@ -78,7 +78,7 @@ export { waterSaturationPressure } from "./extent/waterSaturationPressure.js";
 export type {
   CpForm, ShomateForm, PolynomialForm, Nasa7Form, Nasa9Form, ConstantCpForm, TabulatedCpForm, CpRange, RangeOptions,
 } from "./heat-capacity/types.js";
-export { createHeatCapacity } from "./heat-capacity/createHeatCapacity.js";
+export { createHeatCapacity, MAX_CP_TABLE_POINTS, MAX_CP_RANGES } from "./heat-capacity/createHeatCapacity.js";
 export type { HeatCapacity, HeatCapacityValue, CreateHeatCapacityOptions } from "./heat-capacity/createHeatCapacity.js";
 export { boundaryJumps } from "./heat-capacity/boundaryJumps.js";
 export type { BoundaryJump } from "./heat-capacity/boundaryJumps.js";
@@ -95,7 +95,7 @@ export { createLibrary } from "./species/createLibrary.js";
 export type { CreateLibraryOptions } from "./species/createLibrary.js";
 export { builtInLibrary } from "./species/builtInLibrary.js";
 export {
-  validateSpeciesData, MAX_ABS_HF298_KJ_PER_MOL, MAX_CP_J_PER_MOL_K, MAX_S298_J_PER_MOL_K, MAX_LOWEST_TMIN_K,
+  validateSpeciesData, MAX_SPECIES_PER_DATA, MAX_ABS_HF298_KJ_PER_MOL, MAX_CP_J_PER_MOL_K, MAX_S298_J_PER_MOL_K, MAX_LOWEST_TMIN_K,
 } from "./species/validateSpeciesData.js";
 export type { SpeciesDataIssue, ValidateSpeciesDataOptions } from "./species/validateSpeciesData.js";
 export {

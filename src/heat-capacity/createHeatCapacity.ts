@@ -7,6 +7,7 @@ import { optionsOf, describeValue } from "../guards.js";
 // local const binding is a direct reference that the JIT inlines, whereas some module loaders (the
 // CommonJS interop of TypeScript runners) turn every imported name into a getter call.
 const { REFERENCE_T_K, STRIDE, H_0, H_1, H_2, H_3, H_4, H_5, H_INV, H_LN, S_0 } = compiled;
+export { MAX_CP_TABLE_POINTS, MAX_CP_RANGES } from "./internal/cpCompile.js";
 const { absoluteConstants, cpAt, hAt, sAt, segmentIndex, writeSegment, prepareRanges, rangePieces } = compiled;
 
 /**
@@ -233,7 +234,33 @@ class PiecewiseHeatCapacity implements HeatCapacity {
       this.absS[i] = c.sConstJPerMolK - this.k[i * STRIDE + S_0]!;
     }
     this.hasAbsoluteConstants = all;
+    this.checkValues();
     Object.freeze(this);
+  }
+
+  /**
+   * Cp must be finite and > 0, and H and S finite, over every segment (checked at its ends and
+   * 7 interior points): coefficients like 1e308 or a negative Cp are INVALID_DATA, never NaN later.
+   */
+  private checkValues(): void {
+    for (let i = 0; i < this.n; i++) {
+      const lo = i === 0 ? this.TminK : this.upper[i - 1]!;
+      const hi = this.upper[i]!;
+      const o = i * STRIDE;
+      for (let j = 0; j <= 8; j++) {
+        const T = j === 8 ? hi : lo + ((hi - lo) * j) / 8;
+        const cp = cpAt(this.k, o, T);
+        const bad = !(cp > 0 && cp < Infinity) ? "a finite Cp > 0" : !Number.isFinite(hAt(this.k, o, T)) || !Number.isFinite(sAt(this.k, o, T)) ? "finite H and S integrals" : null;
+        if (bad !== null) {
+          const range = this.rangeOf[i]!;
+          throw new RxthermError(
+            "INVALID_DATA",
+            `createHeatCapacity${this.label ? ` (${this.label})` : ""}: ${bad} is required over the range, got Cp = ${cp} J/(mol·K) at ${T} K`,
+            { label: this.label, path: ["ranges", range, "cp"], T, cp, issues: [{ path: ["ranges", range, "cp"], message: `${bad} is required` }] },
+          );
+        }
+      }
+    }
   }
 
   // ── scalar evaluations ────────────────────────────────────────────────────

@@ -19,6 +19,7 @@ import { deepFreeze, describeValue } from "../../guards.js";
 
 const D = /* @__PURE__ */ Decimal.clone({ precision: 34, rounding: Decimal.ROUND_HALF_EVEN });
 const EXTEND: RangeOptions = Object.freeze({ extrapolate: true });
+const LN_STANDARD_PRESSURE = Math.log(STANDARD_PRESSURE_PA);
 
 /** Build the Species of a validated entry (the entry is copied, never kept). */
 export function buildSpecies(entry: SpeciesEntry): Species {
@@ -162,7 +163,8 @@ class TabulatedSpecies implements Species {
     if (typeof P !== "number" || !Number.isFinite(P) || P <= 0) {
       throw new RxthermError("INVALID_ARGUMENT", `${fn} (${this.key}) requires a finite pressure > 0 Pa, got ${describeValue(P)}`, { species: this.key, P });
     }
-    return this.gas ? GAS_CONSTANT_J_PER_MOL_K * Math.log(P / STANDARD_PRESSURE_PA) : 0;
+    // ln P − ln P° rather than ln(P/P°): the quotient underflows to 0 for P near 5e-324 Pa
+    return this.gas ? GAS_CONSTANT_J_PER_MOL_K * (Math.log(P) - LN_STANDARD_PRESSURE) : 0;
   }
 
   /** Validate T; true when outside the range and extrapolation is allowed; otherwise throws. */
