@@ -121,3 +121,37 @@ export function requireArray(value: unknown, fn: string, path: string, maxLength
   }
   return value;
 }
+
+/**
+ * Return `result` after checking that no number in it (plain objects and arrays, depth ≤ 5) is
+ * NaN or ±Infinity; otherwise INVALID_ARGUMENT naming the result path: the inputs spanned more
+ * than float64 holds (e.g. 1e308 flows, 5e-324 amounts). The last check before a result is returned.
+ */
+export function finiteResult<T>(result: T, fn: string): T {
+  const bad = firstNonFinite(result, "", 5);
+  if (bad !== null) {
+    throw new RxthermError(
+      "INVALID_ARGUMENT",
+      `${fn} cannot represent its result: ${bad.path || "the value"} would be ${bad.value} (inputs outside the range float64 arithmetic can carry)`,
+      { path: bad.path, value: String(bad.value) },
+    );
+  }
+  return result;
+}
+
+function firstNonFinite(v: unknown, path: string, depth: number): { path: string; value: number } | null {
+  if (typeof v === "number") return Number.isFinite(v) ? null : { path, value: v };
+  if (depth === 0 || typeof v !== "object" || v === null) return null;
+  if (ArrayBuffer.isView(v)) {
+    const a = v as unknown as ArrayLike<number>;
+    for (let i = 0; i < a.length; i++) if (typeof a[i] === "number" && !Number.isFinite(a[i])) return { path: `${path}[${i}]`, value: a[i] as number };
+    return null;
+  }
+  const proto = Object.getPrototypeOf(v) as unknown;
+  if (proto !== Object.prototype && proto !== null && !Array.isArray(v)) return null; // class instances check themselves
+  for (const k of Object.keys(v)) {
+    const r = firstNonFinite((v as Record<string, unknown>)[k], path ? `${path}.${k}` : k, depth - 1);
+    if (r !== null) return r;
+  }
+  return null;
+}

@@ -140,6 +140,6 @@ export { equilibriumComposition } from "./flame/equilibriumComposition.js";
 export type { EquilibriumInput, EquilibriumOptions, EquilibriumResult } from "./flame/equilibriumComposition.js";
 export { adiabaticFlameTemperature } from "./flame/adiabaticFlameTemperature.js";
 export type { AdiabaticFlameInput, AdiabaticFlameOptions, AdiabaticFlameResult } from "./flame/adiabaticFlameTemperature.js";
-export { flameTemperatureSweep } from "./flame/flameTemperatureSweep.js";
+export { flameTemperatureSweep, MAX_SWEEP_POINTS } from "./flame/flameTemperatureSweep.js";
 export type { FlameSweep, FlameSweepResult } from "./flame/flameTemperatureSweep.js";
 export { DEFAULT_FLAME_PRODUCTS } from "./flame/flameDefaults.js";

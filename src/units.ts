@@ -9,7 +9,7 @@
  * @module
  */
 import { RxthermError } from "./errors.js";
-import { describeValue } from "./guards.js";
+import { describeValue, finiteResult } from "./guards.js";
 
 /** Temperature units accepted by {@link toKelvin} and {@link fromKelvin}. @category Units */
 export type TemperatureUnit = "K" | "C" | "F" | "R";
@@ -97,7 +97,7 @@ export function toPascal(value: number, unit: PressureUnit): number {
   finite(value, "toPascal");
   const f = PRESSURE_PA[unit];
   if (f === undefined) throw badUnit("toPascal", unit);
-  return value * f;
+  return finiteResult(value * f, "toPascal");
 }
 
 /**
@@ -114,7 +114,7 @@ export function toJoule(value: number, unit: EnergyUnit): number {
   finite(value, "toJoule");
   const f = ENERGY_J[unit];
   if (f === undefined) throw badUnit("toJoule", unit);
-  return value * f;
+  return finiteResult(value * f, "toJoule");
 }
 
 /**
@@ -131,7 +131,7 @@ export function toMol(value: number, unit: AmountUnit): number {
   finite(value, "toMol");
   const f = AMOUNT_MOL[unit];
   if (f === undefined) throw badUnit("toMol", unit);
-  return value * f;
+  return finiteResult(value * f, "toMol");
 }
 
 function finite(value: number, fn: string): void {

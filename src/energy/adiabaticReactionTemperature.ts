@@ -195,7 +195,7 @@ function solveAdiabatic(fn: string, input: AdiabaticReactionInput, options: Adia
     outSpecies.push(resolveSpeciesCached(fn, k, library));
     outFlows.push(n);
   }
-  const limits = options.limitsK ?? defaultLimits(outSpecies, extrapolate);
+  const limits = options.limitsK === undefined ? defaultLimits(outSpecies, extrapolate) : limitsOf(options.limitsK, fn);
   let outGas = 0;
   for (let i = 0; i < outSpecies.length; i++) if (outSpecies[i]!.phase === "g") outGas += outFlows[i]!;
   const rOutGas = rigid ? GAS_CONSTANT_J_PER_MOL_K * outGas : 0;
@@ -231,7 +231,7 @@ function solveAdiabatic(fn: string, input: AdiabaticReactionInput, options: Adia
   if (resolved.some((r) => r.T !== startT)) {
     const mixSpecies = resolved.flatMap((r) => r.species);
     const mixFlows = resolved.flatMap((r) => r.flows);
-    const mixLimits = options.limitsK ?? defaultLimits(mixSpecies, extrapolate);
+    const mixLimits = options.limitsK === undefined ? defaultLimits(mixSpecies, extrapolate) : limitsOf(options.limitsK, fn);
     const mix = findRoot((T) => {
       let h = 0;
       for (let i = 0; i < mixSpecies.length; i++) {
@@ -261,4 +261,17 @@ function defaultLimits(species: readonly Species[], extrapolate: boolean): [numb
 
 function clamp(x: number, [lo, hi]: readonly [number, number]): number {
   return Math.min(hi, Math.max(lo, x));
+}
+
+/** options.limitsK checked: a pair [low, high] of finite temperatures with 0 < low < high (K). */
+function limitsOf(limits: unknown, fn: string): readonly [number, number] {
+  const ok = Array.isArray(limits) && limits.length === 2 && typeof limits[0] === "number" && typeof limits[1] === "number" &&
+    Number.isFinite(limits[0]) && Number.isFinite(limits[1]) && limits[0] > 0 && limits[1] > limits[0];
+  if (!ok) {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires options.limitsK to be [low, high] in K with 0 < low < high, got ${describeValue(limits)}`, {
+      path: "options.limitsK",
+      value: describeValue(limits),
+    });
+  }
+  return limits as unknown as readonly [number, number];
 }

@@ -5,7 +5,7 @@ import type { Reaction } from "../reaction/types.js";
 import type { Stream } from "../extent/types.js";
 import { resolveStream, type Entry, type ResolvedStream } from "./internal/energyStreams.js";
 import { prepareReaction, standardEnthalpyExact } from "../enthalpy/preparedReaction.js";
-import { optionsOf, describeValue } from "../guards.js";
+import { describeValue, finiteResult, optionsOf } from "../guards.js";
 
 /**
  * Streams and optional reactions of an energy balance, for {@link heatDuty}.
@@ -224,7 +224,7 @@ export function heatDuty(input: HeatDutyInput, options: HeatDutyOptions = {}): H
   let latentHeat = 0;
   for (const p of phaseChanges) latentHeat += p.heat;
 
-  return {
+  return finiteResult({
     duty: method === "formation" ? formation : reaction,
     method,
     formation,
@@ -237,7 +237,7 @@ export function heatDuty(input: HeatDutyInput, options: HeatDutyOptions = {}): H
     phaseChanges,
     pvTerm: clean(pvTerm),
     warnings,
-  };
+  }, "heatDuty");
 }
 
 const EXTRAPOLATE = Object.freeze({ extrapolate: true });

@@ -4,7 +4,7 @@ import { formulaOf, molarMassOf, validateFlows } from "./internal/extentSystem.j
 import type { Flows } from "./types.js";
 import { waterSaturationPressure } from "./waterSaturationPressure.js";
 import { compensatedSum } from "../numeric/compensatedSum.js";
-import { describeValue } from "../guards.js";
+import { describeValue, finiteResult, requireRecord } from "../guards.js";
 
 /**
  * Dry air by mole fraction, the default oxidizer of {@link combustion}: O₂ 0.209476 and Ar
@@ -247,7 +247,7 @@ export function combustion(input: CombustionInput): CombustionResult {
   }
   const airMassKg = massKg(airFlows, fn);
   const dryOxidizerMolarMass = compensatedSum(Object.entries(oxidizer).map(([k, y]) => y * molarMassOf(k, fn, "oxidizer")));
-  return {
+  return finiteResult({
     theoreticalO2,
     theoreticalAir,
     air,
@@ -266,7 +266,7 @@ export function combustion(input: CombustionInput): CombustionResult {
     airToFuelMass: airMassKg / fuel.massKg,
     theoreticalAirToFuelMass: (theoreticalAir * dryOxidizerMolarMass) / 1000 / fuel.massKg,
     ashKg: fuel.ashKg,
-  };
+  }, fn);
 }
 
 interface FuelElements {
@@ -285,6 +285,7 @@ function fuelElements(fuelIn: CombustionInput["fuel"], fn: string): FuelElements
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires fuel as species flows or { ultimate }`, {});
   }
   if ("ultimate" in fuelIn && typeof fuelIn.ultimate === "object") {
+    requireRecord(fuelIn.ultimate, fn, "fuel.ultimate"); // null or an array is INVALID_ARGUMENT, not a TypeError
     return ultimateElements(fuelIn as UltimateFuel, fn);
   }
   const flows = fuelIn as Flows;

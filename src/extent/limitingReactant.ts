@@ -13,6 +13,7 @@ import {
 } from "../numeric/rational.js";
 import { buildSystem } from "./internal/extentSystem.js";
 import type { Flows } from "./types.js";
+import { finiteResult } from "../guards.js";
 
 /**
  * Result of {@link limitingReactant}. Amounts in the feed's unit (mol or mol/s).
@@ -94,12 +95,12 @@ export function limitingReactant(feed: Flows, reaction: Reaction | string): Limi
   sys.species.forEach((key, s) => {
     outletAtMaxExtent[key] = rationalToNumber(rationalAdd(sys.feedQ[s] as Rational, rationalMul(row[s] as Rational, maxQ)));
   });
-  return {
+  return finiteResult({
     species: limiting[0] as string,
     limiting,
     maxExtent: rationalToNumber(maxQ),
     excess,
     runOut,
     outletAtMaxExtent,
-  };
+  }, "limitingReactant");
 }

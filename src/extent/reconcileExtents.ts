@@ -13,7 +13,7 @@ import {
 import { solveLinearSystem } from "../numeric/linearAlgebra.js";
 import { buildSystem, resolveSpecies, validateFlows } from "./internal/extentSystem.js";
 import type { Flows } from "./types.js";
-import { optionsOf, describeValue } from "../guards.js";
+import { describeValue, finiteResult, optionsOf } from "../guards.js";
 
 /**
  * Input of {@link reconcileExtents}.
@@ -198,14 +198,14 @@ export function reconcileExtents(input: ReconcileExtentsInput, options: Reconcil
     closurePercent[el] = rationalToNumber(rationalMul(rationalDiv(elOut.get(el) ?? ZERO, vin), rationalFromNumber(100)));
   }
   const unmeasured = sys.species.filter((_, s) => !seen.has(s));
-  return {
+  return finiteResult({
     extents: xi.map(rationalToNumber),
     outlet,
     residuals,
     sumOfSquares: rationalToNumber(ss),
     closurePercent,
     unmeasured,
-  };
+  }, fn);
 }
 
 const ZERO: Rational = rationalFromNumber(0);

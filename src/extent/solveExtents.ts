@@ -32,7 +32,7 @@ import {
 } from "../numeric/safeRational.js";
 import { type StoichSystem, type YieldPair, buildSystem, resolveSpecies } from "./internal/extentSystem.js";
 import type { ExtentSpec, Flows } from "./types.js";
-import { optionsOf, describeValue } from "../guards.js";
+import { describeValue, finiteResult, optionsOf } from "../guards.js";
 
 /**
  * Options of {@link solveExtents}.
@@ -189,9 +189,9 @@ export function solveExtents(input: SolveExtentsInput, options: SolveExtentsOpti
   for (let k = 0; k < specs.length; k++) rows.push(specRow(sys, specs[k] as ExtentSpec, k, fn));
   if (arithmetic === "float") {
     const fast = solveIn(FLOAT, sys, rows, fn);
-    if (fast !== null) return fast;
+    if (fast !== null) return finiteResult(fast, fn);
   }
-  return solveExactPath(sys, rows, fn);
+  return finiteResult(solveExactPath(sys, rows, fn), fn);
 }
 
 /** One linear equation Σⱼ a[j] ξⱼ = b built from a spec: in float now, exactly on demand. */

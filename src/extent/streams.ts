@@ -7,7 +7,7 @@ import { RxthermError } from "../errors.js";
 import { molarMassOf, validateFlows } from "./internal/extentSystem.js";
 import type { Flows } from "./types.js";
 import { compensatedSum } from "../numeric/compensatedSum.js";
-import { optionsOf, describeValue } from "../guards.js";
+import { describeValue, finiteResult, optionsOf } from "../guards.js";
 
 /**
  * Options of the mass-flow conversions {@link massToMolarFlows} and {@link molarToMassFlows}.
@@ -45,7 +45,7 @@ export function massToMolarFlows(massFlows: Flows, options: MassFlowOptions = {}
   validateFlows(massFlows, fn, "mass");
   const out: Flows = {};
   for (const [key, m] of Object.entries(massFlows)) out[key] = (m * factor) / molarMassOf(key, fn, "mass");
-  return out;
+  return finiteResult(out, "massToMolarFlows");
 }
 
 /**
@@ -70,7 +70,7 @@ export function molarToMassFlows(flows: Flows, options: MassFlowOptions = {}): F
   validateFlows(flows, fn, "flows");
   const out: Flows = {};
   for (const [key, n] of Object.entries(flows)) out[key] = (n * molarMassOf(key, fn, "flows")) / factor;
-  return out;
+  return finiteResult(out, "molarToMassFlows");
 }
 
 /**
@@ -158,7 +158,7 @@ export function totalMassFlow(flows: Flows, options: MassFlowOptions = {}): numb
   const fn = "totalMassFlow";
   const factor = unitFactor(options, fn);
   validateFlows(flows, fn, "flows");
-  return compensatedSum(Object.entries(flows).map(([key, n]) => n * molarMassOf(key, fn, "flows"))) / factor;
+  return finiteResult(compensatedSum(Object.entries(flows).map(([key, n]) => n * molarMassOf(key, fn, "flows"))) / factor, fn);
 }
 
 function unitFactor(options: MassFlowOptions, fn: string): number {

@@ -2,7 +2,7 @@ import { RxthermError } from "../errors.js";
 import { solveFlamePoint, type FlamePoint } from "./internal/flameProblem.js";
 import { flamePointOf, prepareFlameInput, toFlameResult } from "./internal/flameInput.js";
 import type { AdiabaticFlameInput, AdiabaticFlameOptions } from "./types.js";
-import { optionsOf, describeValue } from "../guards.js";
+import { describeValue, optionsOf, requireArray } from "../guards.js";
 
 /**
  * Which setting of an {@link AdiabaticFlameInput} a sweep varies, and over which values.
@@ -48,6 +48,16 @@ export interface FlameSweepResult {
 }
 
 /**
+ * Most points in one flame-temperature sweep; a longer sweep is TOO_LARGE (split it: each point
+ * is a full flame solve).
+ *
+ * @category Flame
+ * @example
+ * MAX_SWEEP_POINTS // => 1000
+ */
+export const MAX_SWEEP_POINTS = 1000;
+
+/**
  * Adiabatic flame temperature over a range of one setting — equivalence ratio, excess air,
  * reactant or preheat temperature, or pressure — for plotting or screening.
  *
@@ -80,6 +90,15 @@ export function flameTemperatureSweep(input: AdiabaticFlameInput, sweep: FlameSw
   if (!known.includes(parameter)) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} cannot vary ${describeValue(parameter)}; choose one of ${known.join(", ")}`, { parameter });
   }
+  requireArray(sweep.values, fn, "sweep.values", MAX_SWEEP_POINTS);
+  sweep.values.forEach((v, i) => {
+    // null or a non-number would silently mean "the default" (φ = 1, 101 325 Pa) for that point
+    if (typeof v !== "number" || !Number.isFinite(v)) {
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires every sweep value to be a finite number, got ${describeValue(v)} at index ${i}`, {
+        path: `sweep.values[${i}]`, index: i, value: describeValue(v),
+      });
+    }
+  });
   const values = [...sweep.values];
   // validate every value up front (nothing half-done): each must be a valid input on its own
   const points: FlamePoint[] = [];

@@ -20,7 +20,7 @@ import {
 } from "./internal/reactionTerms.js";
 import { parseReaction } from "./parseReaction.js";
 import type { Reaction, Term } from "./types.js";
-import { optionsOf, describeValue } from "../guards.js";
+import { describeValue, optionsOf, requireArray } from "../guards.js";
 
 /**
  * The species to balance: an equation text (its coefficients are ignored) or the species of
@@ -212,6 +212,8 @@ function readInput(input: BalanceInput): { entries: SpeciesEntry[]; signs: numbe
     reactants = r.reactants.map(strip);
     products = r.products.map(strip);
   } else if (input !== null && typeof input === "object" && Array.isArray(input.reactants) && Array.isArray(input.products)) {
+    requireArray(input.reactants, "balanceReaction", "input.reactants");
+    requireArray(input.products, "balanceReaction", "input.products");
     reactants = input.reactants.map((s, i) => entryOf(s, "reactants", i));
     products = input.products.map((s, i) => entryOf(s, "products", i));
   } else {

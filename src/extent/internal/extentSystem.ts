@@ -7,7 +7,7 @@
  * @internal
  */
 import { RxthermError } from "../../errors.js";
-import { describeValue, isDeepFrozen, requireRecord } from "../../guards.js";
+import { describeValue, isDeepFrozen, requireArray, requireRecord } from "../../guards.js";
 import { molarMass } from "../../formula/molarMass.js";
 import { parseFormula } from "../../formula/parseFormula.js";
 import type { Formula } from "../../formula/types.js";
@@ -287,10 +287,15 @@ export function buildSystem(feed: Flows, reactions: readonly (Reaction | string)
   if (!Array.isArray(reactions) || reactions.length === 0) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires at least one reaction`, { reactions: Array.isArray(reactions) ? 0 : typeof reactions });
   }
+  requireArray(reactions, fn, "reactions");
   const feedKeys = Object.keys(feed);
   const last = lastStructure.get(reactions);
   let st: StoichStructure | undefined;
-  if (last !== undefined && sameItems(last.items, reactions) && sameItems(last.feedKeys, feedKeys)) st = last.structure;
+  // reuse only while every item is text or deeply frozen: an unfrozen reaction may have been edited in place
+  if (
+    last !== undefined && sameItems(last.items, reactions) && sameItems(last.feedKeys, feedKeys) &&
+    reactions.every((r) => typeof r === "string" || isDeepFrozen(r))
+  ) st = last.structure;
   else st = structureFor(feedKeys, reactions, fn);
   const feedF: number[] = new Array<number>(st.species.length).fill(0);
   for (let i = 0; i < st.feedCount; i++) feedF[i] = feed[feedKeys[i] as string] as number;
