@@ -118,6 +118,10 @@ export function nonFinite(v: unknown, path = "result", depth = 6, out: string[] 
     for (let i = 0; i < a.length; i++) if (typeof a[i] === "number" && !Number.isFinite(a[i])) out.push(`${path}[${i}] = ${a[i]}`);
     return out;
   }
+  // class instances (Species, HeatCapacity, Library) keep private sentinels such as ±Infinity
+  // bounds; their public numbers are checked through their own methods by their own tests
+  const proto = Object.getPrototypeOf(v) as unknown;
+  if (proto !== Object.prototype && proto !== null && !Array.isArray(v)) return out;
   for (const k of Object.keys(v)) nonFinite((v as Record<string, unknown>)[k], `${path}.${k}`, depth - 1, out);
   return out;
 }
