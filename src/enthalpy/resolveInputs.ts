@@ -13,6 +13,7 @@ import { libraryOf, species } from "../species/species.js";
 import { parseReaction } from "../reaction/parseReaction.js";
 import { checkBalance } from "../reaction/checkBalance.js";
 import { describeValue } from "../guards.js";
+import { checkReactionShape } from "../reaction/checkReactionShape.js";
 
 /**
  * The species `key` from `library`, or from the built-in set when no library is given.
@@ -53,9 +54,7 @@ export function resolveSpeciesCached(fn: string, key: string, library: Library |
 /** A reaction object from a Reaction or its text. */
 export function toReaction(fn: string, reaction: Reaction | string): Reaction {
   if (typeof reaction === "string") return parseReactionText(fn, reaction);
-  if (reaction === null || typeof reaction !== "object" || !Array.isArray(reaction.reactants) || !Array.isArray(reaction.products)) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a reaction (text or parsed Reaction), got ${describeValue(reaction)}`, { reaction });
-  }
+  checkReactionShape(reaction, fn);
   return reaction;
 }
 

@@ -107,6 +107,9 @@ export function findRoot(
   options: FindRootOptions = {},
 ): RootResult {
   options = optionsOf(options, "findRoot");
+  if (typeof f !== "function") {
+    throw new RxthermError("INVALID_ARGUMENT", `findRoot requires f to be a function, got ${describeValue(f)}`, { path: "f" });
+  }
   const opts = resolveOptions(bracket, options);
   const evaluate = (x: number): number => {
     const v = f(x);
@@ -175,11 +178,11 @@ function resolveOptions(bracket: readonly [number, number], o: FindRootOptions):
   const maxIterations = o.maxIterations ?? 200;
   const maxExpansions = o.maxExpansions ?? 60;
   const limits = o.limits ?? [-Infinity, Infinity];
-  if (!(toleranceX > 0) || !Number.isFinite(toleranceX)) throw bad(`toleranceX > 0, got ${toleranceX}`, { toleranceX });
-  if (!(toleranceF >= 0) || !Number.isFinite(toleranceF)) throw bad(`toleranceF >= 0, got ${toleranceF}`, { toleranceF });
-  if (!Number.isInteger(maxIterations) || maxIterations < 1) throw bad(`an integer maxIterations >= 1, got ${maxIterations}`, { maxIterations });
-  if (!Number.isInteger(maxExpansions) || maxExpansions < 0) throw bad(`an integer maxExpansions >= 0, got ${maxExpansions}`, { maxExpansions });
-  if (!Array.isArray(limits) || limits.length !== 2 || Number.isNaN(limits[0]) || Number.isNaN(limits[1]) || !(limits[0] < limits[1])) {
+  if (typeof toleranceX !== "number" || !(toleranceX > 0) || !Number.isFinite(toleranceX)) throw bad(`toleranceX > 0, got ${describeValue(toleranceX)}`, { toleranceX });
+  if (typeof toleranceF !== "number" || !(toleranceF >= 0) || !Number.isFinite(toleranceF)) throw bad(`toleranceF >= 0, got ${describeValue(toleranceF)}`, { toleranceF });
+  if (!Number.isInteger(maxIterations) || maxIterations < 1) throw bad(`an integer maxIterations >= 1, got ${describeValue(maxIterations)}`, { maxIterations });
+  if (!Number.isInteger(maxExpansions) || maxExpansions < 0) throw bad(`an integer maxExpansions >= 0, got ${describeValue(maxExpansions)}`, { maxExpansions });
+  if (!Array.isArray(limits) || limits.length !== 2 || typeof limits[0] !== "number" || typeof limits[1] !== "number" || Number.isNaN(limits[0]) || Number.isNaN(limits[1]) || !(limits[0] < limits[1])) {
     throw bad(`limits [lower, upper] with lower < upper, got ${describeValue(limits)}`, { limits });
   }
   const a = Math.min(bracket[0], bracket[1]);

@@ -11,6 +11,7 @@ import {
 import { termCoefficient } from "./internal/reactionTerms.js";
 import { parseReaction } from "./parseReaction.js";
 import type { Reaction, Term } from "./types.js";
+import { checkReactionShape } from "./checkReactionShape.js";
 
 /**
  * Result of {@link checkBalance}: residuals are products − reactants.
@@ -55,6 +56,7 @@ export interface BalanceCheck {
  */
 export function checkBalance(reaction: Reaction | string): BalanceCheck {
   const r = typeof reaction === "string" ? parseReaction(reaction) : reaction;
+  checkReactionShape(r, "checkBalance");
   if (r === null || typeof r !== "object" || !Array.isArray(r.reactants) || !Array.isArray(r.products)) {
     throw new RxthermError("INVALID_ARGUMENT", "checkBalance requires an equation text or a reaction { reactants, products }", {});
   }

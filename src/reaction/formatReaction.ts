@@ -3,6 +3,7 @@ import { termCoefficient } from "./internal/reactionTerms.js";
 import { rationalToNumber, rationalToString } from "../numeric/rational.js";
 import type { Reaction, Term } from "./types.js";
 import { optionsOf } from "../guards.js";
+import { checkReactionShape } from "./checkReactionShape.js";
 
 /**
  * Options of {@link formatReaction}.
@@ -43,9 +44,7 @@ export interface FormatReactionOptions {
  */
 export function formatReaction(reaction: Reaction, options: FormatReactionOptions = {}): string {
   options = optionsOf(options, "formatReaction");
-  if (reaction === null || typeof reaction !== "object" || !Array.isArray(reaction.reactants) || !Array.isArray(reaction.products)) {
-    throw new RxthermError("INVALID_ARGUMENT", "formatReaction requires a reaction { reactants, products }", {});
-  }
+  checkReactionShape(reaction, "formatReaction");
   const arrow = options.arrow ?? "->";
   const decimal = options.coefficients === "decimal";
   const term = (t: Term): string => {

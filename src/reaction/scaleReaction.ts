@@ -3,6 +3,7 @@ import { rationalFrom, rationalMul, type Rational, type RationalLike } from "../
 import { makeReaction, makeTerm, termCoefficient } from "./internal/reactionTerms.js";
 import type { Reaction, Term } from "./types.js";
 import { describeValue } from "../guards.js";
+import { checkReactionShape } from "./checkReactionShape.js";
 
 /**
  * Multiply every coefficient of a reaction by a positive factor, exactly.
@@ -20,6 +21,7 @@ import { describeValue } from "../guards.js";
  * @see IUPAC Green Book, 3rd ed. (2007), §2.10.1 (stoichiometric numbers)
  */
 export function scaleReaction(reaction: Reaction, factor: RationalLike): Reaction {
+  checkReactionShape(reaction, "scaleReaction");
   let k: Rational;
   try {
     k = rationalFrom(factor);
@@ -47,6 +49,7 @@ export function scaleReaction(reaction: Reaction, factor: RationalLike): Reactio
  * @see IUPAC Green Book, 3rd ed. (2007), §2.10.1
  */
 export function reverseReaction(reaction: Reaction): Reaction {
+  checkReactionShape(reaction, "reverseReaction");
   const copy = (t: Term) => makeTerm(t, termCoefficient(t));
   return makeReaction(reaction.products.map(copy), reaction.reactants.map(copy));
 }

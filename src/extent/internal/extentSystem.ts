@@ -27,6 +27,7 @@ import {
 } from "../../numeric/rational.js";
 import { type SafeQ, SafeOverflow, sqFromNumber, sqFromRational } from "../../numeric/safeRational.js";
 import type { Flows } from "../types.js";
+import { checkReactionShape } from "../../reaction/checkReactionShape.js";
 
 /** A reaction with exact net coefficients (products +, reactants −), checked for balance. */
 export interface PreparedReaction {
@@ -141,7 +142,10 @@ export function prepareReaction(reaction: Reaction | string, index: number, fn: 
   }
   // Cached by identity only when nothing in it can change any more (issue 11): a user-built,
   // unfrozen reaction is checked and read afresh on every call.
-  if (!isDeepFrozen(reaction)) return prepareObject(reaction, index, fn);
+  if (!isDeepFrozen(reaction)) {
+    checkReactionShape(reaction, fn, `reactions[${index}]`);
+    return prepareObject(reaction, index, fn);
+  }
   const hit = reactionObjectCache.get(reaction);
   if (hit !== undefined) return hit;
   const prepared = prepareObject(reaction, index, fn);
