@@ -28,6 +28,13 @@ export interface CreateHeatCapacityOptions {
    * @defaultValue 1e-6
    */
   boundaryToleranceK?: number;
+  /**
+   * Require Cp > 0 over every range (a physical heat capacity always is). `false` keeps only the
+   * finiteness checks, for purely mathematical use of the forms (e.g. testing integrals of
+   * arbitrary coefficient sets).
+   * @defaultValue true
+   */
+  requirePositiveCp?: boolean;
 }
 
 /**
@@ -155,7 +162,7 @@ export function createHeatCapacity(ranges: readonly CpRange[], options: CreateHe
     throw new RxthermError("INVALID_ARGUMENT", `createHeatCapacity requires boundaryToleranceK >= 0, got ${describeValue(tol)}`, { boundaryToleranceK: tol });
   }
   const sorted = prepareRanges("createHeatCapacity", label, ranges, tol);
-  return new PiecewiseHeatCapacity(sorted, label);
+  return new PiecewiseHeatCapacity(sorted, label, options.requirePositiveCp !== false);
 }
 
 class PiecewiseHeatCapacity implements HeatCapacity {
@@ -180,7 +187,7 @@ class PiecewiseHeatCapacity implements HeatCapacity {
   private readonly absH: Float64Array;
   private readonly absS: Float64Array;
 
-  constructor(ranges: CpRange[], label: string | undefined) {
+  constructor(ranges: CpRange[], label: string | undefined, requirePositiveCp: boolean) {
     this.label = label;
     this.ranges = Object.freeze(ranges);
     this.TminK = ranges[0]!.TminK;
@@ -234,7 +241,7 @@ class PiecewiseHeatCapacity implements HeatCapacity {
       this.absS[i] = c.sConstJPerMolK - this.k[i * STRIDE + S_0]!;
     }
     this.hasAbsoluteConstants = all;
-    this.checkValues();
+    this.checkValues(requirePositiveCp);
     Object.freeze(this);
   }
 
@@ -242,7 +249,7 @@ class PiecewiseHeatCapacity implements HeatCapacity {
    * Cp must be finite and > 0, and H and S finite, over every segment (checked at its ends and
    * 7 interior points): coefficients like 1e308 or a negative Cp are INVALID_DATA, never NaN later.
    */
-  private checkValues(): void {
+  private checkValues(requirePositiveCp: boolean): void {
     for (let i = 0; i < this.n; i++) {
       const lo = i === 0 ? this.TminK : this.upper[i - 1]!;
       const hi = this.upper[i]!;
@@ -250,13 +257,15 @@ class PiecewiseHeatCapacity implements HeatCapacity {
       for (let j = 0; j <= 8; j++) {
         const T = j === 8 ? hi : lo + ((hi - lo) * j) / 8;
         const cp = cpAt(this.k, o, T);
-        const bad = !(cp > 0 && cp < Infinity) ? "a finite Cp > 0" : !Number.isFinite(hAt(this.k, o, T)) || !Number.isFinite(sAt(this.k, o, T)) ? "finite H and S integrals" : null;
+        const bad = !Number.isFinite(cp) ? `Cp is not finite at ${T} K`
+          : requirePositiveCp && !(cp > 0) ? `Cp is not positive at ${T} K (${cp} J/(mol·K))`
+          : !Number.isFinite(hAt(this.k, o, T)) || !Number.isFinite(sAt(this.k, o, T)) ? `the H and S integrals are not finite at ${T} K` : null;
         if (bad !== null) {
           const range = this.rangeOf[i]!;
           throw new RxthermError(
             "INVALID_DATA",
-            `createHeatCapacity${this.label ? ` (${this.label})` : ""}: ${bad} is required over the range, got Cp = ${cp} J/(mol·K) at ${T} K`,
-            { label: this.label, path: ["ranges", range, "cp"], T, cp, issues: [{ path: ["ranges", range, "cp"], message: `${bad} is required` }] },
+            `createHeatCapacity${this.label ? ` (${this.label})` : ""}: ${bad}`,
+            { label: this.label, path: ["ranges", range, "cp"], T, cp, issues: [{ path: ["ranges", range, "cp"], message: bad }] },
           );
         }
       }
