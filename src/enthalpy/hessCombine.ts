@@ -6,7 +6,7 @@ import {
 } from "../numeric/rational.js";
 import { toReaction } from "./resolveInputs.js";
 import { ExactDecimal, exactWeightedSum } from "./preparedReaction.js";
-import { describeValue } from "../guards.js";
+import { describeValue, requireArray, requireRecord } from "../guards.js";
 
 /**
  * One known reaction and its enthalpy, for {@link hessCombine}.
@@ -67,6 +67,8 @@ export function hessCombine(target: Reaction | string, known: readonly KnownReac
   if (!Array.isArray(known) || known.length === 0) {
     throw new RxthermError("INVALID_ARGUMENT", "hessCombine requires at least one known reaction", { known });
   }
+  requireArray(known, "hessCombine", "known");
+  known.forEach((k, j) => requireRecord(k, "hessCombine", `known[${j}]`));
   const enthalpies = known.map((k, j) => enthalpyText(k.enthalpy, j));
   const targetVector = netVector(toReaction("hessCombine", target));
   const vectors = known.map((k) => netVector(toReaction("hessCombine", k.reaction)));

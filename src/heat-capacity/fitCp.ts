@@ -3,7 +3,7 @@ import { GAS_CONSTANT_J_PER_MOL_K } from "../units.js";
 import { CELSIUS_OFFSET_K, REFERENCE_T_K, STRIDE, canonical, formCp, hAt, sAt, writeSegment } from "./internal/cpCompile.js";
 import { leastSquares } from "../numeric/leastSquares.js";
 import type { CpForm, CpRange } from "./types.js";
-import { optionsOf, describeValue } from "../guards.js";
+import { describeValue, finiteResult, optionsOf } from "../guards.js";
 
 /**
  * One measured or tabulated heat capacity: temperature `T` in K and `cp` in J/(mol·K).
@@ -181,6 +181,7 @@ export function fitCp(points: readonly CpPoint[], form: FitCpFormName, options: 
     maxRes = Math.max(maxRes, Math.abs(r));
     sumSq += r * r;
   }
+  finiteResult(cpForm, "fitCp"); // points such as Cp = 1e308 overflow the least-squares fit
   return Object.freeze({
     range: Object.freeze({ TminK, TmaxK, cp: cpForm }),
     coefficients,

@@ -143,6 +143,9 @@ export function rationalFromInteger(n: bigint | number): Rational {
  * @category Numeric
  */
 export function rationalFromDecimalString(text: string): Rational {
+  if (typeof text !== "string") {
+    throw new RxthermError("INVALID_ARGUMENT", `rationalFromDecimalString requires text, got ${describeValue(text)}`, { text: describeValue(text) });
+  }
   const t = text.trim();
   const frac = FRACTION_RE.exec(t);
   if (frac) {
@@ -183,8 +186,8 @@ export function rationalFromDecimalString(text: string): Rational {
  * @category Numeric
  */
 export function rationalFromNumber(x: number): Rational {
-  if (!Number.isFinite(x)) {
-    throw new RxthermError("INVALID_ARGUMENT", `rationalFromNumber requires a finite number, got ${x}`, { value: x });
+  if (typeof x !== "number" || !Number.isFinite(x)) {
+    throw new RxthermError("INVALID_ARGUMENT", `rationalFromNumber requires a finite number, got ${describeValue(x)}`, { value: typeof x === "number" ? x : describeValue(x) });
   }
   if (Number.isSafeInteger(x)) return Object.freeze({ num: BigInt(x), den: 1n });
   return rationalFromDecimalString(String(x));

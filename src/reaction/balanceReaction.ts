@@ -269,7 +269,7 @@ function readFixed(options: BalanceReactionOptions, keys: readonly string[]): Ma
     if (j < 0) {
       throw new RxthermError("INVALID_ARGUMENT", `balanceReaction: fixed species "${species}" is not in the reaction (${keys.join(", ")})`, {
         species,
-        value: String(value),
+        value: describeValue(value),
       });
     }
     let r: Rational;
@@ -281,7 +281,7 @@ function readFixed(options: BalanceReactionOptions, keys: readonly string[]): Ma
     if (r.num <= 0n) {
       throw new RxthermError("INVALID_ARGUMENT", `balanceReaction requires positive fixed coefficients, got ${describeValue(value)} for "${species}"`, {
         species,
-        value: String(value),
+        value: describeValue(value),
       });
     }
     out.set(j, r);

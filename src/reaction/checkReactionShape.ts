@@ -42,6 +42,9 @@ function checkTerm(term: unknown, fn: string, path: string): void {
   for (const [el, n] of Object.entries(elements)) {
     if (typeof n !== "number" || !Number.isFinite(n) || n <= 0) bad(`.formula.elements.${el}`, "to be a finite count > 0", n);
   }
+  if (f!["text"] !== undefined && typeof f!["text"] !== "string") bad(".formula.text", "to be text", f!["text"]);
+  const phase = f!["phase"];
+  if (phase !== undefined && phase !== null && typeof phase !== "string") bad(".formula.phase", "to be a phase or null", phase);
   const q = f!["charge"];
   if (q !== undefined && (typeof q !== "number" || !Number.isInteger(q))) bad(".formula.charge", "to be an integer", q);
   const exact = t["exact"];
