@@ -95,7 +95,7 @@ export function fromKelvin(kelvin: number, unit: TemperatureUnit): number {
  */
 export function toPascal(value: number, unit: PressureUnit): number {
   finite(value, "toPascal");
-  const f = PRESSURE_PA[unit];
+  const f = lookup(PRESSURE_PA, unit);
   if (f === undefined) throw badUnit("toPascal", unit);
   return finiteResult(value * f, "toPascal");
 }
@@ -112,7 +112,7 @@ export function toPascal(value: number, unit: PressureUnit): number {
  */
 export function toJoule(value: number, unit: EnergyUnit): number {
   finite(value, "toJoule");
-  const f = ENERGY_J[unit];
+  const f = lookup(ENERGY_J, unit);
   if (f === undefined) throw badUnit("toJoule", unit);
   return finiteResult(value * f, "toJoule");
 }
@@ -129,7 +129,7 @@ export function toJoule(value: number, unit: EnergyUnit): number {
  */
 export function toMol(value: number, unit: AmountUnit): number {
   finite(value, "toMol");
-  const f = AMOUNT_MOL[unit];
+  const f = lookup(AMOUNT_MOL, unit);
   if (f === undefined) throw badUnit("toMol", unit);
   return finiteResult(value * f, "toMol");
 }
@@ -146,4 +146,9 @@ function badUnit(fn: string, unit: unknown): RxthermError {
 function roundOff(x: number): number {
   const r = Number(x.toPrecision(12));
   return r === 0 ? 0 : r;
+}
+
+/** A unit's factor: own keys of the table only, and only for a text unit (no "toString", no objects). */
+function lookup(table: Readonly<Record<string, number>>, unit: unknown): number | undefined {
+  return typeof unit === "string" && Object.prototype.hasOwnProperty.call(table, unit) ? table[unit] : undefined;
 }

@@ -10,7 +10,7 @@
  * - leave its inputs unchanged (deep snapshot before and after),
  * - end within CALL_TIME_BOUND_MS (a hang detector, not a speed target).
  *
- * RXTHERM_HOSTILE_RUNS sets the cases per entry point (default 40; slow flame entries a quarter);
+ * RXTHERM_HOSTILE_RUNS sets the cases per entry point (default 25; slow flame entries a quarter);
  * RXTHERM_HOSTILE_RUNS=all runs every place × value exhaustively (about 20,000 calls, minutes).
  */
 import fc from "fast-check";
@@ -22,7 +22,7 @@ import { CALL_TIME_BOUND_MS, HOSTILE_VALUES, nonFinite, pathsOf, probe, snapshot
 
 const setting = process.env["RXTHERM_HOSTILE_RUNS"];
 const exhaustive = setting === "all";
-const RUNS = exhaustive ? 0 : Number(setting ?? 40);
+const RUNS = exhaustive ? 0 : Number(setting ?? 25);
 const tally: { name: string; cases: number; ms: number }[] = [];
 
 afterAll(() => {
