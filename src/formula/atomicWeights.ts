@@ -22,7 +22,7 @@
  * @module
  */
 import { RxthermError } from "../errors.js";
-import { deepFreeze } from "../guards.js";
+import { deepFreeze, describeValue } from "../guards.js";
 
 /**
  * What an {@link ElementData.atomicWeight} is:
@@ -229,7 +229,7 @@ export function elementData(symbol: string): ElementData {
   const map = bySymbol();
   const row = map.get(symbol);
   if (row !== undefined) return row;
-  const shown = typeof symbol === "string" ? symbol : String(symbol);
+  const shown = typeof symbol === "string" ? symbol : describeValue(symbol);
   let suggestion: string | undefined;
   if (typeof symbol === "string" && symbol.length >= 1 && symbol.length <= 2) {
     const fixed = symbol.charAt(0).toUpperCase() + symbol.slice(1).toLowerCase();
