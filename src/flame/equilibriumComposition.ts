@@ -13,7 +13,7 @@ import {
   type Engine,
 } from "./internal/equilibriumEngine.js";
 import { resolveLimits } from "./internal/flameInput.js";
-import { optionsOf, describeValue } from "../guards.js";
+import { describeValue, optionsOf, requireArray } from "../guards.js";
 
 /**
  * What to bring to equilibrium, and at which conditions, for {@link equilibriumComposition}.
@@ -167,6 +167,12 @@ export function equilibriumComposition(input: EquilibriumInput, options: Equilib
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a non-empty list of product species`, { species: input.species });
   }
   const feedElements = elementTotals(fn, input);
+  requireArray(input.species, fn, "input.species");
+  input.species.forEach((key, i) => {
+    if (typeof key !== "string") {
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires species keys as text, got ${describeValue(key)} at index ${i}`, { path: `input.species[${i}]` });
+    }
+  });
   const products = input.species.map((key) => ({ key, species: flameSpecies(fn, key, input.library) }));
   const engine = prepareEngine(fn, products, feedElements);
   let T: number;

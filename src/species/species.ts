@@ -26,6 +26,9 @@ import type { Library, LibraryGetOptions, Species } from "./types.js";
  * @see M. W. Chase Jr., NIST-JANAF Thermochemical Tables, 4th ed., J. Phys. Chem. Ref. Data Monograph 9 (1998)
  */
 export function species(key: string, library?: Library, options?: LibraryGetOptions): Species {
+  if (typeof key !== "string") {
+    throw new RxthermError("INVALID_ARGUMENT", `species requires a key as text, got ${describeValue(key)}`, { path: "key", value: describeValue(key) });
+  }
   return libraryOf(library, "species", "library").get(key, optionsOf(options, "species"));
 }
 
