@@ -99,4 +99,32 @@ export function run(): void {
     return s;
   }, { inner: 1 });
   report("molar mass", perCall(mm), perCall(pOnly), "informational (cost of the exact mass sum over parsing)");
+
+  // Cost of handing out frozen results (issue 11): parseFormula freezes its `elements` and the
+  // formula itself. Here the same two freezes on a fresh formula-shaped object, beside building
+  // the object alone; the difference is what freezing adds to each parseFormula call.
+  const sink: unknown[] = new Array(1024);
+  let f = 0;
+  const frozen = measure("build + freeze a formula-shaped result", () => {
+    let s = 0;
+    for (let k = 0; k < inner; k++) {
+      const elements: Record<string, number> = { C: f & 7, H: 4 };
+      const r = Object.freeze({ text: "CH4", elements: Object.freeze(elements), charge: (f++) & 1, phase: null });
+      sink[k & 1023] = r; // the result escapes, as parseFormula's does
+      s += r.charge;
+    }
+    return s;
+  }, { inner: 1 });
+  let g = 0;
+  const plain = measure("build the same result unfrozen", () => {
+    let s = 0;
+    for (let k = 0; k < inner; k++) {
+      const elements: Record<string, number> = { C: g & 7, H: 4 };
+      const r = { text: "CH4", elements, charge: (g++) & 1, phase: null };
+      sink[k & 1023] = r;
+      s += r.charge;
+    }
+    return s;
+  }, { inner: 1 });
+  report("freezing cost", perCall(frozen), perCall(plain), "informational (the difference is added to each parseFormula call)");
 }

@@ -14,7 +14,7 @@
  * @example
  * ERROR_CODES.NOT_BALANCEABLE // => "no set of positive coefficients closes every element and the charge"
  */
-export const ERROR_CODES = {
+export const ERROR_CODES = Object.freeze({
   // input text (formulas, equations)
   EMPTY_INPUT: "the text is empty or only whitespace",
   INPUT_TOO_LONG: "the text is longer than the documented limit",
@@ -57,7 +57,9 @@ export const ERROR_CODES = {
   ELEMENTS_NOT_COVERED: "a product set that cannot hold every element of the feed",
   // command line
   INVALID_CASE: "a heat-duty case file that fails validation (issues listed with JSON paths)",
-} as const;
+  // hardening
+  TOO_LARGE: "user data with more rows, points or species than the documented limit",
+} as const);
 
 /**
  * Machine-readable error code; see {@link ERROR_CODES} for the meaning of each.
@@ -74,6 +76,9 @@ export type RxthermErrorCode = keyof typeof ERROR_CODES;
  */
 export type RxthermErrorDetails = Readonly<Record<string, unknown>>;
 
+/** The process-wide brand every build of rxtherm shares (`Symbol.for`, not a module-local symbol). */
+const ERROR_BRAND: unique symbol = /* @__PURE__ */ Symbol.for("rxtherm.error") as never;
+
 /**
  * The one error class rxtherm throws. `code` is stable and machine-readable, `details` holds
  * the facts (column, species, range, issues...), and the message starts with `[rxtherm]`.
@@ -87,6 +92,18 @@ export type RxthermErrorDetails = Readonly<Record<string, unknown>>;
  * }
  */
 export class RxthermError extends Error {
+  /**
+   * Recognises an rxtherm error from any copy of the library loaded in the same process (the
+   * ESM and the CommonJS build, or two bundled copies): every RxthermError carries the
+   * process-wide brand `Symbol.for("rxtherm.error")`, and `instanceof` checks that brand.
+   *
+   * @param value - any value
+   * @returns true when `value` is an rxtherm error of any build
+   */
+  static override [Symbol.hasInstance](value: unknown): boolean {
+    return typeof value === "object" && value !== null && (value as Record<symbol, unknown>)[ERROR_BRAND] === true;
+  }
+
   /** Machine-readable code; see {@link ERROR_CODES}. */
   readonly code: RxthermErrorCode;
   /** Code-dependent facts about the failure. */
@@ -102,6 +119,7 @@ export class RxthermError extends Error {
     this.name = "RxthermError";
     this.code = code;
     this.details = Object.freeze({ ...details });
+    Object.defineProperty(this, ERROR_BRAND, { value: true });
   }
 }
 

@@ -84,7 +84,7 @@ export type { FormulaLookup } from "./extent/types.js";
 export type {
   CpForm, ShomateForm, PolynomialForm, Nasa7Form, Nasa9Form, ConstantCpForm, TabulatedCpForm, CpRange, RangeOptions,
 } from "./heat-capacity/types.js";
-export { createHeatCapacity } from "./heat-capacity/createHeatCapacity.js";
+export { createHeatCapacity, MAX_CP_TABLE_POINTS, MAX_CP_RANGES } from "./heat-capacity/createHeatCapacity.js";
 export type { HeatCapacity, HeatCapacityValue, CreateHeatCapacityOptions } from "./heat-capacity/createHeatCapacity.js";
 export { boundaryJumps } from "./heat-capacity/boundaryJumps.js";
 export type { BoundaryJump } from "./heat-capacity/boundaryJumps.js";
@@ -105,7 +105,7 @@ export { createLibrary } from "./species/createLibrary.js";
 export type { CreateLibraryOptions } from "./species/createLibrary.js";
 export { builtInLibrary } from "./species/builtInLibrary.js";
 export {
-  validateSpeciesData, MAX_ABS_HF298_KJ_PER_MOL, MAX_CP_J_PER_MOL_K, MAX_S298_J_PER_MOL_K, MAX_LOWEST_TMIN_K,
+  validateSpeciesData, MAX_SPECIES_PER_DATA, MAX_ABS_HF298_KJ_PER_MOL, MAX_CP_J_PER_MOL_K, MAX_S298_J_PER_MOL_K, MAX_LOWEST_TMIN_K,
 } from "./species/validateSpeciesData.js";
 export type { SpeciesDataIssue, ValidateSpeciesDataOptions } from "./species/validateSpeciesData.js";
 export {
@@ -156,7 +156,7 @@ export { equilibriumComposition } from "./flame/equilibriumComposition.js";
 export type { EquilibriumInput, EquilibriumOptions, EquilibriumResult } from "./flame/equilibriumComposition.js";
 export { adiabaticFlameTemperature } from "./flame/adiabaticFlameTemperature.js";
 export type { AdiabaticFlameInput, AdiabaticFlameOptions, AdiabaticFlameResult } from "./flame/adiabaticFlameTemperature.js";
-export { flameTemperatureSweep } from "./flame/flameTemperatureSweep.js";
+export { flameTemperatureSweep, MAX_SWEEP_POINTS } from "./flame/flameTemperatureSweep.js";
 export type { FlameSweep, FlameSweepResult } from "./flame/flameTemperatureSweep.js";
 export { DEFAULT_FLAME_PRODUCTS, SULFUR_FLAME_PRODUCTS } from "./flame/flameDefaults.js";
 

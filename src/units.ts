@@ -17,6 +17,7 @@
  * @module
  */
 import { RxthermError } from "./errors.js";
+import { describeValue, finiteResult } from "./guards.js";
 
 /** Temperature units accepted by {@link toKelvin} and {@link fromKelvin}. @category Units */
 export type TemperatureUnit = "K" | "C" | "F" | "R";
@@ -143,7 +144,8 @@ export function fromKelvin(kelvin: number, unit: TemperatureUnit): number {
  * toPascal(1, "atm") // => 101325
  */
 export function toPascal(value: number, unit: PressureUnit): number {
-  return value * factorOf(PRESSURE_PA, unit, value, "toPascal");
+  finite(value, "toPascal");
+  return finiteResult(value * factorOf(PRESSURE_PA, unit, value, "toPascal"), "toPascal");
 }
 
 /**
@@ -157,7 +159,8 @@ export function toPascal(value: number, unit: PressureUnit): number {
  * toJoule(1, "kcal") // => 4184
  */
 export function toJoule(value: number, unit: EnergyUnit): number {
-  return value * factorOf(ENERGY_J, unit, value, "toJoule");
+  finite(value, "toJoule");
+  return finiteResult(value * factorOf(ENERGY_J, unit, value, "toJoule"), "toJoule");
 }
 
 /**
@@ -171,7 +174,8 @@ export function toJoule(value: number, unit: EnergyUnit): number {
  * toMol(1, "lbmol") // => 453.59237
  */
 export function toMol(value: number, unit: AmountUnit): number {
-  return value * factorOf(AMOUNT_MOL, unit, value, "toMol");
+  finite(value, "toMol");
+  return finiteResult(value * factorOf(AMOUNT_MOL, unit, value, "toMol"), "toMol");
 }
 
 /**
@@ -324,11 +328,11 @@ function factorOf<U extends string, F>(table: Readonly<Record<U, F>>, unit: U, v
 }
 function finite(value: number, fn: string): void {
   if (typeof value !== "number" || !Number.isFinite(value)) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a finite number, got ${String(value)}`, { value });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a finite number, got ${describeValue(value)}`, { value });
   }
 }
 function badUnit(fn: string, unit: unknown): RxthermError {
-  return new RxthermError("INVALID_ARGUMENT", `${fn} does not know the unit ${String(unit)}`, { unit });
+  return new RxthermError("INVALID_ARGUMENT", `${fn} does not know the unit ${describeValue(unit)}`, { unit });
 }
 /** What one mol is worth in the unit's basis: 1 (amount), M in g (mass), Vm in m³ (volume). */
 function basisDivisor(fn: string, basis: "amount" | "mass" | "volume", unit: string, molarMassGPerMol: number | undefined): number {
@@ -400,4 +404,9 @@ export function withSlipHint(temperatureK: number): string {
 export function slipHintDetails(temperatureK: number): { hint?: string } {
   const h = celsiusSlipHint(temperatureK);
   return h === undefined ? {} : { hint: h };
+}
+
+/** A unit's factor: own keys of the table only, and only for a text unit (no "toString", no objects). */
+function lookup(table: Readonly<Record<string, number>>, unit: unknown): number | undefined {
+  return typeof unit === "string" && Object.prototype.hasOwnProperty.call(table, unit) ? table[unit] : undefined;
 }

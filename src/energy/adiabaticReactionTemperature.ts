@@ -10,6 +10,7 @@ import { resolveSpeciesCached } from "../enthalpy/resolveInputs.js";
 import { resolveStream } from "./internal/energyStreams.js";
 import { attachView } from "../view/attachView.js";
 import { ADIABATIC_VIEW } from "./internal/energyView.js";
+import { optionsOf, describeValue } from "../guards.js";
 
 /**
  * Input of {@link adiabaticReactionTemperature} and {@link adiabaticTemperatureRise}.
@@ -113,6 +114,7 @@ export interface AdiabaticReactionResult {
  * @see IUPAC Green Book, 3rd ed. (2007), §2.11; R. P. Brent (1973) for the root finder.
  */
 export function adiabaticReactionTemperature(input: AdiabaticReactionInput, options: AdiabaticReactionOptions = {}): AdiabaticReactionResult {
+  options = optionsOf(options, "adiabaticReactionTemperature");
   return attachView(solveAdiabatic("adiabaticReactionTemperature", input, options).result, ADIABATIC_VIEW);
 }
 
@@ -157,6 +159,7 @@ export interface AdiabaticTemperatureRiseResult extends AdiabaticReactionResult 
  * @see T. Grewer, Thermal Hazards of Chemical Reactions, Elsevier 1994 (adiabatic temperature rise as a screening criterion).
  */
 export function adiabaticTemperatureRise(input: AdiabaticReactionInput, options: AdiabaticReactionOptions = {}): AdiabaticTemperatureRiseResult {
+  options = optionsOf(options, "adiabaticTemperatureRise");
   const { result, startT } = solveAdiabatic("adiabaticTemperatureRise", input, options);
   return attachView({ ...result, deltaT: result.T - startT, startT }, ADIABATIC_VIEW);
 }
@@ -168,9 +171,9 @@ function solveAdiabatic(fn: string, input: AdiabaticReactionInput, options: Adia
   const ro = extrapolate ? EXTRAPOLATE : undefined;
   const toleranceK = options.toleranceK ?? 1e-9;
   const vessel = options.vessel ?? "constant-pressure";
-  if (vessel !== "constant-pressure" && vessel !== "constant-volume") throw new RxthermError("INVALID_ARGUMENT", `${fn} option vessel must be "constant-pressure" or "constant-volume", got ${String(vessel)}`, { vessel });
+  if (vessel !== "constant-pressure" && vessel !== "constant-volume") throw new RxthermError("INVALID_ARGUMENT", `${fn} option vessel must be "constant-pressure" or "constant-volume", got ${describeValue(vessel)}`, { vessel });
   const rigid = vessel === "constant-volume";
-  if (!(toleranceK > 0) || !Number.isFinite(toleranceK)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires toleranceK > 0, got ${String(toleranceK)}`, { toleranceK });
+  if (!(toleranceK > 0) || !Number.isFinite(toleranceK)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires toleranceK > 0, got ${describeValue(toleranceK)}`, { toleranceK });
   const inlets: readonly Stream[] = input.inlet === undefined || input.inlet === null
     ? []
     : Array.isArray(input.inlet) ? (input.inlet as readonly Stream[]) : [input.inlet as Stream];
@@ -203,7 +206,7 @@ function solveAdiabatic(fn: string, input: AdiabaticReactionInput, options: Adia
     outSpecies.push(resolveSpeciesCached(fn, k, library));
     outFlows.push(n);
   }
-  const limits = options.limitsK ?? defaultLimits(outSpecies, extrapolate);
+  const limits = options.limitsK === undefined ? defaultLimits(outSpecies, extrapolate) : limitsOf(options.limitsK, fn);
   let outGas = 0;
   for (let i = 0; i < outSpecies.length; i++) if (outSpecies[i]!.phase === "g") outGas += outFlows[i]!;
   const rOutGas = rigid ? GAS_CONSTANT_J_PER_MOL_K * outGas : 0;
@@ -240,7 +243,7 @@ function solveAdiabatic(fn: string, input: AdiabaticReactionInput, options: Adia
   if (resolved.some((r) => r.T !== startT)) {
     const mixSpecies = resolved.flatMap((r) => r.species);
     const mixFlows = resolved.flatMap((r) => r.flows);
-    const mixLimits = options.limitsK ?? defaultLimits(mixSpecies, extrapolate);
+    const mixLimits = options.limitsK === undefined ? defaultLimits(mixSpecies, extrapolate) : limitsOf(options.limitsK, fn);
     const mix = findRoot((T) => {
       let h = 0;
       for (let i = 0; i < mixSpecies.length; i++) {
@@ -271,4 +274,17 @@ function defaultLimits(species: readonly Species[], extrapolate: boolean): [numb
 
 function clamp(x: number, [lo, hi]: readonly [number, number]): number {
   return Math.min(hi, Math.max(lo, x));
+}
+
+/** options.limitsK checked: a pair [low, high] of finite temperatures with 0 < low < high (K). */
+function limitsOf(limits: unknown, fn: string): readonly [number, number] {
+  const ok = Array.isArray(limits) && limits.length === 2 && typeof limits[0] === "number" && typeof limits[1] === "number" &&
+    Number.isFinite(limits[0]) && Number.isFinite(limits[1]) && limits[0] > 0 && limits[1] > limits[0];
+  if (!ok) {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires options.limitsK to be [low, high] in K with 0 < low < high, got ${describeValue(limits)}`, {
+      path: "options.limitsK",
+      value: describeValue(limits),
+    });
+  }
+  return limits as unknown as readonly [number, number];
 }

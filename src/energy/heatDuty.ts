@@ -7,6 +7,7 @@ import type { Stream } from "../extent/types.js";
 import { resolveStream, type Entry, type ResolvedStream } from "./internal/energyStreams.js";
 import { prepareReaction, standardEnthalpyExact } from "../enthalpy/preparedReaction.js";
 import { HEAT_DUTY_PROTOTYPE } from "./internal/energyView.js";
+import { describeValue, finiteResult, optionsOf } from "../guards.js";
 
 /**
  * Streams and optional reactions of an energy balance, for {@link heatDuty}.
@@ -165,6 +166,7 @@ export interface HeatDutyResult {
  *   G. Kirchhoff, Pogg. Ann. 103 (1858) 177.
  */
 export function heatDuty(input: HeatDutyInput, options: HeatDutyOptions = {}): HeatDutyResult {
+  options = optionsOf(options, "heatDuty");
   const fn = "heatDuty";
   if (input === null || typeof input !== "object") throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object with inlet and outlet`, { input });
   const library = input.library;
@@ -172,8 +174,8 @@ export function heatDuty(input: HeatDutyInput, options: HeatDutyOptions = {}): H
   const ro = extrapolate ? EXTRAPOLATE : undefined;
   const method = options.method ?? "formation";
   const vessel = options.vessel ?? "constant-pressure";
-  if (vessel !== "constant-pressure" && vessel !== "constant-volume") throw new RxthermError("INVALID_ARGUMENT", `${fn} option vessel must be "constant-pressure" or "constant-volume", got ${String(vessel)}`, { vessel });
-  if (method !== "formation" && method !== "reaction") throw new RxthermError("INVALID_ARGUMENT", `${fn} option method must be "formation" or "reaction", got ${String(method)}`, { method });
+  if (vessel !== "constant-pressure" && vessel !== "constant-volume") throw new RxthermError("INVALID_ARGUMENT", `${fn} option vessel must be "constant-pressure" or "constant-volume", got ${describeValue(vessel)}`, { vessel });
+  if (method !== "formation" && method !== "reaction") throw new RxthermError("INVALID_ARGUMENT", `${fn} option method must be "formation" or "reaction", got ${describeValue(method)}`, { method });
   const inlets = asStreams(fn, input.inlet, "inlet");
   const outlets = asStreams(fn, input.outlet, "outlet");
   const warnings: string[] = [];
@@ -231,22 +233,23 @@ export function heatDuty(input: HeatDutyInput, options: HeatDutyOptions = {}): H
   let latentHeat = 0;
   for (const p of phaseChanges) latentHeat += p.heat;
 
-  // made on the display prototype (non-enumerable display methods, no per-call cost)
-  const result = Object.create(HEAT_DUTY_PROTOTYPE) as { -readonly [K in keyof HeatDutyResult]: HeatDutyResult[K] };
-  result.duty = method === "formation" ? formation : reaction;
-  result.method = method;
-  result.formation = formation;
-  result.reaction = reaction;
-  result.reactionHeat = clean(heat298 - latentHeat);
-  result.latentHeat = clean(latentHeat);
-  result.sensibleIn = clean(sIn);
-  result.sensibleOut = clean(sOut);
-  result.streams = { inlet: inHeat, outlet: outHeat };
-  result.phaseChanges = phaseChanges;
-  result.pvTerm = clean(pvTerm);
-  result.warnings = warnings;
-  result.extrapolated = extrapolated;
-  return result;
+  // checked as a plain object, then made on the display prototype (non-enumerable display methods)
+  const plain = finiteResult({
+    duty: method === "formation" ? formation : reaction,
+    method,
+    formation,
+    reaction,
+    reactionHeat: clean(heat298 - latentHeat),
+    latentHeat: clean(latentHeat),
+    sensibleIn: clean(sIn),
+    sensibleOut: clean(sOut),
+    streams: { inlet: inHeat, outlet: outHeat },
+    phaseChanges,
+    pvTerm: clean(pvTerm),
+    warnings,
+    extrapolated,
+  }, "heatDuty");
+  return Object.assign(Object.create(HEAT_DUTY_PROTOTYPE) as HeatDutyResult, plain);
 }
 
 const EXTRAPOLATE = /* @__PURE__ */ Object.freeze({ extrapolate: true });
@@ -339,7 +342,7 @@ function heatFromReactions(
   let heat = 0;
   reactions.forEach((r, j) => {
     const xi = extents[j];
-    if (typeof xi !== "number" || !Number.isFinite(xi)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires finite extents, got ${String(xi)} at index ${j}`, { index: j, extent: xi });
+    if (typeof xi !== "number" || !Number.isFinite(xi)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires finite extents, got ${describeValue(xi)} at index ${j}`, { index: j, extent: xi });
     const p = prepareReaction(fn, r, library);
     const dh = standardEnthalpyExact(p).toNumber();
     heat += xi * dh;

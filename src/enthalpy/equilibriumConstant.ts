@@ -5,6 +5,7 @@ import type { Reaction } from "../reaction/types.js";
 import { prepareReaction } from "./preparedReaction.js";
 import { checkTemperature, reactionEnthalpy } from "./reactionEnthalpy.js";
 import { reactionGibbs } from "./reactionGibbs.js";
+import { optionsOf, describeValue } from "../guards.js";
 
 /**
  * Options of {@link equilibriumConstant}.
@@ -46,6 +47,7 @@ export interface EquilibriumConstantOptions {
  *   CODATA 2018 (R).
  */
 export function equilibriumConstant(reaction: Reaction | string, T: number, options: EquilibriumConstantOptions = {}): number {
+  options = optionsOf(options, "equilibriumConstant");
   checkTemperature("equilibriumConstant", T);
   const method = options.method ?? "kirchhoff";
   const base = { ...(options.library ? { library: options.library } : {}), ...(options.extrapolate ? { extrapolate: true } : {}) };
@@ -60,7 +62,7 @@ export function equilibriumConstant(reaction: Reaction | string, T: number, opti
   } else {
     // validate through prepareReaction first so a bad reaction still reports its own error
     prepareReaction("equilibriumConstant", reaction, options.library);
-    throw new RxthermError("INVALID_ARGUMENT", `equilibriumConstant option method must be "kirchhoff" or "van-t-hoff", got ${String(method)}`, { method });
+    throw new RxthermError("INVALID_ARGUMENT", `equilibriumConstant option method must be "kirchhoff" or "van-t-hoff", got ${describeValue(method)}`, { method });
   }
   return Math.exp(lnK);
 }

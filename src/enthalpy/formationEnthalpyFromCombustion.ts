@@ -5,6 +5,7 @@ import { resolveSpecies } from "./resolveInputs.js";
 import { ExactDecimal } from "./preparedReaction.js";
 import { combustionProducts } from "./internal/combustionProducts.js";
 import { decimalText } from "./reactionEnthalpyFromCombustion.js";
+import { optionsOf, describeValue } from "../guards.js";
 
 /**
  * Options of {@link formationEnthalpyFromCombustion}.
@@ -46,9 +47,10 @@ export function formationEnthalpyFromCombustion(
   combustionEnthalpy: number | string,
   options: FormationEnthalpyFromCombustionOptions = {},
 ): number {
+  options = optionsOf(options, "formationEnthalpyFromCombustion");
   const fn = "formationEnthalpyFromCombustion";
   const water = options.water ?? "l";
-  if (water !== "l" && water !== "g") throw new RxthermError("INVALID_ARGUMENT", `${fn} option water must be "l" or "g", got ${String(water)}`, { water });
+  if (water !== "l" && water !== "g") throw new RxthermError("INVALID_ARGUMENT", `${fn} option water must be "l" or "g", got ${describeValue(water)}`, { water });
   const dc = decimalText(fn, species, combustionEnthalpy);
   const formula = parseFormula(species);
   const c = combustionProducts(fn, species, formula.elements, water);

@@ -6,6 +6,7 @@ import { molarMass } from "../formula/molarMass.js";
 import { resolveSpecies } from "./resolveInputs.js";
 import { ExactDecimal } from "./preparedReaction.js";
 import { combustionProducts } from "./internal/combustionProducts.js";
+import { optionsOf, describeValue } from "../guards.js";
 
 /**
  * Options of {@link heatingValue}.
@@ -67,6 +68,7 @@ export const NORMAL_MOLAR_VOLUME_M3_PER_MOL = (GAS_CONSTANT_J_PER_MOL_K * NORMAL
  *   ISO 13443:1996 (natural gas — standard reference conditions, 0 °C and 101.325 kPa for "normal").
  */
 export function heatingValue(fuel: string | Flows, options: HeatingValueOptions = {}): number {
+  options = optionsOf(options, "heatingValue");
   const { basis, per } = resolveOptions("heatingValue", options);
   const mixture = normalise("heatingValue", fuel);
   let perMol = 0;
@@ -101,19 +103,19 @@ export function speciesHeatingValue(fn: string, s: Species, basis: "higher" | "l
 export function resolveOptions(fn: string, o: HeatingValueOptions): { basis: "higher" | "lower"; per: "mol" | "kg" | "Nm3" } {
   const basis = o.basis ?? "higher";
   const per = o.per ?? "mol";
-  if (basis !== "higher" && basis !== "lower") throw new RxthermError("INVALID_ARGUMENT", `${fn} option basis must be "higher" or "lower", got ${String(basis)}`, { basis });
-  if (per !== "mol" && per !== "kg" && per !== "Nm3") throw new RxthermError("INVALID_ARGUMENT", `${fn} option per must be "mol", "kg" or "Nm3", got ${String(per)}`, { per });
+  if (basis !== "higher" && basis !== "lower") throw new RxthermError("INVALID_ARGUMENT", `${fn} option basis must be "higher" or "lower", got ${describeValue(basis)}`, { basis });
+  if (per !== "mol" && per !== "kg" && per !== "Nm3") throw new RxthermError("INVALID_ARGUMENT", `${fn} option per must be "mol", "kg" or "Nm3", got ${describeValue(per)}`, { per });
   return { basis, per };
 }
 
 /** Mole fractions of a species key or a mixture. */
 export function normalise(fn: string, fuel: string | Flows): [string, number][] {
   if (typeof fuel === "string") return [[fuel, 1]];
-  if (fuel === null || typeof fuel !== "object") throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a species key or a mixture object, got ${String(fuel)}`, { fuel });
+  if (fuel === null || typeof fuel !== "object") throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a species key or a mixture object, got ${describeValue(fuel)}`, { fuel });
   const entries = Object.entries(fuel);
   let total = 0;
   for (const [key, n] of entries) {
-    if (typeof n !== "number" || !Number.isFinite(n)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires finite amounts, got ${String(n)} for ${key}`, { species: key, amount: n });
+    if (typeof n !== "number" || !Number.isFinite(n)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires finite amounts, got ${describeValue(n)} for ${key}`, { species: key, amount: n });
     if (n < 0) throw new RxthermError("NEGATIVE_FLOW", `${fn} requires non-negative amounts, got ${n} for ${key}`, { species: key, amount: n });
     total += n;
   }

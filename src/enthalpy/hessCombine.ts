@@ -6,6 +6,7 @@ import {
 } from "../numeric/rational.js";
 import { toReaction } from "./resolveInputs.js";
 import { ExactDecimal, exactWeightedSum } from "./preparedReaction.js";
+import { describeValue, requireArray, requireRecord } from "../guards.js";
 
 /**
  * One known reaction and its enthalpy, for {@link hessCombine}.
@@ -66,6 +67,8 @@ export function hessCombine(target: Reaction | string, known: readonly KnownReac
   if (!Array.isArray(known) || known.length === 0) {
     throw new RxthermError("INVALID_ARGUMENT", "hessCombine requires at least one known reaction", { known });
   }
+  requireArray(known, "hessCombine", "known");
+  known.forEach((k, j) => requireRecord(k, "hessCombine", `known[${j}]`));
   const enthalpies = known.map((k, j) => enthalpyText(k.enthalpy, j));
   const targetVector = netVector(toReaction("hessCombine", target));
   const vectors = known.map((k) => netVector(toReaction("hessCombine", k.reaction)));
@@ -118,7 +121,7 @@ function enthalpyText(h: number | string, index: number): string {
       if (v.isFinite()) return v.toString();
     } catch { /* fall through */ }
   }
-  throw new RxthermError("INVALID_ARGUMENT", `hessCombine requires each known enthalpy to be a finite number or decimal text, got ${String(h)} at index ${index}`, { index, enthalpy: h });
+  throw new RxthermError("INVALID_ARGUMENT", `hessCombine requires each known enthalpy to be a finite number or decimal text, got ${describeValue(h)} at index ${index}`, { index, enthalpy: h });
 }
 
 function netVector(r: Reaction): Map<string, Rational> {

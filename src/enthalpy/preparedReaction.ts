@@ -8,10 +8,12 @@
  */
 import Decimal from "decimal.js";
 import { RxthermError } from "../errors.js";
+import { isDeepFrozen } from "../guards.js";
 import type { Library, Species } from "../species/types.js";
 import type { Reaction } from "../reaction/types.js";
 import { rationalAdd, rationalFromDecimalString, rationalNeg, type Rational } from "../numeric/rational.js";
 import { reactionResiduals, resolveSpecies, toReaction } from "./resolveInputs.js";
+import { libraryOf } from "../species/species.js";
 
 /** Private decimal constructor: 34 significant digits, round half even (never Decimal.set). */
 export const ExactDecimal = /* @__PURE__ */ Decimal.clone({ precision: 34, rounding: Decimal.ROUND_HALF_EVEN });
@@ -48,16 +50,20 @@ export function prepareReaction(fn: string, input: Reaction | string, library: L
       parsedText.set(input, reaction);
     }
   } else reaction = toReaction(fn, input);
+  if (library !== undefined) libraryOf(library, fn, "options.library");
   const libKey: object = library ?? DEFAULT_LIBRARY;
   let perLib = prepared.get(libKey);
   if (!perLib) {
     perLib = new WeakMap();
     prepared.set(libKey, perLib);
   }
-  const hit = perLib.get(reaction);
+  // Only a reaction that can no longer change is cached by identity (issue 11): results of
+  // parseReaction / balanceReaction are deeply frozen; a user-built object is read afresh.
+  const cacheable = typeof input === "string" || isDeepFrozen(reaction);
+  const hit = cacheable ? perLib.get(reaction) : undefined;
   if (hit) return hit;
   const p = build(fn, reaction, library);
-  perLib.set(reaction, p);
+  if (cacheable) perLib.set(reaction, p);
   return p;
 }
 

@@ -7,6 +7,7 @@ import type Decimal from "decimal.js";
 import type { Rational } from "../numeric/rational.js";
 import { prepareReaction, standardEnthalpyExact, type PreparedReaction } from "./preparedReaction.js";
 import { REACTION_ENTHALPY_PROTOTYPE } from "./internal/enthalpyView.js";
+import { optionsOf, describeValue } from "../guards.js";
 
 /**
  * Options of {@link reactionEnthalpy}.
@@ -113,6 +114,7 @@ export interface ReactionEnthalpyResult {
  *   IUPAC Green Book, 3rd ed. (2007), §2.11 (standard reaction quantities).
  */
 export function reactionEnthalpy(reaction: Reaction | string, options: ReactionEnthalpyOptions = {}): ReactionEnthalpyResult {
+  options = optionsOf(options, "reactionEnthalpy");
   const T = options.T ?? STANDARD_TEMPERATURE_K;
   checkTemperature("reactionEnthalpy", T);
   const p = prepareReaction("reactionEnthalpy", reaction, options.library);
@@ -198,7 +200,7 @@ function indexOfSpecies(p: PreparedReaction, key: string): number {
 /** T must be a finite number > 0 K. */
 export function checkTemperature(fn: string, T: unknown, label = "T"): void {
   if (typeof T !== "number" || !Number.isFinite(T) || T <= 0) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${label} to be a finite temperature above 0 K, got ${String(T)}`, { [label]: T });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${label} to be a finite temperature above 0 K, got ${describeValue(T)}`, { [label]: T });
   }
 }
 

@@ -3,6 +3,7 @@ import type { Reaction } from "../reaction/types.js";
 import { rationalFromDecimalString, rationalNeg, type Rational } from "../numeric/rational.js";
 import { reactionResiduals, toReaction } from "./resolveInputs.js";
 import { ExactDecimal, exactWeightedSum } from "./preparedReaction.js";
+import { describeValue } from "../guards.js";
 
 /**
  * Species whose standard enthalpy of combustion is zero by definition: the products of complete
@@ -100,5 +101,5 @@ export function decimalText(fn: string, key: string, v: number | string): string
       if (d.isFinite()) return d.toString();
     } catch { /* fall through */ }
   }
-  throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a finite enthalpy for ${key}, got ${String(v)}`, { species: key, value: v });
+  throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a finite enthalpy for ${key}, got ${describeValue(v)}`, { species: key, value: v });
 }

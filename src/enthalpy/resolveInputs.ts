@@ -9,9 +9,11 @@
 import { RxthermError } from "../errors.js";
 import type { Library, Species } from "../species/types.js";
 import type { Reaction } from "../reaction/types.js";
-import { species } from "../species/species.js";
+import { libraryOf, species } from "../species/species.js";
 import { parseReaction } from "../reaction/parseReaction.js";
 import { checkBalance } from "../reaction/checkBalance.js";
+import { describeValue } from "../guards.js";
+import { checkReactionShape } from "../reaction/checkReactionShape.js";
 
 /**
  * The species `key` from `library`, or from the built-in set when no library is given.
@@ -34,6 +36,7 @@ const BUILT_IN = {};
 
 /** {@link resolveSpecies} with a per-library cache of key → Species (libraries are immutable). */
 export function resolveSpeciesCached(fn: string, key: string, library: Library | undefined): Species {
+  if (library !== undefined) libraryOf(library, fn, "library");
   const lib: object = library ?? BUILT_IN;
   let map = speciesCache.get(lib);
   if (!map) {
@@ -51,9 +54,7 @@ export function resolveSpeciesCached(fn: string, key: string, library: Library |
 /** A reaction object from a Reaction or its text. */
 export function toReaction(fn: string, reaction: Reaction | string): Reaction {
   if (typeof reaction === "string") return parseReactionText(fn, reaction);
-  if (reaction === null || typeof reaction !== "object" || !Array.isArray(reaction.reactants) || !Array.isArray(reaction.products)) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a reaction (text or parsed Reaction), got ${String(reaction)}`, { reaction });
-  }
+  checkReactionShape(reaction, fn);
   return reaction;
 }
 

@@ -4,6 +4,7 @@ import type { Flows } from "../extent/types.js";
 import { molarMass } from "../formula/molarMass.js";
 import { resolveSpecies } from "./resolveInputs.js";
 import { heatingValue } from "./heatingValue.js";
+import { optionsOf } from "../guards.js";
 
 /**
  * Options of {@link wobbeIndex}.
@@ -50,6 +51,7 @@ export const AIR_MOLAR_MASS_G_PER_MOL = 28.9644;
  *   ISO 13443:1996 (standard reference conditions); U.S. Standard Atmosphere 1976 (air molar mass).
  */
 export function wobbeIndex(gas: string | Flows, options: WobbeIndexOptions = {}): number {
+  options = optionsOf(options, "wobbeIndex");
   const hv = heatingValue(gas, { basis: options.basis ?? "higher", per: "Nm3", ...(options.library ? { library: options.library } : {}) });
   const entries = typeof gas === "string" ? [[gas, 1] as const] : Object.entries(gas);
   let total = 0;

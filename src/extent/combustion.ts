@@ -8,6 +8,7 @@ import { compensatedSum } from "../numeric/compensatedSum.js";
 import { checkMixtureLimits } from "./mixtureLimits.js";
 import { attachView } from "../view/attachView.js";
 import { COMBUSTION_VIEW } from "./internal/extentView.js";
+import { describeValue, finiteResult, requireRecord } from "../guards.js";
 
 /**
  * Dry air by mole fraction, with its argon and CO₂ (pass it as `oxidizer` where the argon and the
@@ -281,7 +282,7 @@ export function combustion(input: CombustionInput): CombustionResult {
   }
   const airMassKg = massKg(airFlows, fn);
   const dryOxidizerMolarMass = compensatedSum(Object.entries(oxidizer).map(([k, y]) => y * molarMassOf(k, fn, "oxidizer")));
-  return attachView({
+  return attachView(finiteResult({
     theoreticalO2,
     theoreticalAir,
     air,
@@ -300,7 +301,7 @@ export function combustion(input: CombustionInput): CombustionResult {
     airToFuelMass: airMassKg / fuel.massKg,
     theoreticalAirToFuelMass: (theoreticalAir * dryOxidizerMolarMass) / 1000 / fuel.massKg,
     ashKg: fuel.ashKg,
-  }, COMBUSTION_VIEW);
+  }, fn), COMBUSTION_VIEW);
 }
 
 interface FuelElements {
@@ -319,6 +320,7 @@ function fuelElements(fuelIn: CombustionInput["fuel"], fn: string, library: Form
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires fuel as species flows or { ultimate }`, {});
   }
   if ("ultimate" in fuelIn && typeof fuelIn.ultimate === "object") {
+    requireRecord(fuelIn.ultimate, fn, "fuel.ultimate"); // null or an array is INVALID_ARGUMENT, not a TypeError
     return ultimateElements(fuelIn as UltimateFuel, fn);
   }
   const flows = fuelIn as Flows;
@@ -392,7 +394,7 @@ function ultimateElements(fuel: UltimateFuel, fn: string): FuelElements {
   const u = fuel.ultimate;
   const massKg = fuel.massFlowKg ?? 1;
   if (typeof massKg !== "number" || !Number.isFinite(massKg) || massKg <= 0) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires fuel.massFlowKg > 0, got ${String(massKg)}`, { massFlowKg: massKg });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires fuel.massFlowKg > 0, got ${describeValue(massKg)}`, { massFlowKg: massKg });
   }
   const fields = ["C", "H", "O", "N", "S", "moisture", "ash"] as const;
   let total = 0;
@@ -400,7 +402,7 @@ function ultimateElements(fuel: UltimateFuel, fn: string): FuelElements {
   for (const k of fields) {
     const v = u[k] ?? 0;
     if (typeof v !== "number" || !Number.isFinite(v) || v < 0 || v > 1) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ultimate-analysis mass fractions in [0, 1], got ${String(v)} for ${k}`, {
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ultimate-analysis mass fractions in [0, 1], got ${describeValue(v)} for ${k}`, {
         field: k,
         value: v,
       });
@@ -437,12 +439,12 @@ function resolveExcess(input: CombustionInput, theoreticalO2: number, fn: string
   let e = 0;
   if (equivalenceRatio !== undefined) {
     if (typeof equivalenceRatio !== "number" || !Number.isFinite(equivalenceRatio) || equivalenceRatio <= 0) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires equivalenceRatio > 0, got ${String(equivalenceRatio)}`, { equivalenceRatio });
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires equivalenceRatio > 0, got ${describeValue(equivalenceRatio)}`, { equivalenceRatio });
     }
     e = 1 / equivalenceRatio - 1;
   } else if (excessAir !== undefined) {
     if (typeof excessAir !== "number" || !Number.isFinite(excessAir)) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a finite excessAir, got ${String(excessAir)}`, { excessAir });
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a finite excessAir, got ${describeValue(excessAir)}`, { excessAir });
     }
     e = excessAir;
   }
@@ -462,7 +464,7 @@ function resolveExcess(input: CombustionInput, theoreticalO2: number, fn: string
 function fraction(v: number | undefined, dflt: number, name: string, fn: string): number {
   if (v === undefined) return dflt;
   if (typeof v !== "number" || !Number.isFinite(v) || v < 0 || v > 1) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${name} in [0, 1], got ${String(v)}`, { [name]: v });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${name} in [0, 1], got ${describeValue(v)}`, { [name]: v });
   }
   return v;
 }
@@ -506,7 +508,7 @@ function oxidizerComposition(input: CombustionInput, fn: string): Flows {
   if (input.oxygenEnrichment !== undefined) {
     const x = input.oxygenEnrichment;
     if (typeof x !== "number" || !Number.isFinite(x) || x < yO2 || x > 1) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires oxygenEnrichment between the oxidizer's O2 fraction ${yO2} and 1, got ${String(x)}`, {
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires oxygenEnrichment between the oxidizer's O2 fraction ${yO2} and 1, got ${describeValue(x)}`, {
         oxygenEnrichment: x,
         range: [yO2, 1],
       });
@@ -524,14 +526,14 @@ function humidityFraction(h: AirHumidity | undefined, fn: string): number {
   if ("waterMoleFraction" in h) {
     y = h.waterMoleFraction;
     if (typeof y !== "number" || !Number.isFinite(y) || y < 0 || y >= 1) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires humidity.waterMoleFraction in [0, 1), got ${String(y)}`, { waterMoleFraction: y });
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires humidity.waterMoleFraction in [0, 1), got ${describeValue(y)}`, { waterMoleFraction: y });
     }
     return y;
   }
   const rh = fraction(h.relativeHumidity, 0, "relativeHumidity", fn);
   const P = h.pressurePa ?? 101325;
   if (typeof P !== "number" || !Number.isFinite(P) || P <= 0) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires humidity.pressurePa > 0, got ${String(P)}`, { pressurePa: P });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires humidity.pressurePa > 0, got ${describeValue(P)}`, { pressurePa: P });
   }
   y = (rh * waterSaturationPressure(h.temperatureK)) / P;
   if (y >= 1) {

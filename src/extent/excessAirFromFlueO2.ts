@@ -1,5 +1,6 @@
 import { RxthermError } from "../errors.js";
 import { type CombustionInput, combustion } from "./combustion.js";
+import { describeValue } from "../guards.js";
 
 /**
  * Input of {@link excessAirFromFlueO2}: the fuel and oxidizer as for {@link combustion}
@@ -77,7 +78,7 @@ function fromReading(
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object { fuel, ${name} }`, {});
   }
   if (typeof x !== "number" || !Number.isFinite(x) || x < 0 || x > 1) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${name} as a mole fraction in [0, 1], got ${String(x)}${typeof x === "number" && x > 1 ? " — give a fraction, not %" : ""}`, {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${name} as a mole fraction in [0, 1], got ${describeValue(x)}${typeof x === "number" && x > 1 ? " — give a fraction, not %" : ""}`, {
       [name]: x,
     });
   }

@@ -15,6 +15,7 @@ import { buildSystem } from "./internal/extentSystem.js";
 import type { Flows } from "./types.js";
 import { attachView } from "../view/attachView.js";
 import { LIMITING_VIEW } from "./internal/extentView.js";
+import { finiteResult } from "../guards.js";
 
 /**
  * Result of {@link limitingReactant}. Amounts in the feed's unit (mol or mol/s).
@@ -96,12 +97,12 @@ export function limitingReactant(feed: Flows, reaction: Reaction | string): Limi
   sys.species.forEach((key, s) => {
     outletAtMaxExtent[key] = rationalToNumber(rationalAdd(sys.feedQ[s] as Rational, rationalMul(row[s] as Rational, maxQ)));
   });
-  return attachView({
+  return attachView(finiteResult({
     species: limiting[0] as string,
     limiting,
     maxExtent: rationalToNumber(maxQ),
     excess,
     runOut,
     outletAtMaxExtent,
-  }, LIMITING_VIEW);
+  }, "limitingReactant"), LIMITING_VIEW);
 }

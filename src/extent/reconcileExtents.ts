@@ -13,6 +13,7 @@ import {
 import { solveLinearSystem } from "../numeric/linearAlgebra.js";
 import { buildSystem, resolveSpecies, validateFlows } from "./internal/extentSystem.js";
 import type { Flows } from "./types.js";
+import { describeValue, finiteResult, optionsOf } from "../guards.js";
 
 /**
  * Input of {@link reconcileExtents}.
@@ -97,6 +98,7 @@ export interface ReconcileExtentsResult {
  * @see C. F. Gauss, Theoria combinationis observationum erroribus minimis obnoxiae (1821–1823): least squares through the normal equations; element-balance closure: common practice
  */
 export function reconcileExtents(input: ReconcileExtentsInput, options: ReconcileExtentsOptions = {}): ReconcileExtentsResult {
+  options = optionsOf(options, "reconcileExtents");
   const fn = "reconcileExtents";
   if (input === null || typeof input !== "object") {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object { feed, reactions, measured }`, {});
@@ -120,7 +122,7 @@ export function reconcileExtents(input: ReconcileExtentsInput, options: Reconcil
     seen.add(s);
     const w = weights[key] ?? weights[sys.species[s] as string] ?? 1;
     if (typeof w !== "number" || !Number.isFinite(w) || w <= 0) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires weights > 0, got ${String(w)} for ${key}`, { species: key, weight: w });
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires weights > 0, got ${describeValue(w)} for ${key}`, { species: key, weight: w });
     }
     measuredIdx.push(s);
     measuredQ.push(rationalFromNumber(value));
@@ -196,14 +198,14 @@ export function reconcileExtents(input: ReconcileExtentsInput, options: Reconcil
     closurePercent[el] = rationalToNumber(rationalMul(rationalDiv(elOut.get(el) ?? ZERO, vin), rationalFromNumber(100)));
   }
   const unmeasured = sys.species.filter((_, s) => !seen.has(s));
-  return {
+  return finiteResult({
     extents: xi.map(rationalToNumber),
     outlet,
     residuals,
     sumOfSquares: rationalToNumber(ss),
     closurePercent,
     unmeasured,
-  };
+  }, fn);
 }
 
 const ZERO: Rational = /* @__PURE__ */ rationalFromNumber(0);

@@ -36,6 +36,7 @@ import { type StoichSystem, type YieldPair, buildSystem, resolveSpecies } from "
 import type { ExtentSpec, Flows } from "./types.js";
 import { attachView } from "../view/attachView.js";
 import { EXTENTS_VIEW } from "./internal/extentView.js";
+import { describeValue, finiteResult, optionsOf } from "../guards.js";
 
 /**
  * Options of {@link solveExtents}.
@@ -162,13 +163,14 @@ export interface SolveExtentsResult {
  * @see IUPAC Compendium of Chemical Terminology (the Gold Book), entry "extent of reaction, ξ"; conversion, yield and selectivity as defined above (common practice — definitions of yield and selectivity vary between sources, so check the one your plant uses)
  */
 export function solveExtents(input: SolveExtentsInput, options: SolveExtentsOptions = {}): SolveExtentsResult {
+  options = optionsOf(options, "solveExtents");
   const fn = "solveExtents";
   if (input === null || typeof input !== "object") {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object { feed, reactions, specs }`, {});
   }
   const arithmetic = options.arithmetic ?? "exact";
   if (arithmetic !== "exact" && arithmetic !== "float") {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires options.arithmetic "exact" or "float", got ${String(arithmetic)}`, { arithmetic });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires options.arithmetic "exact" or "float", got ${describeValue(arithmetic)}`, { arithmetic });
   }
   const sys = buildSystem(input.feed, input.reactions, fn);
   const specs = input.specs;
@@ -191,9 +193,18 @@ export function solveExtents(input: SolveExtentsInput, options: SolveExtentsOpti
   for (let k = 0; k < specs.length; k++) rows.push(specRow(sys, specs[k] as ExtentSpec, k, fn));
   if (arithmetic === "float") {
     const fast = solveIn(FLOAT, sys, rows, fn);
-    if (fast !== null) return attachView(fast, EXTENTS_VIEW);
+    if (fast !== null) return attachView(eagerFinite(fast, fn), EXTENTS_VIEW);
   }
-  return attachView(solveExactPath(sys, rows, fn), EXTENTS_VIEW);
+  return attachView(eagerFinite(solveExactPath(sys, rows, fn), fn), EXTENTS_VIEW);
+}
+
+/**
+ * The eager fields of a result (extents, outlet, change) are finite, or INVALID_ARGUMENT. The tables
+ * computed on first access check themselves when read (a ratio beyond float64 throws there).
+ */
+function eagerFinite(r: SolveExtentsResult, fn: string): SolveExtentsResult {
+  finiteResult({ extents: r.extents, outlet: r.outlet, change: r.change }, fn);
+  return r;
 }
 
 /** One linear equation Σⱼ a[j] ξⱼ = b built from a spec: in float now, exactly on demand. */
@@ -210,14 +221,14 @@ interface SpecRow {
 function specNumber(s: Record<string, unknown>, field: string, k: number, fn: string): number {
   const v = s[field];
   if (typeof v !== "number" || !Number.isFinite(v)) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn}: spec ${k} needs a finite number for ${field}, got ${String(v)}`, { spec: k, field, value: v });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn}: spec ${k} needs a finite number for ${field}, got ${describeValue(v)}`, { spec: k, field, value: v });
   }
   return v;
 }
 
 function specReaction(R: number, v: unknown, k: number, fn: string): number {
   if (typeof v !== "number" || !Number.isInteger(v) || v < 0 || v >= R) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn}: spec ${k} names reaction ${String(v)}, but reactions are numbered 0..${R - 1}`, {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn}: spec ${k} names reaction ${describeValue(v)}, but reactions are numbered 0..${R - 1}`, {
       spec: k,
       reaction: v,
     });
@@ -810,15 +821,15 @@ function assemble<T>(
   const ext = new Array<number>(R);
   for (let j = 0; j < R; j++) ext[j] = noNegZero(extents[j] as number);
   let conversions: { conversion: Record<string, number>; conversionByReaction: Record<string, number>[] } | null = null;
-  const conversionTables = () => (conversions ??= conversionTablesOf(L, sys, xi, change));
+  const conversionTables = () => (conversions ??= finiteResult(conversionTablesOf(L, sys, xi, change), "solveExtents (conversion)"));
   let yields: Record<string, Record<string, number>> | null = null;
   let selectivity: Record<string, Record<string, number>> | null = null;
   const result = { extents: ext, outlet: outletFlows, change: changeFlows, roundOffZeros } as SolveExtentsResult;
   Object.defineProperties(result, {
     conversion: { enumerable: true, get: () => conversionTables().conversion },
     conversionByReaction: { enumerable: true, get: () => conversionTables().conversionByReaction },
-    yield: { enumerable: true, get: () => (yields ??= yieldTableOf(L, sys, change)) },
-    selectivity: { enumerable: true, get: () => (selectivity ??= selectivityTableOf(L, sys, change)) },
+    yield: { enumerable: true, get: () => (yields ??= finiteResult(yieldTableOf(L, sys, change), "solveExtents (yield)")) },
+    selectivity: { enumerable: true, get: () => (selectivity ??= finiteResult(selectivityTableOf(L, sys, change), "solveExtents (selectivity)")) },
   });
   return result;
 }

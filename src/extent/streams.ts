@@ -7,6 +7,7 @@ import { RxthermError } from "../errors.js";
 import { molarMassOf, validateFlows } from "./internal/extentSystem.js";
 import type { Flows } from "./types.js";
 import { compensatedSum } from "../numeric/compensatedSum.js";
+import { describeValue, finiteResult, optionsOf } from "../guards.js";
 
 /**
  * Options of the mass-flow conversions {@link massToMolarFlows} and {@link molarToMassFlows}.
@@ -38,12 +39,13 @@ export interface MassFlowOptions {
  * @see IUPAC/CIAAW standard atomic weights (molar masses)
  */
 export function massToMolarFlows(massFlows: Flows, options: MassFlowOptions = {}): Flows {
+  options = optionsOf(options, "massToMolarFlows");
   const fn = "massToMolarFlows";
   const factor = unitFactor(options, fn);
   validateFlows(massFlows, fn, "mass");
   const out: Flows = {};
   for (const [key, m] of Object.entries(massFlows)) out[key] = (m * factor) / molarMassOf(key, fn, "mass");
-  return out;
+  return finiteResult(out, "massToMolarFlows");
 }
 
 /**
@@ -62,12 +64,13 @@ export function massToMolarFlows(massFlows: Flows, options: MassFlowOptions = {}
  * @see IUPAC/CIAAW standard atomic weights (molar masses)
  */
 export function molarToMassFlows(flows: Flows, options: MassFlowOptions = {}): Flows {
+  options = optionsOf(options, "molarToMassFlows");
   const fn = "molarToMassFlows";
   const factor = unitFactor(options, fn);
   validateFlows(flows, fn, "flows");
   const out: Flows = {};
   for (const [key, n] of Object.entries(flows)) out[key] = (n * molarMassOf(key, fn, "flows")) / factor;
-  return out;
+  return finiteResult(out, "molarToMassFlows");
 }
 
 /**
@@ -77,6 +80,7 @@ export function molarToMassFlows(flows: Flows, options: MassFlowOptions = {}): F
  * @returns species key → mole fraction (dimensionless, sums to 1)
  * @throws {@link RxthermError} `INVALID_ARGUMENT` for an empty or all-zero stream or a non-finite flow
  * @throws {@link RxthermError} `NEGATIVE_FLOW` for a negative flow
+ * @throws formula parse errors (their own codes) for a key that is not a formula (`{ xyz: 1 }`, `__proto__`)
  * @example
  * moleFractions({ N2: 3, O2: 1 }) // => { N2: 0.75, O2: 0.25 }
  * @category Stoichiometry
@@ -84,7 +88,7 @@ export function molarToMassFlows(flows: Flows, options: MassFlowOptions = {}): F
  */
 export function moleFractions(flows: Flows): Record<string, number> {
   const fn = "moleFractions";
-  validateFlows(flows, fn, "flows", false);
+  validateFlows(flows, fn, "flows");
   const total = compensatedSum(Object.values(flows));
   if (!(total > 0)) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a stream with a positive total flow`, { total });
@@ -150,16 +154,17 @@ export function totalFlow(flows: Flows): number {
  * @see IUPAC/CIAAW standard atomic weights (molar masses)
  */
 export function totalMassFlow(flows: Flows, options: MassFlowOptions = {}): number {
+  options = optionsOf(options, "totalMassFlow");
   const fn = "totalMassFlow";
   const factor = unitFactor(options, fn);
   validateFlows(flows, fn, "flows");
-  return compensatedSum(Object.entries(flows).map(([key, n]) => n * molarMassOf(key, fn, "flows"))) / factor;
+  return finiteResult(compensatedSum(Object.entries(flows).map(([key, n]) => n * molarMassOf(key, fn, "flows"))) / factor, fn);
 }
 
 function unitFactor(options: MassFlowOptions, fn: string): number {
   const u = options.massUnit ?? "kg";
   if (u === "kg") return 1000;
   if (u === "g") return 1;
-  throw new RxthermError("INVALID_ARGUMENT", `${fn} requires massUnit "kg" or "g", got ${String(u)}`, { massUnit: u });
+  throw new RxthermError("INVALID_ARGUMENT", `${fn} requires massUnit "kg" or "g", got ${describeValue(u)}`, { massUnit: u });
 }
 

@@ -1,5 +1,6 @@
 import { RxthermError } from "../errors.js";
 import { slipHintDetails, withSlipHint } from "../units.js";
+import { describeValue } from "../guards.js";
 
 /**
  * Saturation (vapour) pressure of water between its triple point and critical point.
@@ -18,7 +19,7 @@ import { slipHintDetails, withSlipHint } from "../units.js";
  */
 export function waterSaturationPressure(temperatureK: number): number {
   if (typeof temperatureK !== "number" || !Number.isFinite(temperatureK) || temperatureK < 273.15 || temperatureK > 647.096) {
-    throw new RxthermError("OUT_OF_RANGE", `waterSaturationPressure requires 273.15 <= T <= 647.096 K, got ${String(temperatureK)}${withSlipHint(temperatureK)}`, {
+    throw new RxthermError("OUT_OF_RANGE", `waterSaturationPressure requires 273.15 <= T <= 647.096 K, got ${describeValue(temperatureK)}${withSlipHint(temperatureK)}`, {
       T: temperatureK,
       range: [273.15, 647.096],
       ...slipHintDetails(temperatureK),

@@ -1,6 +1,7 @@
 import { solveFlamePoint } from "./internal/flameProblem.js";
 import { prepareFlameInput, toFlameResult } from "./internal/flameInput.js";
 import type { AdiabaticFlameInput, AdiabaticFlameOptions, AdiabaticFlameResult } from "./types.js";
+import { optionsOf } from "../guards.js";
 
 export type { AdiabaticFlameInput, AdiabaticFlameOptions, AdiabaticFlameResult } from "./types.js";
 
@@ -52,6 +53,7 @@ export type { AdiabaticFlameInput, AdiabaticFlameOptions, AdiabaticFlameResult }
  *   W. B. White, S. M. Johnson, G. B. Dantzig, J. Chem. Phys. 28 (1958) 751 (equilibrium by Gibbs minimisation)
  */
 export function adiabaticFlameTemperature(input: AdiabaticFlameInput, options: AdiabaticFlameOptions = {}): AdiabaticFlameResult {
+  options = optionsOf(options, "adiabaticFlameTemperature");
   const fn = "adiabaticFlameTemperature";
   const { setup, point } = prepareFlameInput(fn, input, options);
   const r = solveFlamePoint(setup, point);

@@ -16,6 +16,7 @@ import {
 import { resolveLimits } from "./internal/flameInput.js";
 import { attachView } from "../view/attachView.js";
 import { EQUILIBRIUM_VIEW } from "./internal/flameView.js";
+import { describeValue, optionsOf, requireArray } from "../guards.js";
 
 /**
  * What to bring to equilibrium, and at which conditions, for {@link equilibriumComposition}.
@@ -153,6 +154,7 @@ export interface EquilibriumResult {
  *   S. Gordon, B. J. McBride, NASA Reference Publication 1311, Part I (1994) (step-size control)
  */
 export function equilibriumComposition(input: EquilibriumInput, options: EquilibriumOptions = {}): EquilibriumResult {
+  options = optionsOf(options, "equilibriumComposition");
   const fn = "equilibriumComposition";
   if (input === null || typeof input !== "object") {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object`, { input });
@@ -160,7 +162,7 @@ export function equilibriumComposition(input: EquilibriumInput, options: Equilib
   const lim = resolveLimits(fn, options);
   const P = input.P ?? ATMOSPHERE_PA;
   if (typeof P !== "number" || !(P > 0) || !Number.isFinite(P)) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires P > 0 Pa, got ${String(P)}`, { P });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires P > 0 Pa, got ${describeValue(P)}`, { P });
   }
   const hasT = input.T !== undefined;
   const hasH = input.H !== undefined;
@@ -168,15 +170,21 @@ export function equilibriumComposition(input: EquilibriumInput, options: Equilib
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires exactly one of T and H`, { T: input.T, H: input.H });
   }
   if (hasT && (typeof input.T !== "number" || !(input.T > 0) || !Number.isFinite(input.T))) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires T > 0 K, got ${String(input.T)}`, { T: input.T });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires T > 0 K, got ${describeValue(input.T)}`, { T: input.T });
   }
   if (hasH && (typeof input.H !== "number" || !Number.isFinite(input.H))) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a finite H in J, got ${String(input.H)}`, { H: input.H });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a finite H in J, got ${describeValue(input.H)}`, { H: input.H });
   }
   if (!Array.isArray(input.species) || input.species.length === 0) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a non-empty list of product species`, { species: input.species });
   }
   const feedElements = elementTotals(fn, input);
+  requireArray(input.species, fn, "input.species");
+  input.species.forEach((key, i) => {
+    if (typeof key !== "string") {
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires species keys as text, got ${describeValue(key)} at index ${i}`, { path: `input.species[${i}]` });
+    }
+  });
   const products = input.species.map((key) => ({ key, species: flameSpecies(fn, key, input.library) }));
   const engine = prepareEngine(fn, products, feedElements);
   let T: number;
@@ -188,7 +196,7 @@ export function equilibriumComposition(input: EquilibriumInput, options: Equilib
   } else {
     const initial = options.initialT ?? 2000;
     if (!(initial > 0) || !Number.isFinite(initial)) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires initialT > 0 K, got ${String(initial)}`, { initialT: initial });
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires initialT > 0 K, got ${describeValue(initial)}`, { initialT: initial });
     }
     const sol = solveEnergy(engine, input.H!, "P", P, initial, lim);
     T = sol.T;
@@ -243,7 +251,7 @@ function elementTotals(fn: string, input: EquilibriumInput): Map<string, number>
   }
   for (const [key, n] of Object.entries(src)) {
     if (typeof n !== "number" || !Number.isFinite(n) || n < 0) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires every amount to be a finite number ≥ 0, got ${String(n)} for ${key}`, { species: key, amount: n });
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires every amount to be a finite number ≥ 0, got ${describeValue(n)} for ${key}`, { species: key, amount: n });
     }
     if (n === 0) continue;
     if (hasFeed) {

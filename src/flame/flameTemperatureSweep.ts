@@ -5,6 +5,7 @@ import { flamePointOf, prepareFlameInput, toFlameResult } from "./internal/flame
 import type { AdiabaticFlameInput, AdiabaticFlameOptions } from "./types.js";
 import { attachView } from "../view/attachView.js";
 import { SWEEP_VIEW } from "./internal/flameView.js";
+import { describeValue, optionsOf, requireArray } from "../guards.js";
 
 /**
  * Which setting of an {@link AdiabaticFlameInput} a sweep varies, and over which values.
@@ -53,6 +54,16 @@ export interface FlameSweepResult {
 }
 
 /**
+ * Most points in one flame-temperature sweep; a longer sweep is TOO_LARGE (split it: each point
+ * is a full flame solve).
+ *
+ * @category Flame
+ * @example
+ * MAX_SWEEP_POINTS // => 1000
+ */
+export const MAX_SWEEP_POINTS = 1000;
+
+/**
  * Adiabatic flame temperature over a range of one setting — equivalence ratio, excess air,
  * reactant or preheat temperature, or pressure — for plotting or screening.
  *
@@ -75,6 +86,7 @@ export interface FlameSweepResult {
  * @see NIST-JANAF Thermochemical Tables, 4th ed. (Chase 1998) for the built-in product data
  */
 export function flameTemperatureSweep(input: AdiabaticFlameInput, sweep: FlameSweep, options: AdiabaticFlameOptions = {}): FlameSweepResult {
+  options = optionsOf(options, "flameTemperatureSweep");
   const fn = "flameTemperatureSweep";
   if (sweep === null || typeof sweep !== "object" || !Array.isArray(sweep.values) || sweep.values.length === 0) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a sweep { parameter, values } with at least one value`, { sweep });
@@ -82,8 +94,17 @@ export function flameTemperatureSweep(input: AdiabaticFlameInput, sweep: FlameSw
   const { parameter } = sweep;
   const known = ["equivalenceRatio", "excessAir", "T", "fuelT", "oxidizerT", "P"];
   if (!known.includes(parameter)) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} cannot vary ${String(parameter)}; choose one of ${known.join(", ")}`, { parameter });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} cannot vary ${describeValue(parameter)}; choose one of ${known.join(", ")}`, { parameter });
   }
+  requireArray(sweep.values, fn, "sweep.values", MAX_SWEEP_POINTS);
+  sweep.values.forEach((v, i) => {
+    // null or a non-number would silently mean "the default" (φ = 1, 101 325 Pa) for that point
+    if (typeof v !== "number" || !Number.isFinite(v)) {
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires every sweep value to be a finite number, got ${describeValue(v)} at index ${i}`, {
+        path: `sweep.values[${i}]`, index: i, value: describeValue(v),
+      });
+    }
+  });
   const values = [...sweep.values];
   // validate every value up front (nothing half-done): each must be a valid input on its own
   const points: FlamePoint[] = [];

@@ -22,6 +22,7 @@
  * @module
  */
 import { RxthermError } from "../errors.js";
+import { deepFreeze, describeValue } from "../guards.js";
 
 /**
  * What an {@link ElementData.atomicWeight} is:
@@ -75,7 +76,7 @@ export const ATOMIC_WEIGHTS_EDITION =
  * ATOMIC_WEIGHTS[5] // => { Z: 6, symbol: "C", name: "carbon", atomicWeight: 12.011, kind: "standard" }
  * @see J. Meija et al., Atomic weights of the elements 2013, Pure Appl. Chem. 88 (2016) 265–291
  */
-export const ATOMIC_WEIGHTS: readonly ElementData[] = [
+export const ATOMIC_WEIGHTS: readonly ElementData[] = /* @__PURE__ */ deepFreeze([
   { Z: 1, symbol: "H", name: "hydrogen", atomicWeight: 1.008, kind: "standard" },
   { Z: 2, symbol: "He", name: "helium", atomicWeight: 4.0026, kind: "standard" },
   { Z: 3, symbol: "Li", name: "lithium", atomicWeight: 6.94, kind: "standard" },
@@ -194,7 +195,7 @@ export const ATOMIC_WEIGHTS: readonly ElementData[] = [
   { Z: 116, symbol: "Lv", name: "livermorium", atomicWeight: 291, kind: "massNumber", note: "mass number of a long-lived isotope; compilations differ for the superheavy elements" },
   { Z: 117, symbol: "Ts", name: "tennessine", atomicWeight: 293, kind: "massNumber", note: "mass number of a long-lived isotope; compilations differ for the superheavy elements" },
   { Z: 118, symbol: "Og", name: "oganesson", atomicWeight: 294, kind: "massNumber", note: "mass number of a long-lived isotope; compilations differ for the superheavy elements" },
-];
+]);
 
 /**
  * Deuterium (D) and tritium (T), accepted as element keys in formulas (`D2O`, `HTO`), with their
@@ -205,10 +206,10 @@ export const ATOMIC_WEIGHTS: readonly ElementData[] = [
  * @example
  * HYDROGEN_ISOTOPES[0].atomicWeight // => 2.014102 (g/mol, deuterium)
  */
-export const HYDROGEN_ISOTOPES: readonly ElementData[] = [
+export const HYDROGEN_ISOTOPES: readonly ElementData[] = /* @__PURE__ */ deepFreeze([
   { Z: 1, symbol: "D", name: "deuterium", atomicWeight: 2.014102, kind: "isotope", note: "atomic mass of hydrogen-2 (Atomic Mass Evaluation, from memory)" },
   { Z: 1, symbol: "T", name: "tritium", atomicWeight: 3.016049, kind: "isotope", note: "atomic mass of hydrogen-3 (Atomic Mass Evaluation, from memory)" },
-];
+]);
 
 /**
  * The table row of an element symbol (case-sensitive), or of `D` / `T`.
@@ -228,7 +229,7 @@ export function elementData(symbol: string): ElementData {
   const map = bySymbol();
   const row = map.get(symbol);
   if (row !== undefined) return row;
-  const shown = typeof symbol === "string" ? symbol : String(symbol);
+  const shown = typeof symbol === "string" ? symbol : describeValue(symbol);
   let suggestion: string | undefined;
   if (typeof symbol === "string" && symbol.length >= 1 && symbol.length <= 2) {
     const fixed = symbol.charAt(0).toUpperCase() + symbol.slice(1).toLowerCase();

@@ -1,6 +1,7 @@
 import { RxthermError } from "../errors.js";
 import { checkFormula } from "./internal/checkFormula.js";
 import type { Formula } from "./types.js";
+import { optionsOf, describeValue } from "../guards.js";
 
 /**
  * Options of {@link formatFormula}.
@@ -47,10 +48,11 @@ export interface FormatFormulaOptions {
  * @see E. A. Hill, J. Am. Chem. Soc. 22 (1900) 478–494 (the Hill order of formula indexes)
  */
 export function formatFormula(formula: Formula, options: FormatFormulaOptions = {}): string {
+  options = optionsOf(options, "formatFormula");
   checkFormula(formula, "formatFormula");
   const order = options.order ?? "hill";
   if (order !== "hill" && order !== "input") {
-    throw new RxthermError("INVALID_ARGUMENT", `formatFormula accepts order "hill" or "input", got ${String(order)}`, { order });
+    throw new RxthermError("INVALID_ARGUMENT", `formatFormula accepts order "hill" or "input", got ${describeValue(order)}`, { order });
   }
   const writeCharge = options.charge ?? true;
   const writePhase = options.phase ?? true;

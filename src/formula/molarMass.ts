@@ -4,6 +4,7 @@ import { checkFormula } from "./internal/checkFormula.js";
 import { INDEX_MICRO_WEIGHTS, INDEX_WEIGHTS, symbolIndexOf } from "./internal/elementIndex.js";
 import { parseFormula } from "./parseFormula.js";
 import type { Formula } from "./types.js";
+import { optionsOf, describeValue } from "../guards.js";
 
 /**
  * Options of {@link molarMass}.
@@ -54,10 +55,11 @@ export const ELECTRON_MOLAR_MASS_G_PER_MOL = 0.000548579909;
  * @see J. Meija et al., Atomic weights of the elements 2013, Pure Appl. Chem. 88 (2016) 265–291
  */
 export function molarMass(formula: string | Formula, options: MolarMassOptions = {}): number {
+  options = optionsOf(options, "molarMass");
   const f = typeof formula === "string" ? parseFormula(formula) : checked(formula);
   const electron = options.electronMass ?? false;
   if (typeof electron !== "boolean") {
-    throw new RxthermError("INVALID_ARGUMENT", `molarMass requires options.electronMass to be a boolean, got ${String(electron)}`, {});
+    throw new RxthermError("INVALID_ARGUMENT", `molarMass requires options.electronMass to be a boolean, got ${describeValue(electron)}`, {});
   }
   if (!electron) {
     // integer fast path: exact integer sum in micro-units (every weight has at most 6 decimals)

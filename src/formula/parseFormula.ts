@@ -3,6 +3,7 @@ import { RxthermError, type RxthermErrorCode } from "../errors.js";
 import { ELEMENT_KEY_COUNT, INDEX_SYMBOLS, symbolIndex } from "./internal/elementIndex.js";
 import type { Formula, Phase } from "./types.js";
 import { FORMULA_PROTOTYPE } from "./internal/formulaView.js";
+import { describeValue } from "../guards.js";
 
 /**
  * The documented limits of the formula grammar. Text beyond them is refused with a clear error
@@ -20,14 +21,14 @@ import { FORMULA_PROTOTYPE } from "./internal/formulaView.js";
  * @example
  * FORMULA_LIMITS.maxNestingDepth // => 16
  */
-export const FORMULA_LIMITS = {
+export const FORMULA_LIMITS = /* @__PURE__ */ Object.freeze({
   maxLength: 4096,
   maxNestingDepth: 16,
   maxCount: 1e9,
   minCount: 1e-6,
   maxDecimalPlaces: 24,
   maxCharge: 99,
-} as const;
+} as const);
 
 /**
  * Parse a chemical formula such as `CuSO4·5H2O`, `[Fe(CN)6]^4-`, `Fe0.947O` or `H2O(g)`.
@@ -498,13 +499,16 @@ function finish(
     DCUM.length = 0;
     GDMUL.length = 0;
   }
+  // Frozen, so an edit to a returned formula can never reach a later result; the prototype carries the
+  // (non-enumerable) display methods
+  Object.freeze(elements);
   // the prototype carries the (non-enumerable) display methods; no per-result cost beyond the allocation
   const f = Object.create(FORMULA_PROTOTYPE) as { text: string; elements: Record<string, number>; charge: number; phase: Phase | null };
   f.text = start === 0 && end === s.length ? s : s.slice(start, end);
   f.elements = elements;
   f.charge = charge;
   f.phase = phase;
-  return f;
+  return Object.freeze(f);
 }
 
 /** Zero the running totals of the first `distinct` elements (before throwing, so no state leaks into the next call). */
@@ -787,7 +791,7 @@ function unknownElement(s: string, col: number, len: number, end: number): never
 }
 
 function describe(v: unknown): string {
-  if (typeof v === "number" || typeof v === "boolean" || typeof v === "bigint") return `${typeof v} ${String(v)}`;
+  if (typeof v === "number" || typeof v === "boolean" || typeof v === "bigint") return `${typeof v} ${describeValue(v)}`;
   if (v === null) return "null";
   return typeof v;
 }

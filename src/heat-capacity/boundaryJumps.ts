@@ -1,5 +1,7 @@
+import { RxthermError } from "../errors.js";
 import { formAbsolute, formCp } from "./internal/cpCompile.js";
 import type { HeatCapacity } from "./createHeatCapacity.js";
+import { describeValue } from "../guards.js";
 
 /**
  * How two adjacent ranges of a heat-capacity model meet at their shared boundary.
@@ -50,6 +52,9 @@ export interface BoundaryJump {
  * @see NIST Chemistry WebBook, SRD 69: Shomate parameters and their temperature ranges
  */
 export function boundaryJumps(model: HeatCapacity): BoundaryJump[] {
+  if (typeof model !== "object" || model === null || !Array.isArray(model.ranges) || typeof model.cp !== "function") {
+    throw new RxthermError("INVALID_ARGUMENT", `boundaryJumps requires a HeatCapacity from createHeatCapacity, got ${describeValue(model)}`, { path: "model" });
+  }
   const ranges = model.ranges;
   const jumps: BoundaryJump[] = [];
   for (let i = 0; i + 1 < ranges.length; i++) {

@@ -3,6 +3,7 @@ import { slipHintDetails, withSlipHint } from "../units.js";
 import { allWithin } from "../numeric/allWithin.js";
 import * as compiled from "./internal/cpCompile.js";
 import type { CpRange, RangeOptions } from "./types.js";
+import { optionsOf, describeValue } from "../guards.js";
 
 // Module-local aliases of the compiled-form helpers. The hot paths call these per evaluation; a
 // local const binding is a direct reference that the JIT inlines, whereas some module loaders (the
@@ -18,6 +19,7 @@ const prepareRanges = compiled.prepareRanges, rangePieces = compiled.rangePieces
 const CP_0 = compiled.CP_0, CP_1 = compiled.CP_1, CP_2 = compiled.CP_2, CP_3 = compiled.CP_3, CP_4 = compiled.CP_4;
 const CP_M1 = compiled.CP_M1, CP_M2 = compiled.CP_M2;
 const S_LN = compiled.S_LN, S_INV = compiled.S_INV, S_INV2 = compiled.S_INV2, S_1 = compiled.S_1, S_2 = compiled.S_2, S_3 = compiled.S_3, S_4 = compiled.S_4;
+export { MAX_CP_TABLE_POINTS, MAX_CP_RANGES } from "./internal/cpCompile.js";
 
 /**
  * Options of {@link createHeatCapacity}.
@@ -37,6 +39,13 @@ export interface CreateHeatCapacityOptions {
    * @defaultValue 1e-6
    */
   boundaryToleranceK?: number;
+  /**
+   * Require Cp > 0 over every range (a physical heat capacity always is). `false` keeps only the
+   * finiteness checks, for purely mathematical use of the forms (e.g. testing integrals of
+   * arbitrary coefficient sets).
+   * @defaultValue true
+   */
+  requirePositiveCp?: boolean;
 }
 
 /**
@@ -165,13 +174,14 @@ export interface HeatCapacity {
  * @see B. J. McBride, M. J. Zehe, S. Gordon, NASA/TP-2002-211556 (2002): the 7- and 9-coefficient polynomials
  */
 export function createHeatCapacity(ranges: readonly CpRange[], options: CreateHeatCapacityOptions = {}): HeatCapacity {
+  options = optionsOf(options, "createHeatCapacity");
   const label = options.label;
   const tol = options.boundaryToleranceK ?? 1e-6;
   if (typeof tol !== "number" || !(tol >= 0) || !Number.isFinite(tol)) {
-    throw new RxthermError("INVALID_ARGUMENT", `createHeatCapacity requires boundaryToleranceK >= 0, got ${String(tol)}`, { boundaryToleranceK: tol });
+    throw new RxthermError("INVALID_ARGUMENT", `createHeatCapacity requires boundaryToleranceK >= 0, got ${describeValue(tol)}`, { boundaryToleranceK: tol });
   }
   const sorted = prepareRanges("createHeatCapacity", label, ranges, tol);
-  return new PiecewiseHeatCapacity(sorted, label);
+  return new PiecewiseHeatCapacity(sorted, label, options.requirePositiveCp !== false);
 }
 
 class PiecewiseHeatCapacity implements HeatCapacity {
@@ -196,7 +206,7 @@ class PiecewiseHeatCapacity implements HeatCapacity {
   private readonly absH: Float64Array;
   private readonly absS: Float64Array;
 
-  constructor(ranges: CpRange[], label: string | undefined) {
+  constructor(ranges: CpRange[], label: string | undefined, requirePositiveCp: boolean) {
     this.label = label;
     this.ranges = Object.freeze(ranges);
     this.TminK = ranges[0]!.TminK;
@@ -250,7 +260,35 @@ class PiecewiseHeatCapacity implements HeatCapacity {
       this.absS[i] = c.sConstJPerMolK - this.k[i * STRIDE + S_0]!;
     }
     this.hasAbsoluteConstants = all;
+    this.checkValues(requirePositiveCp);
     Object.freeze(this);
+  }
+
+  /**
+   * Cp must be finite and > 0, and H and S finite, over every segment (checked at its ends and
+   * 7 interior points): coefficients like 1e308 or a negative Cp are INVALID_DATA, never NaN later.
+   */
+  private checkValues(requirePositiveCp: boolean): void {
+    for (let i = 0; i < this.n; i++) {
+      const lo = i === 0 ? this.TminK : this.upper[i - 1]!;
+      const hi = this.upper[i]!;
+      const o = i * STRIDE;
+      for (let j = 0; j <= 8; j++) {
+        const T = j === 8 ? hi : lo + ((hi - lo) * j) / 8;
+        const cp = cpAt(this.k, o, T);
+        const bad = !Number.isFinite(cp) ? `Cp is not finite at ${T} K`
+          : requirePositiveCp && !(cp > 0) ? `Cp is not positive at ${T} K (${cp} J/(mol·K))`
+          : !Number.isFinite(hAt(this.k, o, T)) || !Number.isFinite(sAt(this.k, o, T)) ? `the H and S integrals are not finite at ${T} K` : null;
+        if (bad !== null) {
+          const range = this.rangeOf[i]!;
+          throw new RxthermError(
+            "INVALID_DATA",
+            `createHeatCapacity${this.label ? ` (${this.label})` : ""}: ${bad}`,
+            { label: this.label, path: ["ranges", range, "cp"], T, cp, issues: [{ path: ["ranges", range, "cp"], message: bad }] },
+          );
+        }
+      }
+    }
   }
 
   // ── scalar evaluations ────────────────────────────────────────────────────
@@ -454,7 +492,7 @@ class PiecewiseHeatCapacity implements HeatCapacity {
     if (typeof T !== "number" || !Number.isFinite(T) || T <= 0) {
       throw new RxthermError(
         "INVALID_ARGUMENT",
-        `${fn}${this.label ? ` (${this.label})` : ""} requires a finite temperature > 0 K, got ${String(T)}`,
+        `${fn}${this.label ? ` (${this.label})` : ""} requires a finite temperature > 0 K, got ${describeValue(T)}`,
         index === undefined ? { label: this.label, T } : { label: this.label, T, index },
       );
     }

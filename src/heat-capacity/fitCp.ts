@@ -3,6 +3,7 @@ import { GAS_CONSTANT_J_PER_MOL_K } from "../units.js";
 import { CELSIUS_OFFSET_K, REFERENCE_T_K, STRIDE, canonical, formCp, hAt, sAt, writeSegment } from "./internal/cpCompile.js";
 import { leastSquares } from "../numeric/leastSquares.js";
 import type { CpForm, CpRange } from "./types.js";
+import { describeValue, finiteResult, optionsOf } from "../guards.js";
 
 /**
  * One measured or tabulated heat capacity: temperature `T` in K and `cp` in J/(mol·K).
@@ -129,6 +130,7 @@ export interface FitCpResult {
  * @see NIST Chemistry WebBook, SRD 69: Shomate equation and the meaning of F, G, H
  */
 export function fitCp(points: readonly CpPoint[], form: FitCpFormName, options: FitCpOptions = {}): FitCpResult {
+  options = optionsOf(options, "fitCp");
   const fn = "fitCp";
   if (!Array.isArray(points)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an array of points`, { points });
   points.forEach((p, index) => {
@@ -179,6 +181,7 @@ export function fitCp(points: readonly CpPoint[], form: FitCpFormName, options: 
     maxRes = Math.max(maxRes, Math.abs(r));
     sumSq += r * r;
   }
+  finiteResult(cpForm, "fitCp"); // points such as Cp = 1e308 overflow the least-squares fit
   return Object.freeze({
     range: Object.freeze({ TminK, TmaxK, cp: cpForm }),
     coefficients,
@@ -212,9 +215,9 @@ function basisOf(fn: string, form: FitCpFormName, o: FitCpOptions): Basis {
       const unit = o.temperatureUnit ?? "K";
       const energy = o.energyUnit ?? "J";
       const inv = o.inverseSquare ?? false;
-      if (![0, 1, 2, 3].includes(degree)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires degree 0, 1, 2 or 3, got ${String(degree)}`, { degree });
-      if (unit !== "K" && unit !== "C") throw new RxthermError("INVALID_ARGUMENT", `${fn} requires temperatureUnit "K" or "C", got ${String(unit)}`, { temperatureUnit: unit });
-      if (energy !== "J" && energy !== "kJ") throw new RxthermError("INVALID_ARGUMENT", `${fn} requires energyUnit "J" or "kJ", got ${String(energy)}`, { energyUnit: energy });
+      if (![0, 1, 2, 3].includes(degree)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires degree 0, 1, 2 or 3, got ${describeValue(degree)}`, { degree });
+      if (unit !== "K" && unit !== "C") throw new RxthermError("INVALID_ARGUMENT", `${fn} requires temperatureUnit "K" or "C", got ${describeValue(unit)}`, { temperatureUnit: unit });
+      if (energy !== "J" && energy !== "kJ") throw new RxthermError("INVALID_ARGUMENT", `${fn} requires energyUnit "J" or "kJ", got ${describeValue(energy)}`, { energyUnit: energy });
       if (inv && unit === "C") {
         throw new RxthermError("INVALID_ARGUMENT", `${fn} cannot fit an inverse-square term to a polynomial in °C (singular at 0 °C)`, { temperatureUnit: unit, inverseSquare: inv });
       }
@@ -231,7 +234,7 @@ function basisOf(fn: string, form: FitCpFormName, o: FitCpOptions): Basis {
       };
     }
     default:
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} cannot fit the form ${String(form)}; use "shomate", "polynomial", "nasa7", "nasa9" or "constant"`, { form });
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} cannot fit the form ${describeValue(form)}; use "shomate", "polynomial", "nasa7", "nasa9" or "constant"`, { form });
   }
 }
 
@@ -283,7 +286,7 @@ function buildForm(form: FitCpFormName, c: readonly number[], o: FitCpOptions): 
 function matchTarget(o: FitCpOptions): { T: number; H?: number; S?: number } | null {
   const check = (name: string, v: number | undefined): void => {
     if (v !== undefined && (typeof v !== "number" || !Number.isFinite(v))) {
-      throw new RxthermError("INVALID_ARGUMENT", `fitCp requires ${name} to be a finite number, got ${String(v)}`, { [name]: v });
+      throw new RxthermError("INVALID_ARGUMENT", `fitCp requires ${name} to be a finite number, got ${describeValue(v)}`, { [name]: v });
     }
   };
   if (o.match !== undefined) {
@@ -297,7 +300,7 @@ function matchTarget(o: FitCpOptions): { T: number; H?: number; S?: number } | n
   if (o.matchAt !== undefined) {
     const TK = o.matchAt.TK;
     if (typeof TK !== "number" || !Number.isFinite(TK) || TK <= 0) {
-      throw new RxthermError("INVALID_ARGUMENT", `fitCp requires matchAt.TK to be a finite temperature > 0 K, got ${String(TK)}`, { TK });
+      throw new RxthermError("INVALID_ARGUMENT", `fitCp requires matchAt.TK to be a finite temperature > 0 K, got ${describeValue(TK)}`, { TK });
     }
     check("matchAt.HJPerMol", o.matchAt.HJPerMol);
     check("matchAt.SJPerMolK", o.matchAt.SJPerMolK);

@@ -18,6 +18,7 @@
  *
  * @module
  */
+import { requireArray } from "../guards.js";
 import { RxthermError } from "../errors.js";
 import { complement, integerGaussJordan, integerNullSpaceFromEchelon } from "./integerElimination.js";
 import {
@@ -177,6 +178,9 @@ export function integerNullSpace(matrix: MatrixLike): bigint[][] {
  * @see G. Strang, Linear Algebra and Its Applications, 4th ed. (2006), §2.2 (the complete solution to Ax = b)
  */
 export function solveLinearSystem(a: MatrixLike, b: readonly RationalLike[]): LinearSolution {
+  requireArray(a, "solveLinearSystem", "a");
+  requireArray(b, "solveLinearSystem", "b");
+  a.forEach((row, i) => requireArray(row, "solveLinearSystem", `a[${i}]`));
   const m = a.length;
   if (b.length !== m) {
     throw new RxthermError("INVALID_ARGUMENT", `solveLinearSystem requires b to have one entry per row of a (${m}), got ${b.length}`, {
@@ -236,6 +240,8 @@ const ZERO: Rational = /* @__PURE__ */ rational(0n, 1n);
 const ONE: Rational = /* @__PURE__ */ rational(1n, 1n);
 
 function toIntegerRows(matrix: MatrixLike, fn: string): { ints: bigint[][]; cols: number } {
+  requireArray(matrix, fn, "matrix");
+  matrix.forEach((row, i) => requireArray(row, fn, `matrix[${i}]`));
   const cols = matrix.length === 0 ? 0 : (matrix[0] as readonly RationalLike[]).length;
   const ints = matrix.map((row, i) => {
     if (row.length !== cols) {

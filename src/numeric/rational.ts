@@ -17,6 +17,7 @@
  * @module
  */
 import { RxthermError } from "../errors.js";
+import { describeValue, requireArray } from "../guards.js";
 
 /**
  * An exact rational number `num/den`, normalised: `den > 0n`, `gcd(|num|, den) = 1n`, and
@@ -33,8 +34,19 @@ export interface Rational {
   readonly den: bigint;
 }
 
-/** Values that {@link rationalFrom} accepts. @category Numeric */
-export type RationalLike = Rational | bigint | number | string;
+/**
+ * Values that {@link rationalFrom} accepts. A rational may also come back from JSON with plain
+ * numbers or integer text for its parts (`{ num: 25, den: 2 }`, `{ num: "25", den: "2" }`): the
+ * parts are converted exactly when they are integers, otherwise the value is rejected.
+ *
+ * @category Numeric
+ */
+export type RationalLike =
+  | Rational
+  | { readonly num: bigint | number | string; readonly den: bigint | number | string }
+  | bigint
+  | number
+  | string;
 
 /**
  * Greatest common divisor of two BigInts (always ≥ 0; gcd(0, 0) = 0).
@@ -50,6 +62,14 @@ export type RationalLike = Rational | bigint | number | string;
  * @see Euclid, Elements VII.2 (the Euclidean algorithm)
  */
 export function gcdBigInt(a: bigint, b: bigint): bigint {
+  // The one guard against the endless loop of a number or undefined reaching Euclid's loop
+  // (0 % 0 is NaN, and NaN !== 0n for ever): only BigInts go in.
+  if (typeof a !== "bigint" || typeof b !== "bigint") {
+    throw new RxthermError("INVALID_ARGUMENT", "gcdBigInt requires two bigint integers", {
+      a: describeValue(a),
+      b: describeValue(b),
+    });
+  }
   if (a < 0n) a = -a;
   if (b < 0n) b = -b;
   while (b !== 0n) {
@@ -128,6 +148,9 @@ export function rationalFromInteger(n: bigint | number): Rational {
  * @category Numeric
  */
 export function rationalFromDecimalString(text: string): Rational {
+  if (typeof text !== "string") {
+    throw new RxthermError("INVALID_ARGUMENT", `rationalFromDecimalString requires text, got ${describeValue(text)}`, { text: describeValue(text) });
+  }
   const t = text.trim();
   const frac = FRACTION_RE.exec(t);
   if (frac) {
@@ -168,8 +191,8 @@ export function rationalFromDecimalString(text: string): Rational {
  * @category Numeric
  */
 export function rationalFromNumber(x: number): Rational {
-  if (!Number.isFinite(x)) {
-    throw new RxthermError("INVALID_ARGUMENT", `rationalFromNumber requires a finite number, got ${x}`, { value: x });
+  if (typeof x !== "number" || !Number.isFinite(x)) {
+    throw new RxthermError("INVALID_ARGUMENT", `rationalFromNumber requires a finite number, got ${describeValue(x)}`, { value: typeof x === "number" ? x : describeValue(x) });
   }
   if (Number.isSafeInteger(x)) return Object.freeze(new ExactRational(BigInt(x), 1n));
   return rationalFromDecimalString(String(x));
@@ -190,7 +213,17 @@ export function rationalFrom(value: RationalLike): Rational {
   if (typeof value === "bigint") return Object.freeze(new ExactRational(value, 1n));
   if (typeof value === "number") return rationalFromNumber(value);
   if (typeof value === "string") return rationalFromDecimalString(value);
-  return normalise(value.num, value.den);
+  if (typeof value === "object" && value !== null) {
+    const num = integerPart(value.num, "num");
+    const den = integerPart(value.den, "den");
+    if (den === 0n) {
+      throw new RxthermError("INVALID_ARGUMENT", "rationalFrom requires a non-zero denominator", { num: String(num), den: "0" });
+    }
+    return normalise(num, den);
+  }
+  throw new RxthermError("INVALID_ARGUMENT", `rationalFrom requires a rational, bigint, number or text, got ${describeValue(value)}`, {
+    value: describeValue(value),
+  });
 }
 
 /**
@@ -204,6 +237,8 @@ export function rationalFrom(value: RationalLike): Rational {
  * @category Numeric
  */
 export function rationalAdd(a: Rational, b: Rational): Rational {
+  checkRational(a, "rationalAdd", "a");
+  checkRational(b, "rationalAdd", "b");
   if (a.den === 1n && b.den === 1n) return Object.freeze(new ExactRational(a.num + b.num, 1n));
   return normalise(a.num * b.den + b.num * a.den, a.den * b.den);
 }
@@ -219,6 +254,8 @@ export function rationalAdd(a: Rational, b: Rational): Rational {
  * @category Numeric
  */
 export function rationalSub(a: Rational, b: Rational): Rational {
+  checkRational(a, "rationalSub", "a");
+  checkRational(b, "rationalSub", "b");
   if (a.den === 1n && b.den === 1n) return Object.freeze(new ExactRational(a.num - b.num, 1n));
   return normalise(a.num * b.den - b.num * a.den, a.den * b.den);
 }
@@ -234,6 +271,8 @@ export function rationalSub(a: Rational, b: Rational): Rational {
  * @category Numeric
  */
 export function rationalMul(a: Rational, b: Rational): Rational {
+  checkRational(a, "rationalMul", "a");
+  checkRational(b, "rationalMul", "b");
   if (a.den === 1n && b.den === 1n) return Object.freeze(new ExactRational(a.num * b.num, 1n));
   return normalise(a.num * b.num, a.den * b.den);
 }
@@ -250,6 +289,8 @@ export function rationalMul(a: Rational, b: Rational): Rational {
  * @category Numeric
  */
 export function rationalDiv(a: Rational, b: Rational): Rational {
+  checkRational(a, "rationalDiv", "a");
+  checkRational(b, "rationalDiv", "b");
   if (b.num === 0n) {
     throw new RxthermError("INVALID_ARGUMENT", "rationalDiv requires a non-zero divisor", { dividend: rationalToString(a) });
   }
@@ -266,6 +307,7 @@ export function rationalDiv(a: Rational, b: Rational): Rational {
  * @category Numeric
  */
 export function rationalNeg(a: Rational): Rational {
+  checkRational(a, "rationalNeg", "a");
   return Object.freeze(new ExactRational(a.num === 0n ? 0n : -a.num, a.den));
 }
 
@@ -280,6 +322,8 @@ export function rationalNeg(a: Rational): Rational {
  * @category Numeric
  */
 export function rationalCompare(a: Rational, b: Rational): -1 | 0 | 1 {
+  checkRational(a, "rationalCompare", "a");
+  checkRational(b, "rationalCompare", "b");
   const l = a.num * b.den;
   const r = b.num * a.den;
   return l < r ? -1 : l > r ? 1 : 0;
@@ -295,6 +339,7 @@ export function rationalCompare(a: Rational, b: Rational): -1 | 0 | 1 {
  * @category Numeric
  */
 export function rationalIsZero(a: Rational): boolean {
+  checkRational(a, "rationalIsZero", "a");
   return a.num === 0n;
 }
 
@@ -309,6 +354,7 @@ export function rationalIsZero(a: Rational): boolean {
  * @category Numeric
  */
 export function rationalToNumber(a: Rational): number {
+  checkRational(a, "rationalToNumber", "a");
   const { num, den } = a;
   if (num === 0n) return 0;
   if (den === 1n) return Number(num);
@@ -327,6 +373,7 @@ export function rationalToNumber(a: Rational): number {
  * @category Numeric
  */
 export function rationalToString(a: Rational): string {
+  checkRational(a, "rationalToString", "a");
   return a.den === 1n ? a.num.toString() : `${a.num}/${a.den}`;
 }
 
@@ -345,6 +392,7 @@ export function rationalToString(a: Rational): string {
  * @category Numeric
  */
 export function scaleToCoprimeIntegers(values: readonly RationalLike[]): bigint[] {
+  requireArray(values, "scaleToCoprimeIntegers", "values");
   const rs = values.map(rationalFrom);
   let l = 1n;
   for (const r of rs) l = lcmBigInt(l, r.den);
@@ -363,6 +411,7 @@ export function scaleToCoprimeIntegers(values: readonly RationalLike[]): bigint[
  * @category Numeric
  */
 export function divideByGcd(values: readonly bigint[]): bigint[] {
+  requireArray(values, "divideByGcd", "values");
   let g = 0n;
   for (const v of values) {
     g = gcdBigInt(g, v);
@@ -376,6 +425,7 @@ export function divideByGcd(values: readonly bigint[]): bigint[] {
 
 const SAFE = 9007199254740991n;
 const MAX_EXPONENT = 10000;
+const INTEGER_RE = /^[+-]?\d+$/;
 const FRACTION_RE = /^([+-]?\d+)\s*\/\s*(\d+)$/;
 const DECIMAL_RE = /^([+-]?)(\d*)(?:\.(\d*))?(?:[eE]([+-]?\d+))?$/;
 
@@ -411,10 +461,35 @@ class ExactRational implements Rational {
   }
 }
 
+/** One part of a rational given as an object: a bigint, a safe-integer number or integer text. */
+function integerPart(v: unknown, name: "num" | "den"): bigint {
+  if (typeof v === "bigint") return v;
+  if (typeof v === "number" && Number.isSafeInteger(v)) return BigInt(v);
+  if (typeof v === "string" && INTEGER_RE.test(v.trim())) return BigInt(v.trim());
+  throw new RxthermError(
+    "INVALID_ARGUMENT",
+    `rationalFrom requires ${name} to be a bigint, a safe integer or integer text, got ${describeValue(v)}`,
+    { [name]: describeValue(v) },
+  );
+}
+
+/** The shared guard of the rational operations: a normalised-shape rational (bigint parts, den > 0). */
+function checkRational(r: Rational, fn: string, path: string): void {
+  if (typeof r !== "object" || r === null || typeof r.num !== "bigint" || typeof r.den !== "bigint" || r.den <= 0n) {
+    throw new RxthermError(
+      "INVALID_ARGUMENT",
+      `${fn} requires ${path} to be a Rational (bigint num, bigint den > 0; build one with rationalFrom), got ${describeValue(r)}`,
+      { path },
+    );
+  }
+}
+
 function toBigIntStrict(v: bigint | number, name: string): bigint {
   if (typeof v === "bigint") return v;
   if (!Number.isSafeInteger(v)) {
-    throw new RxthermError("INVALID_ARGUMENT", `rational requires ${name} to be a safe integer or bigint, got ${v}`, { [name]: v });
+    throw new RxthermError("INVALID_ARGUMENT", `rational requires ${name} to be a safe integer or bigint, got ${describeValue(v)}`, {
+      [name]: typeof v === "number" ? v : describeValue(v),
+    });
   }
   return BigInt(v);
 }

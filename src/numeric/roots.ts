@@ -6,6 +6,7 @@
  * @module
  */
 import { RxthermError } from "../errors.js";
+import { optionsOf, describeValue } from "../guards.js";
 
 /**
  * Options of {@link findRoot}.
@@ -105,11 +106,15 @@ export function findRoot(
   bracket: readonly [number, number],
   options: FindRootOptions = {},
 ): RootResult {
+  options = optionsOf(options, "findRoot");
+  if (typeof f !== "function") {
+    throw new RxthermError("INVALID_ARGUMENT", `findRoot requires f to be a function, got ${describeValue(f)}`, { path: "f" });
+  }
   const opts = resolveOptions(bracket, options);
   const evaluate = (x: number): number => {
     const v = f(x);
     if (typeof v !== "number" || !Number.isFinite(v)) {
-      throw new RxthermError("INVALID_ARGUMENT", `findRoot requires f to return a finite number, got ${String(v)} at x = ${x}`, { x, value: v });
+      throw new RxthermError("INVALID_ARGUMENT", `findRoot requires f to return a finite number, got ${describeValue(v)} at x = ${x}`, { x, value: v });
     }
     return v;
   };
@@ -166,19 +171,19 @@ function resolveOptions(bracket: readonly [number, number], o: FindRootOptions):
   const bad = (msg: string, details: Record<string, unknown>): RxthermError =>
     new RxthermError("INVALID_ARGUMENT", `findRoot requires ${msg}`, details);
   if (!Array.isArray(bracket) || bracket.length !== 2 || !Number.isFinite(bracket[0]) || !Number.isFinite(bracket[1]) || bracket[0] === bracket[1]) {
-    throw bad(`a bracket of two different finite numbers, got ${String(bracket)}`, { bracket });
+    throw bad(`a bracket of two different finite numbers, got ${describeValue(bracket)}`, { bracket });
   }
   const toleranceX = o.toleranceX ?? 1e-10;
   const toleranceF = o.toleranceF ?? 0;
   const maxIterations = o.maxIterations ?? 200;
   const maxExpansions = o.maxExpansions ?? 60;
   const limits = o.limits ?? [-Infinity, Infinity];
-  if (!(toleranceX > 0) || !Number.isFinite(toleranceX)) throw bad(`toleranceX > 0, got ${toleranceX}`, { toleranceX });
-  if (!(toleranceF >= 0) || !Number.isFinite(toleranceF)) throw bad(`toleranceF >= 0, got ${toleranceF}`, { toleranceF });
-  if (!Number.isInteger(maxIterations) || maxIterations < 1) throw bad(`an integer maxIterations >= 1, got ${maxIterations}`, { maxIterations });
-  if (!Number.isInteger(maxExpansions) || maxExpansions < 0) throw bad(`an integer maxExpansions >= 0, got ${maxExpansions}`, { maxExpansions });
-  if (!Array.isArray(limits) || limits.length !== 2 || Number.isNaN(limits[0]) || Number.isNaN(limits[1]) || !(limits[0] < limits[1])) {
-    throw bad(`limits [lower, upper] with lower < upper, got ${String(limits)}`, { limits });
+  if (typeof toleranceX !== "number" || !(toleranceX > 0) || !Number.isFinite(toleranceX)) throw bad(`toleranceX > 0, got ${describeValue(toleranceX)}`, { toleranceX });
+  if (typeof toleranceF !== "number" || !(toleranceF >= 0) || !Number.isFinite(toleranceF)) throw bad(`toleranceF >= 0, got ${describeValue(toleranceF)}`, { toleranceF });
+  if (!Number.isInteger(maxIterations) || maxIterations < 1) throw bad(`an integer maxIterations >= 1, got ${describeValue(maxIterations)}`, { maxIterations });
+  if (!Number.isInteger(maxExpansions) || maxExpansions < 0) throw bad(`an integer maxExpansions >= 0, got ${describeValue(maxExpansions)}`, { maxExpansions });
+  if (!Array.isArray(limits) || limits.length !== 2 || typeof limits[0] !== "number" || typeof limits[1] !== "number" || Number.isNaN(limits[0]) || Number.isNaN(limits[1]) || !(limits[0] < limits[1])) {
+    throw bad(`limits [lower, upper] with lower < upper, got ${describeValue(limits)}`, { limits });
   }
   const a = Math.min(bracket[0], bracket[1]);
   const b = Math.max(bracket[0], bracket[1]);

@@ -20,6 +20,7 @@ import {
 } from "./internal/reactionTerms.js";
 import { parseReaction } from "./parseReaction.js";
 import type { Reaction, Term } from "./types.js";
+import { describeValue, optionsOf, requireArray } from "../guards.js";
 
 /**
  * The species to balance: an equation text (its coefficients are ignored) or the species of
@@ -93,6 +94,7 @@ export interface BalanceReactionOptions {
  * @see IUPAC Green Book, 3rd ed. (2007), §2.10.1 (stoichiometric numbers); G. Strang, Linear Algebra and Its Applications, 4th ed. (2006), §2.2 (null space)
  */
 export function balanceReaction(input: BalanceInput, options: BalanceReactionOptions = {}): Reaction {
+  options = optionsOf(options, "balanceReaction");
   const { entries, signs, nReactants } = readInput(input);
   const n = entries.length;
   const keys = entries.map((e) => e.species);
@@ -210,6 +212,8 @@ function readInput(input: BalanceInput): { entries: SpeciesEntry[]; signs: numbe
     reactants = r.reactants.map(strip);
     products = r.products.map(strip);
   } else if (input !== null && typeof input === "object" && Array.isArray(input.reactants) && Array.isArray(input.products)) {
+    requireArray(input.reactants, "balanceReaction", "input.reactants");
+    requireArray(input.products, "balanceReaction", "input.products");
     reactants = input.reactants.map((s, i) => entryOf(s, "reactants", i));
     products = input.products.map((s, i) => entryOf(s, "products", i));
   } else {
@@ -265,7 +269,7 @@ function readFixed(options: BalanceReactionOptions, keys: readonly string[]): Ma
     if (j < 0) {
       throw new RxthermError("INVALID_ARGUMENT", `balanceReaction: fixed species "${species}" is not in the reaction (${keys.join(", ")})`, {
         species,
-        value: String(value),
+        value: describeValue(value),
       });
     }
     let r: Rational;
@@ -275,9 +279,9 @@ function readFixed(options: BalanceReactionOptions, keys: readonly string[]): Ma
       r = { num: 0n, den: 1n };
     }
     if (r.num <= 0n) {
-      throw new RxthermError("INVALID_ARGUMENT", `balanceReaction requires positive fixed coefficients, got ${String(value)} for "${species}"`, {
+      throw new RxthermError("INVALID_ARGUMENT", `balanceReaction requires positive fixed coefficients, got ${describeValue(value)} for "${species}"`, {
         species,
-        value: String(value),
+        value: describeValue(value),
       });
     }
     out.set(j, r);

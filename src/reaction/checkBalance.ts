@@ -13,6 +13,7 @@ import { BALANCE_CHECK_VIEW } from "./internal/reactionView.js";
 import { attachView } from "../view/attachView.js";
 import { parseReaction } from "./parseReaction.js";
 import type { Reaction, Term } from "./types.js";
+import { checkReactionShape } from "./checkReactionShape.js";
 
 /**
  * Result of {@link checkBalance}: residuals are products − reactants.
@@ -57,6 +58,7 @@ export interface BalanceCheck {
  */
 export function checkBalance(reaction: Reaction | string): BalanceCheck {
   const r = typeof reaction === "string" ? parseReaction(reaction) : reaction;
+  checkReactionShape(r, "checkBalance");
   if (r === null || typeof r !== "object" || !Array.isArray(r.reactants) || !Array.isArray(r.products)) {
     throw new RxthermError("INVALID_ARGUMENT", "checkBalance requires an equation text or a reaction { reactants, products }", {});
   }

@@ -2,6 +2,8 @@ import { RxthermError } from "../errors.js";
 import { termCoefficient } from "./internal/reactionTerms.js";
 import { rationalToNumber, rationalToString } from "../numeric/rational.js";
 import type { Reaction, Term } from "./types.js";
+import { optionsOf } from "../guards.js";
+import { checkReactionShape } from "./checkReactionShape.js";
 
 /**
  * Options of {@link formatReaction}.
@@ -41,9 +43,8 @@ export interface FormatReactionOptions {
  * @see IUPAC Green Book, 3rd ed. (2007), §2.10.1 (writing chemical equations)
  */
 export function formatReaction(reaction: Reaction, options: FormatReactionOptions = {}): string {
-  if (reaction === null || typeof reaction !== "object" || !Array.isArray(reaction.reactants) || !Array.isArray(reaction.products)) {
-    throw new RxthermError("INVALID_ARGUMENT", "formatReaction requires a reaction { reactants, products }", {});
-  }
+  options = optionsOf(options, "formatReaction");
+  checkReactionShape(reaction, "formatReaction");
   const arrow = options.arrow ?? "->";
   const decimal = options.coefficients === "decimal";
   const term = (t: Term): string => {

@@ -2,6 +2,8 @@ import { RxthermError } from "../errors.js";
 import { rationalFrom, rationalMul, type Rational, type RationalLike } from "../numeric/rational.js";
 import { makeReaction, makeTerm, termCoefficient } from "./internal/reactionTerms.js";
 import type { Reaction, Term } from "./types.js";
+import { describeValue } from "../guards.js";
+import { checkReactionShape } from "./checkReactionShape.js";
 
 /**
  * Multiply every coefficient of a reaction by a positive factor, exactly.
@@ -19,6 +21,7 @@ import type { Reaction, Term } from "./types.js";
  * @see IUPAC Green Book, 3rd ed. (2007), §2.10.1 (stoichiometric numbers)
  */
 export function scaleReaction(reaction: Reaction, factor: RationalLike): Reaction {
+  checkReactionShape(reaction, "scaleReaction");
   let k: Rational;
   try {
     k = rationalFrom(factor);
@@ -26,7 +29,7 @@ export function scaleReaction(reaction: Reaction, factor: RationalLike): Reactio
     k = { num: 0n, den: 1n };
   }
   if (k.num <= 0n) {
-    throw new RxthermError("INVALID_ARGUMENT", `scaleReaction requires a positive factor, got ${String(factor)} (use reverseReaction to swap sides)`, {
+    throw new RxthermError("INVALID_ARGUMENT", `scaleReaction requires a positive factor, got ${describeValue(factor)} (use reverseReaction to swap sides)`, {
       factor: String(factor),
     });
   }
@@ -46,6 +49,7 @@ export function scaleReaction(reaction: Reaction, factor: RationalLike): Reactio
  * @see IUPAC Green Book, 3rd ed. (2007), §2.10.1
  */
 export function reverseReaction(reaction: Reaction): Reaction {
+  checkReactionShape(reaction, "reverseReaction");
   const copy = (t: Term) => makeTerm(t, termCoefficient(t));
   return makeReaction(reaction.products.map(copy), reaction.reactants.map(copy));
 }

@@ -1,4 +1,5 @@
 import { RxthermError } from "../errors.js";
+import { describeValue } from "../guards.js";
 
 /**
  * The source registry: id → full citation, for every source id a built-in species value carries.
@@ -49,7 +50,7 @@ export const SOURCES: Readonly<Record<string, string>> = /* @__PURE__ */ Object.
  */
 export function citation(id: string): string {
   if (typeof id === "string" && Object.prototype.hasOwnProperty.call(SOURCES, id)) return SOURCES[id]!;
-  throw new RxthermError("INVALID_ARGUMENT", `citation does not know the source id ${JSON.stringify(id)}`, {
-    id, known: Object.keys(SOURCES),
+  throw new RxthermError("INVALID_ARGUMENT", `citation does not know the source id ${describeValue(id)}`, {
+    id: describeValue(id), known: Object.keys(SOURCES),
   });
 }

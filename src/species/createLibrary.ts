@@ -1,8 +1,9 @@
 import { buildSpecies } from "./internal/speciesObject.js";
 import { mergeLibrary, SpeciesLibrary } from "./internal/speciesLibrary.js";
-import { builtInLibrary } from "./builtInLibrary.js";
+import { libraryOf } from "./species.js";
 import type { Library, Species } from "./types.js";
 import { validateSpeciesData } from "./validateSpeciesData.js";
+import { optionsOf } from "../guards.js";
 
 /**
  * Options of {@link createLibrary}.
@@ -53,12 +54,13 @@ export interface CreateLibraryOptions {
  * @see NIST-JANAF Thermochemical Tables, 4th ed. (Chase 1998), introduction: the standard state and H°(T) − H°(298.15 K)
  */
 export function createLibrary(data: unknown, options: CreateLibraryOptions = {}): Library {
+  options = optionsOf(options, "createLibrary");
   const valid = validateSpeciesData(data);
   const entries: { species: Species; alternative: boolean }[] = valid.species.map((e) => ({
     species: buildSpecies(e),
     alternative: e.alternative === true,
   }));
-  const base = options.base === undefined ? builtInLibrary() : options.base;
+  const base = options.base === null ? null : libraryOf(options.base, "createLibrary", "options.base");
   if (base !== null && !(base instanceof SpeciesLibrary)) {
     // a library from elsewhere: copy its default entries under their own data-set labels
     const copied = mergeLibrary(null, base.all().map((s) => ({ species: s, alternative: false })), {});

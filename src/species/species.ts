@@ -1,3 +1,5 @@
+import { RxthermError } from "../errors.js";
+import { describeValue, optionsOf } from "../guards.js";
 import { builtInLibrary } from "./builtInLibrary.js";
 import type { Library, LibraryGetOptions, Species } from "./types.js";
 
@@ -24,5 +26,29 @@ import type { Library, LibraryGetOptions, Species } from "./types.js";
  * @see M. W. Chase Jr., NIST-JANAF Thermochemical Tables, 4th ed., J. Phys. Chem. Ref. Data Monograph 9 (1998)
  */
 export function species(key: string, library?: Library, options?: LibraryGetOptions): Species {
-  return (library ?? builtInLibrary()).get(key, options);
+  if (typeof key !== "string") {
+    throw new RxthermError("INVALID_ARGUMENT", `species requires a key as text, got ${describeValue(key)}`, { path: "key", value: describeValue(key) });
+  }
+  return libraryOf(library, "species", "library").get(key, optionsOf(options, "species"));
+}
+
+/**
+ * The library a function was given, or the built-in library when none (`undefined`). Anything
+ * that is not a {@link Library} (a number, a Map, the `builtInLibrary` function itself...) is
+ * INVALID_ARGUMENT with `details.path`. Not re-exported: the shared guard of every function
+ * that takes a `library` or `base`.
+ *
+ * @internal
+ */
+export function libraryOf(library: unknown, fn: string, path: string): Library {
+  if (library === undefined) return builtInLibrary();
+  const l = library as Partial<Library> | null;
+  if (typeof l !== "object" || l === null || typeof l.get !== "function" || typeof l.has !== "function" || typeof l.all !== "function") {
+    throw new RxthermError(
+      "INVALID_ARGUMENT",
+      `${fn} requires ${path} to be a Library (from builtInLibrary() or createLibrary), got ${describeValue(library)}`,
+      { path, value: describeValue(library) },
+    );
+  }
+  return l as Library;
 }

@@ -1,9 +1,10 @@
 import { RxthermError } from "../errors.js";
-import { createHeatCapacity } from "../heat-capacity/createHeatCapacity.js";
+import { createHeatCapacity, MAX_CP_RANGES, MAX_CP_TABLE_POINTS } from "../heat-capacity/createHeatCapacity.js";
 import type { CpRange } from "../heat-capacity/types.js";
 import { readSpeciesFormula } from "./internal/speciesFormula.js";
 import { SOURCES } from "./citation.js";
 import { speciesDataSchema, speciesEntrySchema, type SpeciesData, type SpeciesEntry } from "./schema.js";
+import { optionsOf } from "../guards.js";
 
 /**
  * One problem found by {@link validateSpeciesData}: where it is (a path into the data, as zod
@@ -70,6 +71,42 @@ const MAX_DEPTH = 32;
 const UNSAFE_KEYS = new Set(["__proto__", "constructor", "prototype"]);
 
 /**
+ * Most species in one species-data document (the opt-in database holds about 1,300). More is
+ * TOO_LARGE, checked before any schema work so that oversized data fail fast.
+ *
+ * @category Species
+ * @example
+ * MAX_SPECIES_PER_DATA // => 20000
+ */
+export const MAX_SPECIES_PER_DATA = 20_000;
+
+/** TOO_LARGE before the schema runs: species count, ranges per species, points per Cp table. */
+function checkSizes(data: unknown): void {
+  const tooLarge = (path: (string | number)[], limit: number, size: number, what: string): never => {
+    throw new RxthermError("TOO_LARGE", `validateSpeciesData accepts at most ${limit} ${what}, got ${size} at ${path.join(".")}`, {
+      path, limit, size,
+    });
+  };
+  if (typeof data !== "object" || data === null) return;
+  const list = (data as Record<string, unknown>)["species"];
+  if (!Array.isArray(list)) return;
+  if (list.length > MAX_SPECIES_PER_DATA) tooLarge(["species"], MAX_SPECIES_PER_DATA, list.length, "species");
+  list.forEach((e, i) => {
+    const hc = typeof e === "object" && e !== null ? (e as Record<string, unknown>)["heatCapacity"] : undefined;
+    const ranges = typeof hc === "object" && hc !== null ? (hc as Record<string, unknown>)["ranges"] : undefined;
+    if (!Array.isArray(ranges)) return;
+    if (ranges.length > MAX_CP_RANGES) tooLarge(["species", i, "heatCapacity", "ranges"], MAX_CP_RANGES, ranges.length, "Cp ranges per species");
+    ranges.forEach((r, j) => {
+      const cp = typeof r === "object" && r !== null ? (r as Record<string, unknown>)["cp"] : undefined;
+      const ts = typeof cp === "object" && cp !== null ? (cp as Record<string, unknown>)["temperaturesK"] : undefined;
+      if (Array.isArray(ts) && ts.length > MAX_CP_TABLE_POINTS) {
+        tooLarge(["species", i, "heatCapacity", "ranges", j, "cp", "temperaturesK"], MAX_CP_TABLE_POINTS, ts.length, "points per Cp table");
+      }
+    });
+  });
+}
+
+/**
  * Validate a species data file (parsed JSON) and return a clean, typed copy of it.
  *
  * Structure is checked by {@link speciesDataSchema} (zod); on top of it every entry must have:
@@ -96,6 +133,8 @@ const UNSAFE_KEYS = new Set(["__proto__", "constructor", "prototype"]);
  * @see zod 4 issue paths (`path`), which the issue list follows
  */
 export function validateSpeciesData(data: unknown, options: ValidateSpeciesDataOptions = {}): SpeciesData {
+  options = optionsOf(options, "validateSpeciesData");
+  checkSizes(data);
   const issues: SpeciesDataIssue[] = [];
   findUnsafeKeys(data, [], issues, new Set());
   if (issues.length > 0) throw fail(issues);

@@ -38,7 +38,7 @@ describe("checkBalance", () => {
     expect(errorOf(() => checkBalance("H2 + O2")).code).toBe("INVALID_REACTION");
     const e = errorOf(() => checkBalance({ reactants: [{ species: "H2", coefficient: 1 }], products: [] } as never));
     expect(e.code).toBe("INVALID_ARGUMENT");
-    expect(e.details).toEqual({ species: "H2" });
+    expect(e.details).toEqual({ path: "reaction.reactants[0].formula" }); // the shared reaction shape check names the path
   });
   test.prop([arbBalancedReaction, fc.integer({ min: 1, max: 50 }), fc.integer({ min: 1, max: 50 })])(
     "a balanced reaction stays balanced under exact scaling; changing one coefficient breaks it",

@@ -8,6 +8,7 @@ import { RxthermError } from "../../errors.js";
 import type { Library, Species } from "../../species/types.js";
 import type { Stream } from "../../extent/types.js";
 import { resolveSpeciesCached } from "../../enthalpy/resolveInputs.js";
+import { describeValue } from "../../guards.js";
 
 /** One species' inlet and outlet amounts in an energy balance. */
 export interface Entry {
@@ -33,14 +34,14 @@ export function resolveStream(
   }
   const T = s.T;
   if (typeof T !== "number" || !Number.isFinite(T) || T <= 0) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${label}.T to be an absolute temperature above 0 K, got ${String(T)}`, { stream: label, T });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${label}.T to be an absolute temperature above 0 K, got ${describeValue(T)}`, { stream: label, T });
   }
   const species: Species[] = [];
   const flows: number[] = [];
   let total = 0;
   for (const key in s.flows) {
     const n = s.flows[key];
-    if (typeof n !== "number" || !Number.isFinite(n)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires finite flows, got ${String(n)} for ${key} in ${label}`, { stream: label, species: key, flow: n });
+    if (typeof n !== "number" || !Number.isFinite(n)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires finite flows, got ${describeValue(n)} for ${key} in ${label}`, { stream: label, species: key, flow: n });
     if (n < 0) throw new RxthermError("NEGATIVE_FLOW", `${fn} requires non-negative flows, got ${n} for ${key} in ${label}`, { stream: label, species: key, flow: n });
     if (n === 0) continue;
     const sp = resolveSpeciesCached(fn, key, library);

@@ -7,6 +7,7 @@
  * @internal
  */
 import { RxthermError } from "../../errors.js";
+import { describeValue, isDeepFrozen, requireArray, requireRecord } from "../../guards.js";
 import { molarMass } from "../../formula/molarMass.js";
 import { parseFormula } from "../../formula/parseFormula.js";
 import type { Formula } from "../../formula/types.js";
@@ -26,6 +27,7 @@ import {
 } from "../../numeric/rational.js";
 import { type SafeQ, SafeOverflow, sqFromNumber, sqFromRational } from "../../numeric/safeRational.js";
 import type { Flows } from "../types.js";
+import { checkReactionShape } from "../../reaction/checkReactionShape.js";
 
 /** A reaction with exact net coefficients (products +, reactants −), checked for balance. */
 export interface PreparedReaction {
@@ -40,6 +42,10 @@ export interface PreparedReaction {
 }
 
 const FORMULA_CACHE_LIMIT = 2048;
+/** Largest flow magnitude accepted (mol or mol/s); larger values overflow sums of squares and mass flows. */
+export const MAX_FLOW = 1e100;
+/** Most species in one stream or feed. */
+export const MAX_STREAM_SPECIES = 10_000;
 const formulaCache = new Map<string, Formula>();
 const reactionTextCache = new Map<string, PreparedReaction>();
 const reactionObjectCache = new WeakMap<object, PreparedReaction>();
@@ -83,11 +89,18 @@ export function molarMassOf(key: string, fn: string, role: string): number {
  */
 export function validateFlows(flows: Flows, fn: string, role: string, parseKeys = true): void {
   if (flows === null || typeof flows !== "object" || Array.isArray(flows)) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${role} to be an object of species flows`, { role });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${role} to be an object of species flows`, { role, path: role });
   }
-  for (const [key, value] of Object.entries(flows)) {
-    if (typeof value !== "number" || !Number.isFinite(value)) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires finite numeric ${role} flows, got ${String(value)} for ${key}`, {
+  requireRecord(flows, fn, role);
+  const entries = Object.entries(flows);
+  if (entries.length > MAX_STREAM_SPECIES) {
+    throw new RxthermError("TOO_LARGE", `${fn} accepts at most ${MAX_STREAM_SPECIES} species in ${role}, got ${entries.length}`, {
+      role, path: role, limit: MAX_STREAM_SPECIES, size: entries.length,
+    });
+  }
+  for (const [key, value] of entries) {
+    if (typeof value !== "number" || !Number.isFinite(value) || Math.abs(value) > MAX_FLOW) {
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires finite numeric ${role} flows of at most ${MAX_FLOW} in magnitude, got ${describeValue(value)} for ${key}`, {
         role,
         species: key,
         value,
@@ -126,6 +139,12 @@ export function prepareReaction(reaction: Reaction | string, index: number, fn: 
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires each reaction to be an equation text or a Reaction object (reaction ${index})`, {
       reaction: index,
     });
+  }
+  // Cached by identity only when nothing in it can change any more (issue 11): a user-built,
+  // unfrozen reaction is checked and read afresh on every call.
+  if (!isDeepFrozen(reaction)) {
+    checkReactionShape(reaction, fn, `reactions[${index}]`);
+    return prepareObject(reaction, index, fn);
   }
   const hit = reactionObjectCache.get(reaction);
   if (hit !== undefined) return hit;
@@ -272,10 +291,15 @@ export function buildSystem(feed: Flows, reactions: readonly (Reaction | string)
   if (!Array.isArray(reactions) || reactions.length === 0) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires at least one reaction`, { reactions: Array.isArray(reactions) ? 0 : typeof reactions });
   }
+  requireArray(reactions, fn, "reactions");
   const feedKeys = Object.keys(feed);
   const last = lastStructure.get(reactions);
   let st: StoichStructure | undefined;
-  if (last !== undefined && sameItems(last.items, reactions) && sameItems(last.feedKeys, feedKeys)) st = last.structure;
+  // reuse only while every item is text or deeply frozen: an unfrozen reaction may have been edited in place
+  if (
+    last !== undefined && sameItems(last.items, reactions) && sameItems(last.feedKeys, feedKeys) &&
+    reactions.every((r) => typeof r === "string" || isDeepFrozen(r))
+  ) st = last.structure;
   else st = structureFor(feedKeys, reactions, fn);
   const feedF: number[] = new Array<number>(st.species.length).fill(0);
   for (let i = 0; i < st.feedCount; i++) feedF[i] = feed[feedKeys[i] as string] as number;

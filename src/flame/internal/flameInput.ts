@@ -16,6 +16,7 @@ import { flameSpecies } from "./flameLinks.js";
 import type { AdiabaticFlameInput, AdiabaticFlameOptions, AdiabaticFlameResult } from "../types.js";
 import type { Flows } from "../../extent/types.js";
 import { FLAME_PROTOTYPE } from "./flameView.js";
+import { describeValue } from "../../guards.js";
 
 /** Resolve and check the solver settings. */
 export function resolveLimits(
@@ -26,13 +27,13 @@ export function resolveLimits(
   const elementTolerance = options.elementTolerance ?? 1e-12;
   const toleranceK = options.toleranceK ?? 1e-6;
   if (!Number.isInteger(maxIterations) || maxIterations < 1) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires maxIterations to be a positive integer, got ${String(maxIterations)}`, { maxIterations });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires maxIterations to be a positive integer, got ${describeValue(maxIterations)}`, { maxIterations });
   }
   if (!(elementTolerance > 0) || !Number.isFinite(elementTolerance)) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires elementTolerance > 0, got ${String(elementTolerance)}`, { elementTolerance });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires elementTolerance > 0, got ${describeValue(elementTolerance)}`, { elementTolerance });
   }
   if (!(toleranceK > 0) || !Number.isFinite(toleranceK)) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires toleranceK > 0, got ${String(toleranceK)}`, { toleranceK });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires toleranceK > 0, got ${describeValue(toleranceK)}`, { toleranceK });
   }
   return { maxIterations, elementTolerance, toleranceK, extrapolate: options.extrapolate === true };
 }
@@ -45,11 +46,11 @@ export function prepareFlameInput(fn: string, input: AdiabaticFlameInput, option
   const lim = resolveLimits(fn, options);
   const mode = input.mode ?? "equilibrium";
   if (mode !== "complete" && mode !== "equilibrium") {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires mode "complete" or "equilibrium", got ${String(mode)}`, { mode });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires mode "complete" or "equilibrium", got ${describeValue(mode)}`, { mode });
   }
   const process = input.process ?? "constant-pressure";
   if (process !== "constant-pressure" && process !== "constant-volume") {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires process "constant-pressure" or "constant-volume", got ${String(process)}`, { process });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires process "constant-pressure" or "constant-volume", got ${describeValue(process)}`, { process });
   }
   const point = flamePointOf(fn, input);
   const products = input.products ?? defaultProducts(fn, input);
@@ -130,20 +131,20 @@ export function equivalenceRatioOf(fn: string, equivalenceRatio: number | undefi
   checkMixtureLimits(fn, { excessAir, equivalenceRatio }, allowExtremeMixture);
   if (excessAir !== undefined) {
     if (typeof excessAir !== "number" || !Number.isFinite(excessAir) || !(excessAir > -1)) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires excessAir > −1 (a fraction: 0.2 = 20 % excess), got ${String(excessAir)}`, { excessAir });
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires excessAir > −1 (a fraction: 0.2 = 20 % excess), got ${describeValue(excessAir)}`, { excessAir });
     }
     return 1 / (1 + excessAir);
   }
   const phi = equivalenceRatio ?? 1;
   if (typeof phi !== "number" || !Number.isFinite(phi) || !(phi > 0)) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires equivalenceRatio > 0, got ${String(phi)}`, { equivalenceRatio: phi });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires equivalenceRatio > 0, got ${describeValue(phi)}`, { equivalenceRatio: phi });
   }
   return phi;
 }
 
 function positive(fn: string, name: string, v: number): number {
   if (typeof v !== "number" || !Number.isFinite(v) || !(v > 0)) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${name} > 0, got ${String(v)}`, { [name]: v });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${name} > 0, got ${describeValue(v)}`, { [name]: v });
   }
   return v;
 }

@@ -24,6 +24,7 @@ import {
   type Engine,
   type EngineLimits,
 } from "./equilibriumEngine.js";
+import { describeValue } from "../../guards.js";
 
 const R = GAS_CONSTANT_J_PER_MOL_K;
 
@@ -107,7 +108,7 @@ export function resolveMembers(fn: string, what: string, flows: string | Flows, 
   const out: Member[] = [];
   for (const [key, n] of Object.entries(flows)) {
     if (typeof n !== "number" || !Number.isFinite(n) || n < 0) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires every ${what} amount to be a finite number ≥ 0, got ${String(n)} for ${key}`, { species: key, amount: n });
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires every ${what} amount to be a finite number ≥ 0, got ${describeValue(n)} for ${key}`, { species: key, amount: n });
     }
     if (n > 0) out.push({ key, species: flameSpecies(fn, key, library), n });
   }

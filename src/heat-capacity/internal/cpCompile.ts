@@ -5,6 +5,7 @@
  *
  * Never re-exported from src/index.ts.
  */
+import { describeValue, requireArray } from "../../guards.js";
 import { RxthermError } from "../../errors.js";
 import { GAS_CONSTANT_J_PER_MOL_K } from "../../units.js";
 import type { CpForm, CpRange } from "../types.js";
@@ -47,9 +48,27 @@ export function invalidData(fn: string, label: string | undefined, path: (string
 
 function short(v: unknown): string {
   if (Array.isArray(v)) return `[${v.length} items]`;
-  if (typeof v === "object" && v !== null) return "an object";
-  return String(v);
+  return describeValue(v);
 }
+
+/**
+ * Most points in one tabulated Cp range (`temperaturesK`, `cpJPerMolK`). Building the exact
+ * H and S integrals of a table costs about 12 µs per point; a larger table is TOO_LARGE.
+ *
+ * @category Heat capacity
+ * @example
+ * MAX_CP_TABLE_POINTS // => 10000
+ */
+export const MAX_CP_TABLE_POINTS = 10_000;
+
+/**
+ * Most Cp ranges in one heat-capacity model (one species). More is TOO_LARGE.
+ *
+ * @category Heat capacity
+ * @example
+ * MAX_CP_RANGES // => 1000
+ */
+export const MAX_CP_RANGES = 1000;
 
 function isFiniteNumber(v: unknown): v is number {
   return typeof v === "number" && Number.isFinite(v);
@@ -103,6 +122,11 @@ export function validateForm(fn: string, label: string | undefined, form: CpForm
       const ts = f["temperaturesK"];
       const cs = f["cpJPerMolK"];
       if (!Array.isArray(ts) || ts.length < 2) invalidData(fn, label, [...path, "temperaturesK"], "at least two temperatures are required", ts);
+      if (ts.length > MAX_CP_TABLE_POINTS) {
+        throw new RxthermError("TOO_LARGE", `${fn}${label ? ` (${label})` : ""}: a Cp table holds at most ${MAX_CP_TABLE_POINTS} points, got ${ts.length}`, {
+          label, path: [...path, "temperaturesK"], limit: MAX_CP_TABLE_POINTS, size: ts.length,
+        });
+      }
       if (!Array.isArray(cs) || cs.length !== (ts as unknown[]).length) {
         invalidData(fn, label, [...path, "cpJPerMolK"], "one Cp per tabulated temperature is required", cs);
       }
@@ -254,6 +278,12 @@ export function copyForm(form: CpForm): CpForm {
 /** Validate ranges (each form, contiguity) and return sorted frozen copies. */
 export function prepareRanges(fn: string, label: string | undefined, ranges: readonly CpRange[], tolK: number): CpRange[] {
   if (!Array.isArray(ranges) || ranges.length === 0) invalidData(fn, label, ["ranges"], "at least one Cp range is required", ranges);
+  if (ranges.length > MAX_CP_RANGES) {
+    throw new RxthermError("TOO_LARGE", `${fn}${label ? ` (${label})` : ""}: a heat-capacity model holds at most ${MAX_CP_RANGES} ranges, got ${ranges.length}`, {
+      label, path: ["ranges"], limit: MAX_CP_RANGES, size: ranges.length,
+    });
+  }
+  requireArray(ranges, fn, "ranges");
   const prepared: PreparedRange[] = [];
   ranges.forEach((r, i) => {
     if (typeof r !== "object" || r === null) invalidData(fn, label, ["ranges", i], "a range object is required", r);

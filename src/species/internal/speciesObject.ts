@@ -29,6 +29,8 @@ const NO_TRANSITIONS: readonly SpeciesTransition[] = /* @__PURE__ */ Object.free
 const NO_STEPS = /* @__PURE__ */ new Float64Array(0);
 /** Data whose lowest range starts by this temperature (the NASA 300 K convention) are read down to 298.15 K. */
 const NASA_LOW_K = 300;
+import { deepFreeze, describeValue } from "../../guards.js";
+const LN_STANDARD_PRESSURE = /* @__PURE__ */ Math.log(STANDARD_PRESSURE_PA);
 
 /**
  * Everything a species is made of, already checked (by the schema and the validator, or by the
@@ -135,7 +137,7 @@ class TabulatedSpecies implements Species {
     // with the lowest range's form, so that the reference state itself is inside the range. Data
     // that start higher (a liquid above its melting point) keep their range: 298.15 K is then an
     // extrapolation of the lowest form, used only as the reference of the integrals.
-    const ranges = [...p.ranges];
+    const ranges: CpRange[] = p.ranges.map((r) => Object.freeze({ TminK: r.TminK, TmaxK: r.TmaxK, cp: deepFreeze(structuredClone(r.cp)) }));
     const lowest = ranges[0]!;
     if (lowest.TminK > STANDARD_TEMPERATURE_K && lowest.TminK <= NASA_LOW_K) {
       ranges[0] = Object.freeze({ ...lowest, TminK: STANDARD_TEMPERATURE_K });
@@ -280,9 +282,10 @@ class TabulatedSpecies implements Species {
   #pressureTerm(fn: string, P: number | undefined): number {
     if (P === undefined) return 0;
     if (typeof P !== "number" || !Number.isFinite(P) || P <= 0) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} (${this.key}) requires a finite pressure > 0 Pa, got ${String(P)}`, { species: this.key, P });
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} (${this.key}) requires a finite pressure > 0 Pa, got ${describeValue(P)}`, { species: this.key, P });
     }
-    return this.#gas ? GAS_CONSTANT_J_PER_MOL_K * Math.log(P / STANDARD_PRESSURE_PA) : 0;
+    // ln P − ln P° rather than ln(P/P°): the quotient underflows to 0 for P near 5e-324 Pa
+    return this.#gas ? GAS_CONSTANT_J_PER_MOL_K * (Math.log(P) - LN_STANDARD_PRESSURE) : 0;
   }
 
   /** Check the arrays (the model checks every temperature before it writes anything); return the output array. */
@@ -314,7 +317,7 @@ class TabulatedSpecies implements Species {
   /** Validate T; true when outside the range and extrapolation is allowed; otherwise throws. */
   #check(fn: string, T: number, options: RangeOptions | undefined, index?: number): boolean {
     if (typeof T !== "number" || !Number.isFinite(T) || T <= 0) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} (${this.key}) requires a finite temperature > 0 K, got ${String(T)}`,
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} (${this.key}) requires a finite temperature > 0 K, got ${describeValue(T)}`,
         index === undefined ? { species: this.key, T } : { species: this.key, T, index });
     }
     if (T >= this.#tMin && T <= this.#tMax) return false;
