@@ -4,7 +4,7 @@ import {
   CELSIUS_SLIP_BELOW_K, celsiusSlipHint, slipHintDetails, withSlipHint,
 } from "../src/units.js";
 import { caught } from "./_helpers/caught.js";
-import { fc, test as fcTest } from "@fast-check/vitest";
+import { fc, test as fcTest } from "./_helpers/property.js";
 import { isRxthermError } from "../src/errors.js";
 
 // Conversion factors: NIST SP 811 (2008) Appendix B; 0 °C = 273.15 K by definition of the Celsius scale.

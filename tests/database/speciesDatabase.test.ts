@@ -1,6 +1,6 @@
 import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
-import { test, fc } from "@fast-check/vitest";
+import { test, fc } from "../_helpers/property.js";
 import { speciesDatabase } from "../../src/database/index.js";
 import { counterparts } from "../../src/database/internal/counterparts.js";
 import { builtInLibrary } from "../../src/species/builtInLibrary.js";

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { fc, test } from "@fast-check/vitest";
+import { fc, test } from "../_helpers/property.js";
 import { availableHeat } from "../../src/energy/availableHeat.js";
 import { species } from "../../src/species/species.js";
 import { caught } from "../_helpers/caught.js";

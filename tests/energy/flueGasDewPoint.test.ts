@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { fc, test } from "@fast-check/vitest";
+import { fc, test } from "../_helpers/property.js";
 import { DEFAULT_SO3_FRACTION, flueGasDewPoint } from "../../src/energy/flueGasDewPoint.js";
 import { waterSaturationPressure } from "../../src/extent/waterSaturationPressure.js";
 import { caught } from "../_helpers/caught.js";

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { RxthermError } from "../../src/errors.js";
-import { fc, test } from "@fast-check/vitest";
+import { fc, test } from "../_helpers/property.js";
 import { waterSaturationPressure, waterSaturationTemperature } from "../../src/extent/waterSaturationPressure.js";
 import { caught } from "../_helpers/caught.js";
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { test, fc } from "@fast-check/vitest";
+import { test, fc } from "../_helpers/property.js";
 import { findSpecies } from "../../src/species/findSpecies.js";
 import { builtInLibrary } from "../../src/species/builtInLibrary.js";
 import { createLibrary } from "../../src/species/createLibrary.js";

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { fc, test } from "@fast-check/vitest";
+import { fc, test } from "../_helpers/property.js";
 import { columnHeader, formatCell, viewMimeBundle, viewToHtml, viewToMarkdown, viewToText } from "../../src/view/renderView.js";
 import type { ResultView } from "../../src/view/types.js";
 
