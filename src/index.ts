@@ -170,7 +170,7 @@ export { toText } from "./display/toText.js";
 export { toMarkdown } from "./display/toMarkdown.js";
 export { toHtml } from "./display/toHtml.js";
 export type { Displayable, ChartSpec, ChartChannel, SpeciesChartOptions } from "./display/types.js";
-export { cpChart } from "./display/cpChart.js";
+export { cpChart, MAX_CHART_POINTS, MAX_CHART_SERIES } from "./display/cpChart.js";
 export type { CpChartOptions } from "./display/cpChart.js";
 export { enthalpyChart } from "./display/enthalpyChart.js";
 export type { EnthalpyChartOptions } from "./display/enthalpyChart.js";

@@ -17,7 +17,7 @@
  * @module
  */
 import { RxthermError } from "./errors.js";
-import { describeValue, finiteResult } from "./guards.js";
+import { describeValue, finiteResult, optionsOf } from "./guards.js";
 
 /** Temperature units accepted by {@link toKelvin} and {@link fromKelvin}. @category Units */
 export type TemperatureUnit = "K" | "C" | "F" | "R";
@@ -214,13 +214,13 @@ export function fromJoule(joule: number, unit: EnergyUnit): number {
  * @param value - power in `unit`
  * @param unit - `"W" | "kW" | "MW" | "kcal/h" | "Btu/h" | "MMBtu/h"` (thermochemical kcal, IT Btu)
  * @returns power in W
- * @throws RxthermError `INVALID_ARGUMENT` for a non-finite value or an unknown unit
+ * @throws RxthermError `INVALID_ARGUMENT` for a non-finite value, an unknown unit, or a result beyond float64 (±1e308 MMBtu/h)
  * @category Units
  * @example
  * toWatt(1, "MMBtu/h") // => 293071.0701722222 (W)
  */
 export function toWatt(value: number, unit: PowerUnit): number {
-  return value * factorOf(POWER_W, unit, value, "toWatt");
+  return finiteResult(value * factorOf(POWER_W, unit, value, "toWatt"), "toWatt");
 }
 
 /**
@@ -264,7 +264,7 @@ export interface MolarMassOption {
  * @param flow - `{ value, unit, molarMassGPerMol? }`
  * @returns flow in mol/s
  * @throws RxthermError `INVALID_ARGUMENT` for a non-finite value, an unknown unit, or a mass unit without a
- *   positive finite molar mass
+ *   positive finite molar mass, or a result beyond float64 (a molar mass near 5e-324 g/mol, a value near 1e308)
  * @category Units
  * @example
  * toMolPerSecond({ value: 36, unit: "kmol/h" })                          // => 10 (mol/s)
@@ -275,7 +275,8 @@ export function toMolPerSecond(flow: FlowQuantity): number {
     throw new RxthermError("INVALID_ARGUMENT", "toMolPerSecond requires an object { value, unit }", { flow });
   }
   const entry = factorOf(FLOW, flow.unit, flow.value, "toMolPerSecond");
-  return flow.value * entry[0] / basisDivisor("toMolPerSecond", entry[1], flow.unit, flow.molarMassGPerMol);
+  const divisor = basisDivisor("toMolPerSecond", entry[1], flow.unit, flow.molarMassGPerMol, "flow.molarMassGPerMol");
+  return finiteResult((flow.value * entry[0]) / divisor, "toMolPerSecond");
 }
 
 /**
@@ -286,15 +287,18 @@ export function toMolPerSecond(flow: FlowQuantity): number {
  * @param options - `molarMassGPerMol` for mass-flow units
  * @returns flow in `unit`
  * @throws RxthermError `INVALID_ARGUMENT` for a non-finite value, an unknown unit, or a mass unit without a
- *   positive finite molar mass
+ *   positive finite molar mass, or a result beyond float64 (a molar mass near 5e-324 g/mol, a value near 1e308);
+ *   a non-object `options` (details `path`)
  * @category Units
  * @example
  * fromMolPerSecond(10, "kmol/h") // => 36
  * fromMolPerSecond(1, "Nm3/h")   // => 80.6903 (Nm³/h of ideal gas; rounded)
  */
-export function fromMolPerSecond(molPerSecond: number, unit: FlowUnit, options: MolarMassOption = {}): number {
+export function fromMolPerSecond(molPerSecond: number, unit: FlowUnit, options?: MolarMassOption): number {
   const entry = factorOf(FLOW, unit, molPerSecond, "fromMolPerSecond");
-  return roundOff(molPerSecond * basisDivisor("fromMolPerSecond", entry[1], unit, options.molarMassGPerMol) / entry[0]);
+  const { molarMassGPerMol } = optionsOf(options, "fromMolPerSecond");
+  const divisor = basisDivisor("fromMolPerSecond", entry[1], unit, molarMassGPerMol, "options.molarMassGPerMol");
+  return finiteResult(roundOff((molPerSecond * divisor) / entry[0]), "fromMolPerSecond");
 }
 
 /**
@@ -309,15 +313,18 @@ export function fromMolPerSecond(molPerSecond: number, unit: FlowUnit, options: 
  * @param options - `molarMassGPerMol` for per-mass units
  * @returns the energy in `unit`
  * @throws RxthermError `INVALID_ARGUMENT` for a non-finite value, an unknown unit, or a per-mass unit without a
- *   positive finite molar mass
+ *   positive finite molar mass, or a result beyond float64 (a molar mass near 5e-324 g/mol, a value near 1e308);
+ *   a non-object `options` (details `path`)
  * @category Units
  * @example
  * fromJoulePerMol(-890310.1, "kJ/mol")                              // => -890.3101
  * fromJoulePerMol(890310.1, "MJ/kg", { molarMassGPerMol: 16.0425 }) // => 55.497 (methane HHV; rounded)
  */
-export function fromJoulePerMol(joulePerMol: number, unit: SpecificEnergyUnit, options: MolarMassOption = {}): number {
+export function fromJoulePerMol(joulePerMol: number, unit: SpecificEnergyUnit, options?: MolarMassOption): number {
   const entry = factorOf(SPECIFIC, unit, joulePerMol, "fromJoulePerMol");
-  return roundOff(joulePerMol / basisDivisor("fromJoulePerMol", entry[1], unit, options.molarMassGPerMol) / entry[0]);
+  const { molarMassGPerMol } = optionsOf(options, "fromJoulePerMol");
+  const divisor = basisDivisor("fromJoulePerMol", entry[1], unit, molarMassGPerMol, "options.molarMassGPerMol");
+  return finiteResult(roundOff(joulePerMol / divisor / entry[0]), "fromJoulePerMol");
 }
 
 /** Check the value, then the unit's entry in a factor table (own keys only: "toString" is no unit). */
@@ -335,13 +342,21 @@ function badUnit(fn: string, unit: unknown): RxthermError {
   return new RxthermError("INVALID_ARGUMENT", `${fn} does not know the unit ${describeValue(unit)}`, { unit });
 }
 /** What one mol is worth in the unit's basis: 1 (amount), M in g (mass), Vm in m³ (volume). */
-function basisDivisor(fn: string, basis: "amount" | "mass" | "volume", unit: string, molarMassGPerMol: number | undefined): number {
+function basisDivisor(
+  fn: string,
+  basis: "amount" | "mass" | "volume",
+  unit: string,
+  molarMassGPerMol: number | undefined,
+  path: string,
+): number {
   if (basis === "amount") return 1;
   if (basis === "volume") return NORMAL_M3_PER_MOL;
   if (typeof molarMassGPerMol !== "number" || !Number.isFinite(molarMassGPerMol) || molarMassGPerMol <= 0) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a positive molarMassGPerMol for the mass unit ${unit}`, {
-      unit, molarMassGPerMol,
-    });
+    throw new RxthermError(
+      "INVALID_ARGUMENT",
+      `${fn} requires a positive molarMassGPerMol for the mass unit ${unit} (finite, g/mol), got ${describeValue(molarMassGPerMol)}`,
+      { path, unit, molarMassGPerMol: describeValue(molarMassGPerMol) },
+    );
   }
   return molarMassGPerMol;
 }

@@ -188,4 +188,31 @@ describe("celsiusSlipHint", () => {
       expect(e.details.hint).toBe("was °C meant? 25 °C is 298.15 K");
     }
   });
+
+  it("results beyond float64 and tiny molar masses are INVALID_ARGUMENT, not ±Infinity", () => {
+    // hostile-input findings: 1e308 W-multiples and 5e-324 g/mol divisors overflow float64
+    for (const f of [
+      () => toWatt(1e308, "MMBtu/h"),
+      () => toWatt(-1e308, "kW"),
+      () => fromMolPerSecond(1e308, "Nm3/h"),
+      () => fromMolPerSecond(1, "kg/h", { molarMassGPerMol: 1e308 }),
+      () => toMolPerSecond({ value: 1, unit: "kg/h", molarMassGPerMol: 5e-324 }),
+      () => fromJoulePerMol(1, "kJ/kg", { molarMassGPerMol: 5e-324 }),
+    ]) {
+      const e = caught(f);
+      expect(e.code).toBe("INVALID_ARGUMENT");
+      expect(e.message).toMatch(/cannot represent its result/);
+    }
+    const m = caught(() => fromJoulePerMol(1, "kJ/kg", { molarMassGPerMol: Number.POSITIVE_INFINITY }));
+    expect(m.details.path).toBe("options.molarMassGPerMol");
+    expect(caught(() => toMolPerSecond({ value: 1, unit: "kg/h", molarMassGPerMol: Number.NaN })).details.path).toBe("flow.molarMassGPerMol");
+  });
+  it("options of fromMolPerSecond and fromJoulePerMol must be an object when given", () => {
+    for (const f of [() => fromMolPerSecond(1, "kg/h", null as never), () => fromJoulePerMol(1, "kJ/mol", 5 as never)]) {
+      const e = caught(f);
+      expect(e.code).toBe("INVALID_ARGUMENT");
+      expect(e.details.path).toBe("options");
+    }
+    expect(fromMolPerSecond(10, "kmol/h", undefined)).toBe(36);
+  });
 });

@@ -1,7 +1,8 @@
 import { RxthermError } from "../errors.js";
+import { describeValue, optionsOf, requireArray, requireRecord } from "../guards.js";
 import type { FlameSweepResult } from "../flame/flameTemperatureSweep.js";
 import { makeChart } from "./internal/makeChart.js";
-import { sweepAxis } from "./internal/sweepAxis.js";
+import { sweepAxis, sweepNumbers } from "./internal/sweepAxis.js";
 import type { ChartSpec } from "./types.js";
 
 /**
@@ -29,33 +30,54 @@ export interface CompositionChartOptions {
  * @param sweep - the result of `flameTemperatureSweep`
  * @param options - which species, threshold, log scale
  * @returns the Vega-Lite specification (with display methods)
- * @throws RxthermError `INVALID_ARGUMENT` when `sweep` is not a flame sweep result, a requested species is not among
- *   its products, or `minFraction` is not a number in [0, 1)
+ * @throws RxthermError `INVALID_ARGUMENT` when `sweep` is not a flame sweep result (unknown parameter; `values`, `T`
+ *   or a `products` entry not an array of finite numbers of one non-zero length), `options` is not an object,
+ *   `species` is not a non-empty array of product keys, or `minFraction` is not a number in [0, 1);
+ *   `TOO_LARGE` past 100 000 points or species
  * @category Display
  * @example
  * const sweep = flameTemperatureSweep({ fuel: "CH4(g)", mode: "complete" }, { parameter: "equivalenceRatio", values: [0.8, 1] });
  * compositionChart(sweep, { species: ["CO2(g)", "H2O(g)"] }).data.values.length // => 4
  * @see Vega-Lite specification, version 5 (https://vega.github.io/vega-lite/)
  */
-export function compositionChart(sweep: FlameSweepResult, options: CompositionChartOptions = {}): ChartSpec {
+export function compositionChart(sweep: FlameSweepResult, options?: CompositionChartOptions): ChartSpec {
   const fn = "compositionChart";
   const axis = sweepAxis(fn, sweep);
-  const min = options.minFraction ?? 1e-3;
+  const o = optionsOf(options, fn);
+  const min = o.minFraction ?? 1e-3;
   if (typeof min !== "number" || !(min >= 0 && min < 1)) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires minFraction in [0, 1), got ${String(min)}`, { minFraction: min });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires minFraction in [0, 1), got ${describeValue(min)}`, {
+      path: "options.minFraction",
+      value: describeValue(min),
+    });
   }
-  const all = Object.keys(sweep.products);
-  const chosen = options.species ?? all.filter((k) => (sweep.products[k] ?? []).some((y) => y >= min));
-  for (const k of chosen) {
-    if (!all.includes(k)) throw new RxthermError("INVALID_ARGUMENT", `${fn}: ${k} is not among the sweep's products (${all.join(", ")})`, { species: k });
+  const productsIn = requireRecord(sweep.products, fn, "sweep.products");
+  const products = new Map<string, readonly number[]>();
+  for (const k of Object.keys(productsIn)) products.set(k, sweepNumbers(fn, productsIn[k], `sweep.products.${k}`, axis.x.length));
+  let chosen: readonly string[];
+  if (o.species === undefined) {
+    chosen = [...products.keys()].filter((k) => (products.get(k) as readonly number[]).some((y) => y >= min));
+  } else {
+    const asked = requireArray(o.species, fn, "options.species");
+    if (asked.length === 0) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires at least one species in options.species`, { path: "options.species" });
+    asked.forEach((k, i) => {
+      if (typeof k !== "string" || !products.has(k)) {
+        const known = [...products.keys()].join(", ");
+        throw new RxthermError("INVALID_ARGUMENT", `${fn}: ${describeValue(k)} is not among the sweep's products (${known.length > 200 ? `${known.slice(0, 200)}…` : known})`, {
+          path: `options.species[${i}]`,
+          species: describeValue(k),
+        });
+      }
+    });
+    chosen = asked as readonly string[];
   }
-  const values = chosen.flatMap((k) => (sweep.products[k] ?? []).map((y, i) => ({ species: k, x: axis.x(i), y })));
+  const values = chosen.flatMap((k) => (products.get(k) as readonly number[]).map((y, i) => ({ species: k, x: axis.x[i] as number, y })));
   return makeChart({
     title: "product composition",
     values,
     mark: { type: "line", point: true },
     x: { field: "x", type: "quantitative", title: axis.title },
-    y: { field: "y", type: "quantitative", title: "mole fraction (mol/mol)", ...(options.logScale === true ? { scale: { type: "log" } } : {}) },
+    y: { field: "y", type: "quantitative", title: "mole fraction (mol/mol)", ...(o.logScale === true ? { scale: { type: "log" } } : {}) },
     color: { field: "species", type: "nominal", title: "species" },
   });
 }

@@ -1,6 +1,9 @@
+import { optionsOf } from "../guards.js";
 import type { Library, Species } from "../species/types.js";
 import { speciesChart } from "./internal/speciesChart.js";
 import type { ChartSpec, SpeciesChartOptions } from "./types.js";
+
+export { MAX_CHART_POINTS, MAX_CHART_SERIES } from "./internal/makeChart.js";
 
 /**
  * Options of {@link cpChart} and {@link enthalpyChart}: the temperature window and sampling, plus the library
@@ -25,7 +28,8 @@ export interface CpChartOptions extends SpeciesChartOptions {
  * @param options - temperature window (K), points per species, chart size, library
  * @returns the Vega-Lite specification (with display methods)
  * @throws RxthermError `UNKNOWN_SPECIES` / `AMBIGUOUS_PHASE` from the lookup, `OUT_OF_RANGE` when a species has no
- *   data inside the window, `INVALID_ARGUMENT` for an empty list or a bad window, point count or size
+ *   data inside the window, `INVALID_ARGUMENT` for an empty list, an entry that is neither a key nor a species, or a
+ *   bad window, point count or size; `TOO_LARGE` above `MAX_CHART_POINTS` points or `MAX_CHART_SERIES` species
  * @category Display
  * @example
  * const chart = cpChart(["N2(g)", "CO2(g)"], { TminK: 300, TmaxK: 1500, points: 25 });
@@ -33,10 +37,11 @@ export interface CpChartOptions extends SpeciesChartOptions {
  * chart.encoding.y.title    // => "Cp° (J/(mol·K))"
  * @see Vega-Lite specification, version 5 (https://vega.github.io/vega-lite/)
  */
-export function cpChart(input: string | Species | readonly (string | Species)[], options: CpChartOptions = {}): ChartSpec {
+export function cpChart(input: string | Species | readonly (string | Species)[], options?: CpChartOptions): ChartSpec {
+  const o = optionsOf(options, "cpChart");
   return speciesChart("cpChart", input, {
     title: "heat capacity Cp°(T)",
     axis: "Cp° (J/(mol·K))",
     at: (s, T) => s.cp(T),
-  }, options, options.library);
+  }, o, o.library);
 }

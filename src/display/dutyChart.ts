@@ -1,4 +1,5 @@
 import { RxthermError } from "../errors.js";
+import { describeValue } from "../guards.js";
 import type { HeatDutyResult } from "../energy/heatDuty.js";
 import { makeChart } from "./internal/makeChart.js";
 import type { ChartSpec } from "./types.js";
@@ -11,7 +12,7 @@ import type { ChartSpec } from "./types.js";
  *
  * @param duty - the result of `heatDuty`
  * @returns the Vega-Lite specification (with display methods)
- * @throws RxthermError `INVALID_ARGUMENT` when `duty` is not a heat duty result
+ * @throws RxthermError `INVALID_ARGUMENT` when `duty` is not a heat duty result (its parts finite numbers)
  * @category Display
  * @example
  * const q = heatDuty({ inlet: { T: 298.15, flows: { "N2(g)": 1 } }, outlet: { T: 500, flows: { "N2(g)": 1 } } });
@@ -19,8 +20,17 @@ import type { ChartSpec } from "./types.js";
  * @see Vega-Lite specification, version 5 (https://vega.github.io/vega-lite/)
  */
 export function dutyChart(duty: HeatDutyResult): ChartSpec {
-  if (duty === null || typeof duty !== "object" || typeof duty.reaction !== "number" || typeof duty.sensibleIn !== "number") {
-    throw new RxthermError("INVALID_ARGUMENT", "dutyChart requires a heatDuty result", {});
+  if (duty === null || typeof duty !== "object" || Array.isArray(duty)) {
+    throw new RxthermError("INVALID_ARGUMENT", `dutyChart requires a heatDuty result, got ${describeValue(duty)}`, { path: "duty", value: describeValue(duty) });
+  }
+  for (const field of DUTY_FIELDS) {
+    const v: unknown = duty[field];
+    if (typeof v !== "number" || !Number.isFinite(v)) {
+      throw new RxthermError("INVALID_ARGUMENT", `dutyChart requires a heatDuty result with a finite ${field}, got ${describeValue(v)}`, {
+        path: `duty.${field}`,
+        value: describeValue(v),
+      });
+    }
   }
   const parts: [string, number, string][] = [
     ["sensible in", -duty.sensibleIn, "part"],
@@ -39,3 +49,6 @@ export function dutyChart(duty: HeatDutyResult): ChartSpec {
     color: { field: "kind", type: "nominal", title: "bar" },
   });
 }
+
+/** The numbers of a heat duty result that the chart draws. */
+const DUTY_FIELDS = ["sensibleIn", "reactionHeat", "latentHeat", "sensibleOut", "pvTerm", "reaction"] as const;

@@ -14,7 +14,8 @@ import type { ChartSpec } from "./types.js";
  *
  * @param sweep - the result of `flameTemperatureSweep`
  * @returns the Vega-Lite specification (with display methods)
- * @throws RxthermError `INVALID_ARGUMENT` when `sweep` is not a flame sweep result
+ * @throws RxthermError `INVALID_ARGUMENT` when `sweep` is not a flame sweep result (unknown parameter; `values` and `T`
+ *   not arrays of finite numbers of one non-zero length); `TOO_LARGE` past 100 000 points
  * @category Display
  * @example
  * const sweep = flameTemperatureSweep({ fuel: "CH4(g)", mode: "complete" }, { parameter: "equivalenceRatio", values: [0.8, 1] });
@@ -25,7 +26,7 @@ export function flameChart(sweep: FlameSweepResult): ChartSpec {
   const axis = sweepAxis("flameChart", sweep);
   return makeChart({
     title: "adiabatic flame temperature",
-    values: sweep.T.map((T, i) => ({ x: axis.x(i), T })),
+    values: sweep.T.map((T, i) => ({ x: axis.x[i] as number, T })),
     mark: { type: "line", point: true },
     x: { field: "x", type: "quantitative", title: axis.title },
     y: { field: "T", type: "quantitative", title: "adiabatic flame temperature (K)", scale: { zero: false } },

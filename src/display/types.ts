@@ -76,7 +76,7 @@ export interface SpeciesChartOptions {
   TminK?: number;
   /** Highest temperature, K. @defaultValue 2000 */
   TmaxK?: number;
-  /** Points per species. @defaultValue 60 */
+  /** Points per species, an integer from 2 to `MAX_CHART_POINTS` (10 000). @defaultValue 60 */
   points?: number;
   /** Chart width and height in pixels. @defaultValue 480 × 300 */
   width?: number;

@@ -1,4 +1,5 @@
 import type { Flows } from "../extent/types.js";
+import { finiteResult } from "../guards.js";
 import { evaluateFired, excessAirOf, flueTemperature, prepareFired } from "./internal/firedModel.js";
 import type { AvailableHeatInput } from "./firedTypes.js";
 import { flueGasDewPoint } from "./flueGasDewPoint.js";
@@ -163,7 +164,7 @@ export function availableHeat(input: AvailableHeatInput): AvailableHeatResult {
   if (efficiencyLHV > 1) {
     warnings.push(`efficiency above 1 on the LHV basis: with a flue-gas air preheater, give flueT before the preheater (the preheat is heat taken from the flue gas)`);
   }
-  return {
+  return finiteResult({
     availableHeat: clean(p.availableHeat * k),
     stackLoss: clean(p.stackLoss * k),
     efficiencyLHV,
@@ -187,7 +188,7 @@ export function availableHeat(input: AvailableHeatInput): AvailableHeatResult {
     warnings,
     per: m.per,
     extrapolated: m.extrapolated.map((x) => ({ ...x })),
-  };
+  }, fn);
 }
 
 function clean(x: number): number {

@@ -1,5 +1,6 @@
 import { RxthermError } from "../errors.js";
-import { evaluateFired, excessAirOf, flueTemperature, prepareFired } from "./internal/firedModel.js";
+import { MAX_INPUT_ARRAY_LENGTH, describeValue, finiteResult, requireArray } from "../guards.js";
+import { detailValue, evaluateFired, excessAirOf, flueTemperature, prepareFired } from "./internal/firedModel.js";
 import type { AvailableHeatInput } from "./firedTypes.js";
 
 /**
@@ -56,7 +57,8 @@ export interface EfficiencyCurveResult {
  * @param input - as {@link availableHeat} (`flueT` may be omitted when it is swept)
  * @param sweep - the varied setting and its values
  * @returns arrays of available heat, stack loss (J per unit of fuel), efficiencies (fractions) and condensate, one entry per value
- * @throws RxthermError `INVALID_ARGUMENT` for an unknown parameter, an empty or too long list, a bad value (details: `index`, `value`), or any bad base input
+ * @throws RxthermError `INVALID_ARGUMENT` for an unknown parameter, an empty list or one with holes, a bad value (details: `path`, `index`, `value`), or any bad base input
+ * @throws RxthermError `TOO_LARGE` for more than 100 000 values (details: `path`, `limit`, `size`)
  * @throws every error of {@link availableHeat}
  * @example
  * const c = efficiencyCurve({ fuel: "CH4(g)", excessAir: 0.15, flueT: 450 }, { parameter: "flueT", values: [400, 450, 500] });
@@ -66,20 +68,33 @@ export interface EfficiencyCurveResult {
  */
 export function efficiencyCurve(input: Omit<AvailableHeatInput, "flueT"> & { flueT?: number }, sweep: EfficiencySweep): EfficiencyCurveResult {
   const fn = "efficiencyCurve";
-  if (sweep === null || typeof sweep !== "object" || !Array.isArray(sweep.values) || sweep.values.length === 0 || sweep.values.length > MAX_POINTS) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a sweep { parameter, values } with 1 to ${MAX_POINTS} values`, {
-      length: Array.isArray(sweep?.values) ? sweep.values.length : undefined,
+  if (sweep === null || typeof sweep !== "object" || Array.isArray(sweep)) {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a sweep { parameter, values } with 1 to ${MAX_POINTS} values, got ${describeValue(sweep)}`, {
+      path: "sweep",
+      value: describeValue(sweep),
     });
   }
   const { parameter } = sweep;
   if (parameter !== "flueT" && parameter !== "excessAir") {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} can vary "flueT" or "excessAir", got ${String(parameter)}`, { parameter });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} can vary "flueT" or "excessAir", got ${describeValue(parameter)}`, {
+      path: "sweep.parameter",
+      parameter: describeValue(parameter),
+    });
   }
-  if (parameter === "excessAir" && input?.equivalenceRatio !== undefined) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} varies excessAir; drop equivalenceRatio from the base input`, { equivalenceRatio: input.equivalenceRatio });
+  const values = [...requireArray(sweep.values, fn, "sweep.values", MAX_POINTS)] as unknown[];
+  if (values.length === 0) {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a sweep { parameter, values } with 1 to ${MAX_POINTS} values, got none`, {
+      path: "sweep.values",
+      length: 0,
+    });
+  }
+  if (parameter === "excessAir" && input !== null && typeof input === "object" && input.equivalenceRatio !== undefined) {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} varies excessAir; drop equivalenceRatio from the base input`, {
+      path: "input.equivalenceRatio",
+      equivalenceRatio: detailValue(input.equivalenceRatio),
+    });
   }
   const m = prepareFired(fn, input);
-  const values = [...sweep.values];
   const fixedE = parameter === "flueT" ? excessAirOf(m, input.excessAir, input.equivalenceRatio) : 0;
   const fixedT = parameter === "excessAir" ? flueTemperature(m, input.flueT as number) : 0;
   const n = values.length;
@@ -90,7 +105,7 @@ export function efficiencyCurve(input: Omit<AvailableHeatInput, "flueT"> & { flu
   const condensedWater = new Array<number>(n);
   const scratch = new Float64Array(m.flueKeys.length);
   for (let i = 0; i < n; i++) {
-    const v = values[i]!;
+    const v = values[i] as number;
     let p;
     try {
       p = parameter === "flueT"
@@ -98,7 +113,12 @@ export function efficiencyCurve(input: Omit<AvailableHeatInput, "flueT"> & { flu
         : evaluateFired(m, excessAirOf(m, v, undefined), fixedT, scratch);
     } catch (e) {
       if (e instanceof RxthermError) {
-        throw new RxthermError(e.code, `${fn} at ${parameter} = ${String(v)} (index ${i}): ${e.message.replace(/^\[rxtherm\] /, "")}`, { ...e.details, index: i, value: v });
+        throw new RxthermError(e.code, `${fn} at ${parameter} = ${describeValue(v)} (index ${i}): ${e.message.replace(/^\[rxtherm\] /, "")}`, {
+          ...e.details,
+          path: `sweep.values[${i}]`,
+          index: i,
+          value: detailValue(v),
+        });
       }
       throw e;
     }
@@ -108,12 +128,12 @@ export function efficiencyCurve(input: Omit<AvailableHeatInput, "flueT"> & { flu
     efficiencyHHV[i] = p.availableHeat / m.hhv;
     condensedWater[i] = p.condensedWater;
   }
-  return {
-    parameter, values, availableHeat, stackLoss, efficiencyLHV, efficiencyHHV, condensedWater,
+  return finiteResult({
+    parameter, values: values as number[], availableHeat, stackLoss, efficiencyLHV, efficiencyHHV, condensedWater,
     lhv: m.lhv * m.scale, hhv: m.hhv * m.scale,
     extrapolated: m.extrapolated.map((x) => ({ ...x })),
-  };
+  }, fn);
 }
 
-/** Largest number of points of one curve. */
-const MAX_POINTS = 100000;
+/** Largest number of points of one curve (more is `TOO_LARGE`); the library-wide input array cap. */
+const MAX_POINTS = MAX_INPUT_ARRAY_LENGTH;

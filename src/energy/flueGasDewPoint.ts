@@ -1,4 +1,5 @@
 import { RxthermError } from "../errors.js";
+import { describeValue, requireRecord } from "../guards.js";
 import { parseFormula } from "../formula/parseFormula.js";
 import type { Formula } from "../formula/types.js";
 import type { Flows } from "../extent/types.js";
@@ -87,7 +88,8 @@ export const DEFAULT_SO3_FRACTION = 0.02;
  * @returns water dew point (K), acid dew point (K, when sulfur is present), partial pressures (Pa)
  * @throws {@link RxthermError} `INVALID_ARGUMENT` without water, for a non-positive or non-finite pressure,
  *   a negative or non-finite amount, an `so3Fraction` outside [0, 1], or a key in a condensed phase
- * @throws {@link RxthermError} `OUT_OF_RANGE` when the water partial pressure lies outside the IF97 saturation line (611.213 Pa – 22.064 MPa)
+ * @throws {@link RxthermError} `OUT_OF_RANGE` when the water partial pressure lies outside the IF97 saturation line (611.213 Pa – 22.064 MPa),
+ *   or the SO3 partial pressure is so high that the acid dew point correlation gives no positive temperature
  * @throws {@link RxthermError} `UNKNOWN_SPECIES` for a key that is neither a formula nor a name in the library
  * @example
  * // 10 % water and 10 ppm SO3 at 1 atm (hand computation from the correlation: 410.4 K)
@@ -101,11 +103,14 @@ export const DEFAULT_SO3_FRACTION = 0.02;
 export function flueGasDewPoint(input: FlueGasDewPointInput): FlueGasDewPointResult {
   const fn = "flueGasDewPoint";
   if (input === null || typeof input !== "object") {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object { composition, P }`, {});
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object { composition, P }, got ${describeValue(input)}`, {
+      path: "input",
+      value: describeValue(input),
+    });
   }
   const { P } = input;
   if (typeof P !== "number" || !Number.isFinite(P) || !(P > 0)) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a total pressure P > 0 Pa, got ${String(P)}`, { P });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a total pressure P > 0 Pa, got ${describeValue(P)}`, { path: "input.P", P: detail(P) });
   }
   const parts = flueParts(fn, input.composition, input.library);
   if (!(parts.water > 0)) {
@@ -120,13 +125,25 @@ export function flueGasDewPoint(input: FlueGasDewPointInput): FlueGasDewPointRes
   if (input.so3Fraction !== undefined) {
     const x = input.so3Fraction;
     if (typeof x !== "number" || !Number.isFinite(x) || x < 0 || x > 1) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires so3Fraction in [0, 1] (a fraction, not %), got ${String(x)}`, { so3Fraction: x });
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires so3Fraction in [0, 1] (a fraction, not %), got ${describeValue(x)}`, {
+        path: "input.so3Fraction",
+        so3Fraction: detail(x),
+      });
     }
     share = x;
   } else share = parts.so3 > 0 ? parts.so3 / sulfurOxides : DEFAULT_SO3_FRACTION;
   const so3Pa = sulfurOxides > 0 ? ((share * sulfurOxides) / parts.total) * P : 0;
   if (!(so3Pa > 0)) return { waterK, waterPa, so3Pa: 0 };
-  return { waterK, acidK: acidDewPointK(waterPa, so3Pa), waterPa, so3Pa, acidWithinRange: acidInRange(waterPa, so3Pa) };
+  const acidK = acidDewPointK(waterPa, so3Pa);
+  if (!Number.isFinite(acidK) || !(acidK > 0)) {
+    // only at SO3 partial pressures far beyond any flue gas (the correlation's denominator reaches 0)
+    throw new RxthermError("OUT_OF_RANGE", `${fn}: the acid dew point correlation gives no temperature at an SO3 partial pressure of ${so3Pa} Pa`, {
+      path: "input.composition",
+      so3Pa,
+      waterPa,
+    });
+  }
+  return { waterK, acidK, waterPa, so3Pa, acidWithinRange: acidInRange(waterPa, so3Pa) };
 }
 
 /** Pa per mmHg (torr: 101 325/760 Pa; mmHg differs by 1.4e-7 relative). */
@@ -155,13 +172,15 @@ interface FlueParts {
 
 /** Totals of a flue gas by formula: all gas, water, SO2 and SO3. */
 function flueParts(fn: string, composition: Flows, library: Library | undefined): FlueParts {
-  if (composition === null || typeof composition !== "object" || Array.isArray(composition)) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires composition as an object of species amounts`, {});
-  }
+  requireRecord(composition, fn, "input.composition");
   const out: FlueParts = { total: 0, water: 0, so2: 0, so3: 0 };
   for (const [key, n] of Object.entries(composition)) {
     if (typeof n !== "number" || !Number.isFinite(n) || n < 0) {
-      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires finite amounts >= 0, got ${String(n)} for ${key}`, { species: key, amount: n });
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires finite amounts >= 0, got ${describeValue(n)} for ${describeValue(key)}`, {
+        path: `input.composition.${key}`,
+        species: key,
+        amount: detail(n),
+      });
     }
     if (n === 0) continue;
     const sig = gasSignature(fn, key, library);
@@ -170,7 +189,10 @@ function flueParts(fn: string, composition: Flows, library: Library | undefined)
     else if (sig === "O2S1") out.so2 += n;
     else if (sig === "O3S1") out.so3 += n;
   }
-  if (!(out.total > 0)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a composition with a positive total`, {});
+  if (!(out.total > 0)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a composition with a positive total`, { path: "input.composition" });
+  if (!Number.isFinite(out.total)) {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} cannot total the composition: its amounts sum beyond the float64 range (scale them down)`, { path: "input.composition" });
+  }
   return out;
 }
 
@@ -209,6 +231,11 @@ function gasFormula(fn: string, key: string, library: Library | undefined): Form
     throw new RxthermError("INVALID_ARGUMENT", `${fn} takes the gas phase only; ${key} is not a gas`, { species: key, phase: f.phase });
   }
   return f;
+}
+
+/** A caller's value for error details: numbers as they are, anything else as safe text. */
+function detail(v: unknown): number | string {
+  return typeof v === "number" ? v : describeValue(v);
 }
 
 function signature(f: Formula): string {

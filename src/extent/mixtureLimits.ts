@@ -6,6 +6,7 @@
  * @module
  */
 import { RxthermError } from "../errors.js";
+import { describeValue } from "../guards.js";
 
 /**
  * Largest excess air (fraction) accepted without `allowExtremeMixture: true`: 3 = 300 % excess.
@@ -37,7 +38,7 @@ export const EQUIVALENCE_RATIO_LIMITS: readonly [number, number] = /* @__PURE__ 
  * @param fn - name of the calling function (for the message)
  * @param values - the excess air and/or equivalence ratio as given by the caller
  * @param allowExtremeMixture - the caller's opt-in (`true` accepts any value in the physical domain)
- * @throws {@link RxthermError} `INVALID_ARGUMENT` (details: `excessAir` or `equivalenceRatio`, `limit`, `hint`)
+ * @throws {@link RxthermError} `INVALID_ARGUMENT` (details: `path`, `excessAir` or `equivalenceRatio`, `limit`, `hint`), also when `values` is not an object
  * @category Combustion
  * @example
  * checkMixtureLimits("combustion", { excessAir: 0.15 }, false) // => undefined (no error)
@@ -49,19 +50,26 @@ export function checkMixtureLimits(
   allowExtremeMixture: boolean | undefined,
 ): void {
   if (allowExtremeMixture === true) return;
+  const name = typeof fn === "string" ? describeValue(fn) : "checkMixtureLimits";
+  if (values === null || typeof values !== "object") {
+    throw new RxthermError("INVALID_ARGUMENT", `${name} requires the mixture values { excessAir?, equivalenceRatio? } as an object, got ${describeValue(values)}`, {
+      path: "values",
+      value: describeValue(values),
+    });
+  }
   const { excessAir, equivalenceRatio } = values;
   if (typeof excessAir === "number" && excessAir > MAX_EXCESS_AIR) {
     throw new RxthermError(
       "INVALID_ARGUMENT",
-      `${fn}: excessAir ${excessAir} means ${excessAir * 100} % excess air; excessAir is a fraction (0.2 = 20 %) — was ${excessAir} % meant (excessAir: ${excessAir / 100})? pass allowExtremeMixture: true if ${excessAir * 100} % is meant`,
-      { excessAir, limit: MAX_EXCESS_AIR, hint: `was ${excessAir} % meant? excessAir: ${excessAir / 100}` },
+      `${name}: excessAir ${excessAir} means ${excessAir * 100} % excess air; excessAir is a fraction (0.2 = 20 %) — was ${excessAir} % meant (excessAir: ${excessAir / 100})? pass allowExtremeMixture: true if ${excessAir * 100} % is meant`,
+      { path: "values.excessAir", excessAir, limit: MAX_EXCESS_AIR, hint: `was ${excessAir} % meant? excessAir: ${excessAir / 100}` },
     );
   }
   if (typeof equivalenceRatio === "number" && (equivalenceRatio < EQUIVALENCE_RATIO_LIMITS[0] || equivalenceRatio > EQUIVALENCE_RATIO_LIMITS[1])) {
     throw new RxthermError(
       "INVALID_ARGUMENT",
-      `${fn}: equivalenceRatio ${equivalenceRatio} is outside ${EQUIVALENCE_RATIO_LIMITS[0]}–${EQUIVALENCE_RATIO_LIMITS[1]}, far beyond any burner setting; check the value or pass allowExtremeMixture: true if it is meant`,
-      { equivalenceRatio, limit: [...EQUIVALENCE_RATIO_LIMITS], hint: "check the equivalence ratio (fuel/oxidizer over its stoichiometric value)" },
+      `${name}: equivalenceRatio ${equivalenceRatio} is outside ${EQUIVALENCE_RATIO_LIMITS[0]}–${EQUIVALENCE_RATIO_LIMITS[1]}, far beyond any burner setting; check the value or pass allowExtremeMixture: true if it is meant`,
+      { path: "values.equivalenceRatio", equivalenceRatio, limit: [...EQUIVALENCE_RATIO_LIMITS], hint: "check the equivalence ratio (fuel/oxidizer over its stoichiometric value)" },
     );
   }
 }

@@ -20,7 +20,8 @@ import { describeValue } from "../guards.js";
 export function waterSaturationPressure(temperatureK: number): number {
   if (typeof temperatureK !== "number" || !Number.isFinite(temperatureK) || temperatureK < 273.15 || temperatureK > 647.096) {
     throw new RxthermError("OUT_OF_RANGE", `waterSaturationPressure requires 273.15 <= T <= 647.096 K, got ${describeValue(temperatureK)}${withSlipHint(temperatureK)}`, {
-      T: temperatureK,
+      path: "temperatureK",
+      T: typeof temperatureK === "number" ? temperatureK : describeValue(temperatureK),
       range: [273.15, 647.096],
       ...slipHintDetails(temperatureK),
     });
@@ -54,8 +55,9 @@ export function waterSaturationPressure(temperatureK: number): number {
  */
 export function waterSaturationTemperature(pressurePa: number): number {
   if (typeof pressurePa !== "number" || !Number.isFinite(pressurePa) || pressurePa < P_TRIPLE_PA || pressurePa > P_CRITICAL_PA) {
-    throw new RxthermError("OUT_OF_RANGE", `waterSaturationTemperature requires ${P_TRIPLE_PA} <= p <= ${P_CRITICAL_PA} Pa, got ${String(pressurePa)}`, {
-      P: pressurePa,
+    throw new RxthermError("OUT_OF_RANGE", `waterSaturationTemperature requires ${P_TRIPLE_PA} <= p <= ${P_CRITICAL_PA} Pa, got ${describeValue(pressurePa)}`, {
+      path: "pressurePa",
+      P: typeof pressurePa === "number" ? pressurePa : describeValue(pressurePa),
       range: [P_TRIPLE_PA, P_CRITICAL_PA],
     });
   }

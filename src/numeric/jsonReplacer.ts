@@ -13,14 +13,20 @@
  * {@link divideByGcd}, {@link integerNullSpace}) hand back bare BigInts, which `JSON.stringify`
  * refuses; pass this replacer for those. Text, not a number, so no digit is lost above 2^53.
  *
+ * Non-finite numbers (NaN, ±Infinity) become `null`, which is what `JSON.stringify` writes for
+ * them anyway; the replacer itself thus never hands back a non-finite number.
+ *
  * @param _key - the property name (unused)
  * @param value - the value being written
- * @returns the decimal text of a BigInt, any other value unchanged
+ * @returns the decimal text of a BigInt, `null` for NaN and ±Infinity, any other value unchanged
  * @category Numeric
  * @example
  * JSON.stringify({ coefficients: scaleToCoprimeIntegers(["1", "25/2"]) }, jsonReplacer)
  * // => '{"coefficients":["2","25"]}'
+ * jsonReplacer("x", Number.NaN) // => null
  */
 export function jsonReplacer(_key: string, value: unknown): unknown {
-  return typeof value === "bigint" ? value.toString() : value;
+  if (typeof value === "bigint") return value.toString();
+  if (typeof value === "number" && !Number.isFinite(value)) return null;
+  return value;
 }

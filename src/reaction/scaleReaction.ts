@@ -30,7 +30,8 @@ export function scaleReaction(reaction: Reaction, factor: RationalLike): Reactio
   }
   if (k.num <= 0n) {
     throw new RxthermError("INVALID_ARGUMENT", `scaleReaction requires a positive factor, got ${describeValue(factor)} (use reverseReaction to swap sides)`, {
-      factor: String(factor),
+      path: "factor",
+      factor: describeValue(factor),
     });
   }
   const scale = (t: Term) => makeTerm(t, rationalMul(termCoefficient(t), k));

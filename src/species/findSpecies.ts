@@ -2,6 +2,7 @@ import { RxthermError } from "../errors.js";
 import type { Formula } from "../formula/types.js";
 import { builtInLibrary } from "./builtInLibrary.js";
 import { queryFormula, sameComposition } from "./internal/composition.js";
+import { libraryOf } from "./species.js";
 import type { Library, Species } from "./types.js";
 
 /**
@@ -42,7 +43,8 @@ const PHASE_SUFFIX = /^(.*)\(([a-z]+)\)$/;
  * @param library - where to look; the built-in library when omitted
  * @returns the matching species, best match first; an empty array when nothing matches
  * @throws RxthermError `INVALID_ARGUMENT` for an empty text, an object without any field, or a query that
- *   is neither a string nor an object (details `{ query }`)
+ *   is neither a string nor an object (details `{ query }`), or a `library` that is not a {@link Library}
+ *   (details `{ path: "library" }`)
  * @category Species
  * @example
  * findSpecies("C4H10").map((s) => s.key) // => ["i-C4H10(g)", "n-C4H10(g)"]
@@ -52,7 +54,7 @@ const PHASE_SUFFIX = /^(.*)\(([a-z]+)\)$/;
  * @see CAS Registry Number format (checksum not verified): Chemical Abstracts Service, https://www.cas.org/cas-data/cas-registry
  */
 export function findSpecies(query: string | SpeciesQuery, library?: Library): Species[] {
-  const lib = library ?? builtInLibrary();
+  const lib = library === null ? builtInLibrary() : libraryOf(library, "findSpecies", "library");
   const match = typeof query === "string" ? textMatcher(query) : objectMatcher(query);
   const scored: { sp: Species; score: number }[] = [];
   for (const sp of lib.all()) {

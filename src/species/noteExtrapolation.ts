@@ -1,4 +1,8 @@
+import { RxthermError } from "../errors.js";
+import { describeValue, requireArray } from "../guards.js";
 import type { Species } from "./types.js";
+
+const FN = "noteExtrapolation";
 
 /**
  * A species evaluated outside the temperature range of its data (with `extrapolate: true`), as
@@ -28,6 +32,9 @@ export interface ExtrapolatedPoint {
  * @param species - the species evaluated (one, or several at the same T)
  * @param T - the temperature it was evaluated at, K
  * @returns the list (for chaining)
+ * @throws RxthermError `INVALID_ARGUMENT` (details `path`) when T is not a finite temperature > 0 K, `list`
+ *   is not an array of `{ species, T, range }` points, or a species has no key and range; nothing is
+ *   appended then. `TOO_LARGE` for a list or species array longer than `MAX_INPUT_ARRAY_LENGTH` (100 000).
  * @category Species
  * @example
  * const list: ExtrapolatedPoint[] = [];
@@ -35,11 +42,54 @@ export interface ExtrapolatedPoint {
  * list // => [{ species: "CaCO3(cr)", T: 1150, range: [298, 775] }] (CaO data reach 3200 K)
  */
 export function noteExtrapolation(list: ExtrapolatedPoint[], species: Species | readonly Species[], T: number): ExtrapolatedPoint[] {
-  const all: readonly Species[] = Array.isArray(species) ? species : [species as Species];
-  for (const sp of all) {
+  if (typeof T !== "number" || !Number.isFinite(T) || T <= 0) {
+    throw new RxthermError("INVALID_ARGUMENT", `noteExtrapolation requires T to be a finite temperature > 0 K, got ${describeValue(T)}`, {
+      path: "T",
+      value: describeValue(T),
+    });
+  }
+  checkList(list);
+  const all: readonly unknown[] = Array.isArray(species) ? requireArray(species, FN, "species") : [species];
+  for (let i = 0; i < all.length; i++) checkSpecies(all[i], Array.isArray(species) ? `species[${i}]` : "species");
+  for (const sp of all as readonly Species[]) {
     const [lo, hi] = sp.range;
     if (T >= lo && T <= hi) continue;
     if (!list.some((p) => p.species === sp.key && p.T === T)) list.push(Object.freeze({ species: sp.key, T, range: sp.range }));
   }
   return list;
+}
+
+// ── private helpers ──────────────────────────────────────────────────────────
+
+/** The list must be an array (no holes) of points with a species key and a finite T. */
+function checkList(list: unknown): void {
+  const entries = requireArray(list, FN, "list");
+  for (let i = 0; i < entries.length; i++) {
+    const p = entries[i] as Partial<ExtrapolatedPoint> | null;
+    if (typeof p !== "object" || p === null || typeof p.species !== "string" || !isFiniteNumber(p.T) || !isRange(p.range)) {
+      throw new RxthermError("INVALID_ARGUMENT", `${FN} requires list[${i}] to be a point { species, T, range } of finite numbers, got ${describeValue(p)}`, {
+        path: `list[${i}]`,
+      });
+    }
+  }
+}
+
+/** A species (or species-like object) with a text key and a range of two finite temperatures. */
+function checkSpecies(sp: unknown, path: string): void {
+  const s = sp as Partial<Species> | null;
+  if (typeof s !== "object" || s === null || typeof s.key !== "string" || !isRange(s.range)) {
+    throw new RxthermError("INVALID_ARGUMENT", `${FN} requires ${path} to be a Species (from species() or a library), got ${describeValue(sp)}`, {
+      path,
+      value: describeValue(sp),
+    });
+  }
+}
+
+function isFiniteNumber(x: unknown): x is number {
+  return typeof x === "number" && Number.isFinite(x);
+}
+
+/** `[lo, hi]`: an array of exactly two finite numbers. */
+function isRange(r: unknown): boolean {
+  return Array.isArray(r) && r.length === 2 && isFiniteNumber(r[0]) && isFiniteNumber(r[1]);
 }

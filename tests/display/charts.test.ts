@@ -3,6 +3,7 @@ import {
   JUPYTER_DISPLAY, compositionChart, cpChart, dutyChart, enthalpyChart, flameChart, flameTemperatureSweep, heatDuty,
   mimeBundle, species, toText,
 } from "../../src/index.js";
+import { MAX_CHART_POINTS, MAX_CHART_SERIES } from "../../src/display/cpChart.js";
 import { caught } from "../_helpers/caught.js";
 
 const SWEEP = flameTemperatureSweep({ fuel: "CH4(g)", mode: "complete" }, { parameter: "equivalenceRatio", values: [0.8, 1] });
@@ -46,6 +47,20 @@ describe("cpChart(species, options)", () => {
     expect(caught(() => cpChart("N2(g)", { TminK: -5 })).code).toBe("INVALID_ARGUMENT");
     expect(caught(() => cpChart("N2(g)", { TminK: 7000, TmaxK: 8000 })).code).toBe("OUT_OF_RANGE");
     expect(caught(() => cpChart("Xx(g)")).code).toBe("UNKNOWN_SPECIES");
+  });
+
+  it("caps points and series (TOO_LARGE) and names the bad place of hostile input", () => {
+    const big = caught(() => cpChart("N2(g)", { points: 1e308 }));
+    expect([big.code, big.details["path"], big.details["limit"]]).toEqual(["TOO_LARGE", "options.points", MAX_CHART_POINTS]);
+    expect(cpChart("N2(g)", { points: MAX_CHART_POINTS }).data.values.length).toBe(MAX_CHART_POINTS);
+    expect(caught(() => cpChart(new Array(MAX_CHART_SERIES + 1).fill("N2(g)"))).code).toBe("TOO_LARGE");
+    const np = caught(() => enthalpyChart("N2(g)", { TminK: Object.create(null) as number }));
+    expect([np.code, np.details["path"]]).toEqual(["INVALID_ARGUMENT", "options.TminK"]);
+    expect(caught(() => cpChart(["N2(g)", null as never])).details["path"]).toBe("input[1]");
+    expect(caught(() => cpChart(12 as never)).details["path"]).toBe("input");
+    expect(caught(() => cpChart("N2(g)", null as never)).details["path"]).toBe("options");
+    expect(caught(() => enthalpyChart("N2(g)", null as never)).details["path"]).toBe("options");
+    expect(cpChart(species("N2(g)"), { points: 2 }).data.values.length).toBe(2);
   });
 });
 
@@ -92,6 +107,28 @@ describe("flameChart(sweep) and compositionChart(sweep)", () => {
     expect(caught(() => compositionChart(SWEEP, { species: ["XYZ(g)"] })).code).toBe("INVALID_ARGUMENT");
     expect(caught(() => compositionChart(SWEEP, { minFraction: 2 })).code).toBe("INVALID_ARGUMENT");
   });
+
+  it("rejects sweeps with non-finite, missing, holey or mismatched columns, naming the place", () => {
+    const path = (f: () => unknown): unknown => caught(f).details["path"];
+    expect(path(() => flameChart({ ...SWEEP, parameter: Object.create(null) as never }))).toBe("sweep.parameter");
+    expect(path(() => flameChart({ ...SWEEP, parameter: "toString" as never }))).toBe("sweep.parameter");
+    expect(path(() => flameChart({ ...SWEEP, values: [0.8, Symbol("x") as never] }))).toBe("sweep.values[1]");
+    expect(path(() => flameChart({ ...SWEEP, values: [0.8, 10n ** 30n as never] }))).toBe("sweep.values[1]");
+    expect(path(() => flameChart({ ...SWEEP, T: [NaN, 2000] }))).toBe("sweep.T[0]");
+    expect(path(() => flameChart({ ...SWEEP, T: [2000] }))).toBe("sweep.T");
+    expect(path(() => flameChart({ ...SWEEP, values: [], T: [] }))).toBe("sweep.values");
+    expect(path(() => flameChart({ ...SWEEP, values: [0.8, , ] as never }))).toBe("sweep.values[1]");
+    expect(caught(() => flameChart({ ...SWEEP, values: new Array(200_000).fill(1) })).code).toBe("TOO_LARGE");
+    expect(path(() => flameChart({ ...SWEEP, parameter: "excessAir", values: [1e308, 1] }))).toBe("sweep.values[0]");
+    expect(path(() => compositionChart({ ...SWEEP, products: null as never }))).toBe("sweep.products");
+    expect(path(() => compositionChart({ ...SWEEP, products: { ...SWEEP.products, "CO2(g)": 1 as never } }))).toBe("sweep.products.CO2(g)");
+    expect(path(() => compositionChart({ ...SWEEP, products: { ...SWEEP.products, "CO2(g)": [0.1, Infinity] } }))).toBe("sweep.products.CO2(g)[1]");
+    expect(path(() => compositionChart(SWEEP, null as never))).toBe("options");
+    expect(path(() => compositionChart(SWEEP, { species: "" as never }))).toBe("options.species");
+    expect(path(() => compositionChart(SWEEP, { species: [] }))).toBe("options.species");
+    expect(path(() => compositionChart(SWEEP, { species: ["CO2(g)", Symbol("x") as never] }))).toBe("options.species[1]");
+    expect(path(() => compositionChart(SWEEP, { species: [Object.create(null) as never] }))).toBe("options.species[0]");
+  });
 });
 
 describe("dutyChart(duty)", () => {
@@ -115,5 +152,7 @@ describe("dutyChart(duty)", () => {
 
   it("rejects what is not a duty result", () => {
     expect(caught(() => dutyChart({} as never)).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => dutyChart({ ...q, latentHeat: Symbol("x") as never })).details["path"]).toBe("duty.latentHeat");
+    expect(caught(() => dutyChart({ ...q, pvTerm: NaN })).details["path"]).toBe("duty.pvTerm");
   });
 });

@@ -213,4 +213,18 @@ describe("availableHeat", () => {
     expect(Math.abs(r.availableHeat + r.stackLoss + losses - r.heatInputLHV - r.latentRecovered) / scale).toBeLessThan(1e-9);
     expect(Math.abs(r.availableHeat + r.stackLoss + r.latentLossHHV + losses - r.heatInputHHV) / scale).toBeLessThan(1e-9);
   });
+
+  it("availableHeat rejects a non-number setting with INVALID_ARGUMENT naming the field (no TypeError from the message)", () => {
+    const base = { fuel: "CH4(g)", excessAir: 0.15, flueT: 450 };
+    for (const field of ["excessAir", "equivalenceRatio", "fuelT", "airT", "flueT", "P", "coPpm", "per"] as const) {
+      const e = caught(() => availableHeat({ ...base, ...(field === "equivalenceRatio" ? { excessAir: undefined } : {}), [field]: Object.assign(Object.create(null), { H: 1 }) as never }));
+      expect(e.code, field).toBe("INVALID_ARGUMENT");
+      expect(e.details.path, field).toBe(`input.${field}`);
+      expect(e.message, field).toContain("an object");
+    }
+    expect(caught(() => availableHeat(null as never)).details.path).toBe("input");
+    expect(caught(() => availableHeat({ ...base, unburnedCarbon: [] as never })).details.path).toBe("input.unburnedCarbon");
+    expect(caught(() => availableHeat({ ...base, unburnedCarbon: { fractionOfFuelCarbon: 10n as never } })).details.path).toBe("input.unburnedCarbon.fractionOfFuelCarbon");
+    expect(caught(() => availableHeat({ ...base, excessAir: 12 })).details.path).toBe("input.excessAir");
+  });
 });

@@ -43,4 +43,16 @@ describe("efficiencyCurve", () => {
     expect(caught(() => efficiencyCurve({ fuel: "CH4(g)" }, { parameter: "airT" as "flueT", values: [400] })).code).toBe("INVALID_ARGUMENT");
     expect(caught(() => efficiencyCurve({ fuel: "CH4(g)", flueT: 450, equivalenceRatio: 0.9 }, { parameter: "excessAir", values: [0.1] })).code).toBe("INVALID_ARGUMENT");
   });
+
+  it("efficiencyCurve rejects hostile sweeps with RxthermError naming the place", () => {
+    const base = { fuel: "CH4(g)", excessAir: 0.15, flueT: 450 };
+    const holes: number[] = [];
+    holes[2] = 400;
+    expect(caught(() => efficiencyCurve(base, { parameter: Object.assign(Object.create(null), { H: 1 }) as never, values: [400] })).details.path).toBe("sweep.parameter");
+    expect(caught(() => efficiencyCurve(base, { parameter: "flueT", values: [400, Object.assign(Object.create(null), { H: 1 }) as never] })).details.path).toBe("sweep.values[1]");
+    expect(caught(() => efficiencyCurve({ ...base, excessAir: Object.assign(Object.create(null), { H: 1 }) as never }, { parameter: "flueT", values: [400] })).details.path).toBe("input.excessAir");
+    expect(caught(() => efficiencyCurve(base, { parameter: "flueT", values: holes })).details.path).toBe("sweep.values[0]");
+    expect(caught(() => efficiencyCurve(base, { parameter: "flueT", values: new Array<number>(100_001).fill(400) })).code).toBe("TOO_LARGE");
+    expect(caught(() => efficiencyCurve(base, null as never)).details.path).toBe("sweep");
+  });
 });

@@ -70,4 +70,17 @@ describe("flueGasDewPoint", () => {
     const d = flueGasDewPoint({ composition: { "H2O(g)": 0.1, nitrogen: 0.9 }, P: 101325 });
     expect(d.waterPa).toBeCloseTo(10132.5, 6);
   });
+
+  it("flueGasDewPoint rejects non-number amounts and pressures with INVALID_ARGUMENT naming the field", () => {
+    const composition = { "H2O(g)": 0.1, "SO3(g)": 1e-5, "N2(g)": 0.89999 };
+    expect(caught(() => flueGasDewPoint({ composition, P: Object.assign(Object.create(null), { H: 1 }) as never })).details.path).toBe("input.P");
+    for (const key of Object.keys(composition)) {
+      const e = caught(() => flueGasDewPoint({ composition: { ...composition, [key]: Object.assign(Object.create(null), { H: 1 }) as never }, P: 101325 }));
+      expect(e.code, key).toBe("INVALID_ARGUMENT");
+      expect(e.details.path, key).toBe(`input.composition.${key}`);
+    }
+    expect(caught(() => flueGasDewPoint({ composition, P: 101325, so3Fraction: Symbol("x") as never })).details.path).toBe("input.so3Fraction");
+    expect(caught(() => flueGasDewPoint({ composition: new Map() as never, P: 101325 })).details.path).toBe("input.composition");
+    expect(caught(() => flueGasDewPoint({ composition: { "H2O(g)": 1e308, "N2(g)": 1e308 }, P: 101325 })).code).toBe("INVALID_ARGUMENT");
+  });
 });

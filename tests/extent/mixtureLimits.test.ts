@@ -35,4 +35,14 @@ describe("checkMixtureLimits", () => {
     expect(combustion({ fuel: { "CH4(g)": 1 }, equivalenceRatio: 0.01, allowExtremeMixture: true }).excessAir).toBeCloseTo(99, 12);
     expect(() => adiabaticFlameTemperature({ fuel: "CH4(g)", equivalenceRatio: 0.05, mode: "complete" })).not.toThrow();
   });
+
+  it("checkMixtureLimits requires the values as an object", () => {
+    for (const v of [null, undefined, 12]) {
+      const e = caught(() => checkMixtureLimits("combustion", v as never, false));
+      expect(e.code).toBe("INVALID_ARGUMENT");
+      expect(e.details.path).toBe("values");
+    }
+    expect(checkMixtureLimits("combustion", null as never, true)).toBeUndefined();
+    expect(caught(() => checkMixtureLimits(Symbol("f") as never, { excessAir: 12 }, false)).details.path).toBe("values.excessAir");
+  });
 });

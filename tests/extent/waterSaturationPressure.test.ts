@@ -45,4 +45,12 @@ describe("waterSaturationTemperature", () => {
     const e = caught(() => waterSaturationPressure(60));
     expect(e.message).toContain("was °C meant? 60 °C is 333.15 K");
   });
+
+  it("waterSaturationTemperature and waterSaturationPressure describe a non-number argument safely", () => {
+    for (const v of [Object.assign(Object.create(null), { H: 1 }) as never, Symbol("x"), 10n, null]) {
+      expect(caught(() => waterSaturationTemperature(v as never)).code).toBe("OUT_OF_RANGE");
+      expect(caught(() => waterSaturationPressure(v as never)).code).toBe("OUT_OF_RANGE");
+    }
+    expect(caught(() => waterSaturationTemperature(Object.assign(Object.create(null), { H: 1 }) as never)).details.path).toBe("pressurePa");
+  });
 });

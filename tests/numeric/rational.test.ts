@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { test, fc } from "../_helpers/property.js";
+import { jsonReplacer } from "../../src/numeric/jsonReplacer.js";
 import {
   divideByGcd,
   gcdBigInt,
@@ -213,3 +214,16 @@ describe("scaleToCoprimeIntegers / divideByGcd", () => {
     }
   });
 });
+
+describe("jsonReplacer", () => {
+  it("writes BigInts as text and non-finite numbers as null, as JSON.stringify does for them", () => {
+    expect(jsonReplacer("c", 12n)).toBe("12");
+    for (const x of [Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY]) expect(jsonReplacer("x", x)).toBeNull();
+    expect(jsonReplacer("x", 1.5)).toBe(1.5);
+    expect(jsonReplacer("x", "text")).toBe("text");
+    const value = { a: Number.NaN, b: [Number.POSITIVE_INFINITY, 2n] };
+    expect(JSON.stringify(value, jsonReplacer)).toBe(JSON.stringify({ a: Number.NaN, b: [Number.POSITIVE_INFINITY, "2"] }));
+    expect(JSON.stringify(value, jsonReplacer)).toBe('{"a":null,"b":[null,"2"]}');
+  });
+});
+

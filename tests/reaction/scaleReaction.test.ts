@@ -15,7 +15,15 @@ describe("scaleReaction", () => {
     for (const f of [0, -1, "abc", Number.NaN]) {
       const e = errorOf(() => scaleReaction(r, f));
       expect(e.code).toBe("INVALID_ARGUMENT");
-      expect(e.details).toEqual({ factor: String(f) });
+      expect(e.details).toEqual({ path: "factor", factor: String(f) });
+    }
+  });
+  it("a hostile factor (null-prototype object, symbol) is INVALID_ARGUMENT, never a TypeError", () => {
+    const r = parseReaction("2 H2 + O2 -> 2 H2O");
+    for (const f of [Object.create(null), Symbol("f"), null]) {
+      const e = errorOf(() => scaleReaction(r, f as never));
+      expect(e.code).toBe("INVALID_ARGUMENT");
+      expect(e.details.path).toBe("factor");
     }
   });
   test.prop([fc.integer({ min: 1, max: 99 }), fc.integer({ min: 1, max: 99 })])("scaling by p/q then q/p gives the reaction back, exactly", (p, q) => {

@@ -44,6 +44,14 @@ export const ENTRY_POINTS: readonly EntryPoint[] = [
   e("toPascal", () => [1, "atm"]),
   e("toJoule", () => [1, "kcal"]),
   e("toMol", () => [1, "lbmol"]),
+  e("fromPascal", () => [250000, "bar"]),
+  e("fromJoule", () => [1055.05585262, "Btu"]),
+  e("toWatt", () => [1, "MMBtu/h"]),
+  e("fromWatt", () => [-521756.75, "kW"]),
+  e("toMolPerSecond", () => [{ value: 57.753, unit: "kg/h", molarMassGPerMol: 16.0425 }]),
+  e("fromMolPerSecond", () => [1, "kg/h", { molarMassGPerMol: 16.0425 }]),
+  e("fromJoulePerMol", () => [890310.1, "MJ/kg", { molarMassGPerMol: 16.0425 }]),
+  e("celsiusSlipHint", () => [25]),
   // numeric
   e("rational", () => [6n, -4n]),
   e("rationalFrom", () => [{ num: 25, den: 2 }]),
@@ -69,6 +77,7 @@ export const ENTRY_POINTS: readonly EntryPoint[] = [
   e("integerNullSpace", () => [[[2, 0, 2], [0, 2, 1]]]),
   e("solveLinearSystem", () => [[[1, 1], [1, -1]], [3, { num: 1, den: 1 }]]),
   e("findRoot", () => [(x: number) => x * x - 2, [0, 2], { toleranceX: 1e-12 }]),
+  e("jsonReplacer", () => ["coefficients", 12n]),
   // formula
   e("parseFormula", () => ["CuSO4·5H2O"]),
   e("safeParseFormula", () => ["Ca(OH"]),
@@ -98,12 +107,23 @@ export const ENTRY_POINTS: readonly EntryPoint[] = [
   e("excessAirFromFlueO2", () => [{ fuel: { C: 1 }, dryO2: 0.03 }]),
   e("excessAirFromFlueCO2", () => [{ fuel: { "CH4(g)": 1 }, oxidizer: { "N2(g)": 0.79, "O2(g)": 0.21 }, dryCO2: 0.1 }]),
   e("waterSaturationPressure", () => [300]),
+  e("waterSaturationTemperature", () => [101325]),
+  e("checkMixtureLimits", () => ["combustion", { excessAir: 0.15 }, false]),
   // heat capacity
   e("createHeatCapacity", () => [O2_SHOMATE(), { label: "O2(g)" }]),
   e("boundaryJumps", () => [rx.createHeatCapacity(O2_SHOMATE() as never)]),
   e("fitCp", () => [[{ T: 298.15, cp: 29.376 }, { T: 500, cp: 31.091 }, { T: 1000, cp: 34.87 }, { T: 1500, cp: 36.544 }, { T: 2000, cp: 37.741 }], "shomate", {}]),
   // species and library
   e("species", () => ["CH4(g)", rx.builtInLibrary()]),
+  e("findSpecies", () => [{ formula: "OH2", phase: "l" }, rx.builtInLibrary()]),
+  // noteExtrapolation appends to the list it is given (documented): a valid but out-of-range T (12 K,
+  // 1e308 K) must append. So the call hands it a fresh copy of the list argument, built inside the call;
+  // the list's hostile values (non-arrays, holes, huge arrays) still reach the function unchanged.
+  {
+    name: "noteExtrapolation",
+    args: () => [[{ species: "CaCO3(cr)", T: 1150, range: [298, 775] }], [rx.species("CaCO3(cr)"), rx.species("CaO(cr)")], 500],
+    call: (a) => rx.noteExtrapolation((Array.isArray(a[0]) ? a[0].slice() : a[0]) as rx.ExtrapolatedPoint[], a[1] as rx.Species[], a[2] as number),
+  },
   e("createLibrary", () => [DEMO_LIBRARY_DATA(), {}]),
   e("builtInLibrary", () => []),
   e("validateSpeciesData", () => [DEMO_LIBRARY_DATA(), {}]),
@@ -129,8 +149,25 @@ export const ENTRY_POINTS: readonly EntryPoint[] = [
   e("adiabaticTemperatureRise", () => [{
     inlet: { T: 298.15, flows: { "H2(g)": 0.02, "O2(g)": 0.01, "N2(g)": 0.97 } }, reactions: ["2 H2(g) + O2(g) -> 2 H2O(g)"], specs: [{ of: "H2(g)", conversion: 1 }],
   }, {}]),
+  // fired equipment
+  e("availableHeat", () => [{ fuel: { "CH4(g)": 0.9, "C2H6(g)": 0.1 }, excessAir: 0.15, airT: 298.15, flueT: 450, coPpm: 50, per: "mol" }]),
+  e("efficiencyCurve", () => [{ fuel: "CH4(g)", excessAir: 0.15, flueT: 450 }, { parameter: "flueT", values: [400, 450, 500] }]),
+  e("flueGasDewPoint", () => [{ composition: { "H2O(g)": 0.1, "SO3(g)": 1e-5, "N2(g)": 0.89999 }, P: 101325 }]),
   // flame
   e("equilibriumComposition", () => [{ feed: { "H2O(g)": 1 }, species: ["H2O(g)", "H2(g)", "O2(g)", "OH(g)"], T: 3000 }, {}], true),
   e("adiabaticFlameTemperature", () => [{ fuel: "CH4(g)", equivalenceRatio: 0.9, mode: "complete" }, {}], true),
   e("flameTemperatureSweep", () => [{ fuel: "CH4(g)", mode: "complete" }, { parameter: "equivalenceRatio", values: [0.8, 1] }, {}], true),
+  // display
+  e("show", () => [{ T: 500, flows: { "N2(g)": 3.76, "O2(g)": 1 } }]),
+  e("mimeBundle", () => [rx.species("CO2(g)")]),
+  e("toText", () => [rx.parseFormula("H2O")]),
+  e("toMarkdown", () => [{ "CH4(g)": 1, "O2(g)": 2 }]),
+  e("toHtml", () => [rx.species("N2(g)")]),
+  e("cpChart", () => [["N2(g)", "CO2(g)"], { TminK: 300, TmaxK: 1500, points: 25 }]),
+  e("enthalpyChart", () => ["N2(g)", { TminK: 298.15, TmaxK: 1000, points: 2 }]),
+  e("flameChart", () => [rx.flameTemperatureSweep({ fuel: "CH4(g)", mode: "complete" }, { parameter: "equivalenceRatio", values: [0.8, 1] })], true),
+  e("compositionChart", () => [
+    rx.flameTemperatureSweep({ fuel: "CH4(g)", mode: "complete" }, { parameter: "equivalenceRatio", values: [0.8, 1] }), { species: ["CO2(g)", "H2O(g)"] },
+  ], true),
+  e("dutyChart", () => [rx.heatDuty({ inlet: { T: 298.15, flows: { "N2(g)": 1 } }, outlet: { T: 500, flows: { "N2(g)": 1 } } })]),
 ];

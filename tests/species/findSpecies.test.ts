@@ -82,4 +82,18 @@ describe("UNKNOWN_SPECIES messages point to findSpecies and the database", () =>
     expect(e.message).toContain("rxtherm/database");
     expect((e.details as { suggestions: string[] }).suggestions[0]).toBe("CH2O(g)");
   });
+
+});
+
+describe("findSpecies: the library argument", () => {
+  it("a library that is not a Library is INVALID_ARGUMENT with details.path, never a TypeError", () => {
+    for (const lib of [42, "lib", {}, new Map(), Object.create(null), Symbol("x"), builtInLibrary]) {
+      const e = caught(() => findSpecies("CO2", lib as never));
+      expect(e.code).toBe("INVALID_ARGUMENT");
+      expect(e.message).toMatch(/findSpecies requires library to be a Library/);
+      expect(e.details.path).toBe("library");
+    }
+    expect(keys(findSpecies("CO2(g)", undefined))[0]).toBe("CO2(g)");
+    expect(keys(findSpecies("CO2(g)", null as never))[0]).toBe("CO2(g)");
+  });
 });

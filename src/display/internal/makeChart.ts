@@ -6,6 +6,7 @@
  * @internal
  */
 import { RxthermError } from "../../errors.js";
+import { describeValue } from "../../guards.js";
 import { attachView, viewDescriptors } from "../../view/attachView.js";
 import { JUPYTER_DISPLAY } from "../../view/displaySymbols.js";
 import { viewToText } from "../../view/renderView.js";
@@ -58,10 +59,32 @@ export function chartView(c: ChartSpec): ResultView {
   };
 }
 
-/** Check a sampling option: a positive finite number (an integer ≥ 2 for `points`). */
+/**
+ * Most points per series of a species chart (`points` of {@link cpChart} and {@link enthalpyChart});
+ * more is TOO_LARGE. A chart is drawn at a few hundred pixels: more points add nothing but memory.
+ */
+export const MAX_CHART_POINTS = 10_000;
+
+/** Most series (species) in one species chart; more is TOO_LARGE. */
+export const MAX_CHART_SERIES = 100;
+
+/**
+ * Check a sampling option at `options.<name>`: a positive finite number (an integer ≥ 2 for `points`,
+ * at most `MAX_CHART_POINTS`, else TOO_LARGE).
+ */
 export function checkPositive(fn: string, name: string, v: unknown, integer = false): number {
   if (typeof v !== "number" || !Number.isFinite(v) || v <= 0 || (integer && (!Number.isInteger(v) || v < 2))) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${name} to be ${integer ? "an integer ≥ 2" : "a finite number > 0"}, got ${String(v)}`, { [name]: v });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${name} to be ${integer ? "an integer ≥ 2" : "a finite number > 0"}, got ${describeValue(v)}`, {
+      path: `options.${name}`,
+      value: describeValue(v),
+    });
+  }
+  if (integer && v > MAX_CHART_POINTS) {
+    throw new RxthermError("TOO_LARGE", `${fn} draws at most ${MAX_CHART_POINTS} ${name} per series, got ${v}`, {
+      path: `options.${name}`,
+      limit: MAX_CHART_POINTS,
+      size: v,
+    });
   }
   return v;
 }

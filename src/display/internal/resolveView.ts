@@ -6,6 +6,7 @@
  * @internal
  */
 import { RxthermError } from "../../errors.js";
+import { describeValue } from "../../guards.js";
 import { RESULT_VIEW } from "../../view/displaySymbols.js";
 import { FLOW_UNIT, recordTable } from "../../view/recordTable.js";
 import type { ResultView } from "../../view/types.js";
@@ -19,7 +20,7 @@ export function resolveView(value: unknown, fn: string): ResultView {
       return { title: "flows", tables: [recordTable(undefined, [{ label: "amount", unit: FLOW_UNIT, values: value }])] };
     }
     const s = value as { T?: unknown; flows?: unknown; P?: unknown };
-    if (typeof s.T === "number" && isFlows(s.flows)) {
+    if (typeof s.T === "number" && Number.isFinite(s.T) && isFlows(s.flows) && (s.P === undefined || (typeof s.P === "number" && Number.isFinite(s.P)))) {
       const p = typeof s.P === "number" ? `, ${s.P / 1000} kPa` : "";
       return { title: `stream at ${s.T} K${p}`, tables: [recordTable(undefined, [{ label: "amount", unit: FLOW_UNIT, values: s.flows }])] };
     }
@@ -41,5 +42,5 @@ function isFlows(v: unknown): v is Record<string, number> {
 function describe(v: unknown): string {
   if (v === null) return "null";
   if (Array.isArray(v)) return "an array";
-  return typeof v === "object" ? "an object of another kind" : `${typeof v} ${String(v).slice(0, 40)}`;
+  return typeof v === "object" ? "an object of another kind" : `${typeof v} ${describeValue(v).slice(0, 40)}`;
 }

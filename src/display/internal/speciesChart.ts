@@ -5,11 +5,12 @@
  * @internal
  */
 import { RxthermError } from "../../errors.js";
+import { describeValue, requireArray } from "../../guards.js";
 import { species as lookUp } from "../../species/species.js";
 import type { Library, Species } from "../../species/types.js";
 import { STANDARD_TEMPERATURE_K } from "../../units.js";
 import type { ChartSpec, SpeciesChartOptions } from "../types.js";
-import { checkPositive, makeChart } from "./makeChart.js";
+import { checkPositive, makeChart, MAX_CHART_SERIES } from "./makeChart.js";
 
 /** One property to draw: its axis title and how to evaluate it. */
 export interface SpeciesProperty {
@@ -23,15 +24,15 @@ export function speciesChart(
   fn: string, input: string | Species | readonly (string | Species)[], property: SpeciesProperty,
   options: SpeciesChartOptions, library: Library | undefined,
 ): ChartSpec {
-  const list = Array.isArray(input) ? (input as readonly (string | Species)[]) : [input as string | Species];
-  if (list.length === 0) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires at least one species`, {});
+  const list: readonly unknown[] = Array.isArray(input) ? requireArray(input, fn, "input", MAX_CHART_SERIES) : [input];
+  if (list.length === 0) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires at least one species`, { path: "input" });
   const lo = checkPositive(fn, "TminK", options.TminK ?? STANDARD_TEMPERATURE_K);
   const hi = checkPositive(fn, "TmaxK", options.TmaxK ?? 2000);
   const points = checkPositive(fn, "points", options.points ?? 60, true);
-  if (!(hi > lo)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires TmaxK > TminK, got ${lo} and ${hi}`, { TminK: lo, TmaxK: hi });
+  if (!(hi > lo)) throw new RxthermError("INVALID_ARGUMENT", `${fn} requires TmaxK > TminK, got ${lo} and ${hi}`, { path: "options.TmaxK", TminK: lo, TmaxK: hi });
+  const resolved = list.map((item, i) => speciesOf(fn, item, Array.isArray(input) ? `input[${i}]` : "input", library));
   const values: Record<string, number | string>[] = [];
-  for (const item of list) {
-    const s = typeof item === "string" ? lookUp(item, library) : item;
+  for (const s of resolved) {
     const a = Math.max(lo, s.range[0]);
     const b = Math.min(hi, s.range[1]);
     if (!(b > a)) {
@@ -41,7 +42,11 @@ export function speciesChart(
     }
     for (let i = 0; i < points; i++) {
       const T = i === points - 1 ? b : a + (i * (b - a)) / (points - 1); // from the index, no accumulated step
-      values.push({ species: s.key, T, value: property.at(s, T) });
+      const value = property.at(s, T);
+      if (!Number.isFinite(value)) {
+        throw new RxthermError("INVALID_ARGUMENT", `${fn}: ${s.key} gives no finite value at ${T} K`, { path: "input", species: s.key, T });
+      }
+      values.push({ species: s.key, T, value });
     }
   }
   return makeChart({
@@ -54,4 +59,21 @@ export function speciesChart(
     y: { field: "value", type: "quantitative", title: property.axis },
     color: { field: "species", type: "nominal", title: "species" },
   });
+}
+
+/** A species key (looked up in `library`) or a Species object (checked for what the chart reads). */
+function speciesOf(fn: string, item: unknown, path: string, library: Library | undefined): Species {
+  if (typeof item === "string") return lookUp(item, library);
+  const s = item as Partial<Species> | null;
+  if (
+    typeof s !== "object" || s === null || Array.isArray(s) || typeof s.key !== "string" ||
+    !Array.isArray(s.range) || s.range.length !== 2 || !Number.isFinite(s.range[0]) || !Number.isFinite(s.range[1]) ||
+    typeof s.cp !== "function" || typeof s.enthalpy !== "function" || !Number.isFinite(s.hf298)
+  ) {
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires species keys or species objects, got ${describeValue(item)} at ${path}`, {
+      path,
+      value: describeValue(item),
+    });
+  }
+  return s as Species;
 }

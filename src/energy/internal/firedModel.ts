@@ -8,6 +8,7 @@
  * @internal
  */
 import { RxthermError } from "../../errors.js";
+import { describeValue } from "../../guards.js";
 import { STANDARD_TEMPERATURE_K, ATMOSPHERE_PA, slipHintDetails, withSlipHint } from "../../units.js";
 import type { Flows } from "../../extent/types.js";
 import { combustion } from "../../extent/combustion.js";
@@ -92,10 +93,15 @@ export interface FiredPoint {
 
 const REF = STANDARD_TEMPERATURE_K;
 
+/** A caller's value for error details: numbers as they are (JSON-safe), anything else as safe text. */
+export function detailValue(v: unknown): number | string {
+  return typeof v === "number" ? v : describeValue(v);
+}
+
 /** Resolve and check everything that does not depend on the flue temperature or the point. */
 export function prepareFired(fn: string, input: FiredInputBase): FiredModel {
   if (input === null || typeof input !== "object") {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object { fuel, flueT, ... }`, {});
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object { fuel, flueT, ... }, got ${describeValue(input)}`, { path: "input", value: detailValue(input) });
   }
   const library = input.library;
   const lookup = library ?? builtInLibrary();
@@ -104,15 +110,15 @@ export function prepareFired(fn: string, input: FiredInputBase): FiredModel {
   const airT = temperature(fn, "airT", input.airT ?? REF);
   const P = input.P ?? ATMOSPHERE_PA;
   if (typeof P !== "number" || !Number.isFinite(P) || !(P > 0)) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires P > 0 Pa, got ${String(P)}`, { P });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires P > 0 Pa, got ${describeValue(P)}`, { path: "input.P", P: detailValue(P) });
   }
   const per = input.per ?? "mol";
   if (per !== "mol" && per !== "kg" && per !== "Nm3") {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires per "mol", "kg" or "Nm3", got ${String(per)}`, { per });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires per "mol", "kg" or "Nm3", got ${describeValue(per)}`, { path: "input.per", per: detailValue(per) });
   }
   const coPpm = input.coPpm ?? 0;
   if (typeof coPpm !== "number" || !Number.isFinite(coPpm) || coPpm < 0 || coPpm >= 1e6) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires coPpm (dry flue gas, ppm by volume) in [0, 1e6), got ${String(coPpm)}`, { coPpm });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires coPpm (dry flue gas, ppm by volume) in [0, 1e6), got ${describeValue(coPpm)}`, { path: "input.coPpm", coPpm: detailValue(coPpm) });
   }
 
   // ── fuel: mole fractions, species, heating values ──
@@ -163,20 +169,27 @@ export function prepareFired(fn: string, input: FiredInputBase): FiredModel {
   let unburnedCarbonMol = 0;
   const u = input.unburnedCarbon;
   if (u !== undefined) {
-    if (u === null || typeof u !== "object") throw new RxthermError("INVALID_ARGUMENT", `${fn} requires unburnedCarbon as an object`, {});
+    if (u === null || typeof u !== "object" || Array.isArray(u)) {
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires unburnedCarbon as an object, got ${describeValue(u)}`, { path: "input.unburnedCarbon", value: detailValue(u) });
+    }
     if ("fractionOfFuelCarbon" in u) {
       const f = u.fractionOfFuelCarbon;
       if (typeof f !== "number" || !Number.isFinite(f) || f < 0 || f > 1) {
-        throw new RxthermError("INVALID_ARGUMENT", `${fn} requires unburnedCarbon.fractionOfFuelCarbon in [0, 1], got ${String(f)}`, { fractionOfFuelCarbon: f });
+        throw new RxthermError("INVALID_ARGUMENT", `${fn} requires unburnedCarbon.fractionOfFuelCarbon in [0, 1], got ${describeValue(f)}`, {
+          path: "input.unburnedCarbon.fractionOfFuelCarbon",
+          fractionOfFuelCarbon: detailValue(f),
+        });
       }
       unburnedCarbonMol = f * fuelCarbon;
     } else {
       const a = u.ashPerFuelMass;
       const w = u.carbonInAsh;
       if (typeof a !== "number" || !Number.isFinite(a) || a < 0 || typeof w !== "number" || !Number.isFinite(w) || w < 0 || w >= 1) {
-        throw new RxthermError("INVALID_ARGUMENT", `${fn} requires unburnedCarbon.ashPerFuelMass >= 0 and 0 <= carbonInAsh < 1 (fractions, not %), got ${String(a)} and ${String(w)}`, {
-          ashPerFuelMass: a,
-          carbonInAsh: w,
+        const bad = typeof a !== "number" || !Number.isFinite(a) || a < 0 ? "ashPerFuelMass" : "carbonInAsh";
+        throw new RxthermError("INVALID_ARGUMENT", `${fn} requires unburnedCarbon.ashPerFuelMass >= 0 and 0 <= carbonInAsh < 1 (fractions, not %), got ${describeValue(a)} and ${describeValue(w)}`, {
+          path: `input.unburnedCarbon.${bad}`,
+          ashPerFuelMass: detailValue(a),
+          carbonInAsh: detailValue(w),
         });
       }
       // carbon mass in the refuse per kg fuel = a·w/(1 − w); per mol fuel × M_fuel (kg/mol) / M_C (kg/mol)
@@ -238,18 +251,36 @@ const CARBON_MOLAR_MASS_G = 12.011;
 /** Excess air of a point from excessAir or φ, checked like `combustion` (lean or stoichiometric only). */
 export function excessAirOf(m: FiredModel, excessAir: number | undefined, equivalenceRatio: number | undefined): number {
   if (excessAir !== undefined && equivalenceRatio !== undefined) {
-    throw new RxthermError("INVALID_ARGUMENT", `${m.fn} takes excessAir or equivalenceRatio, not both`, { excessAir, equivalenceRatio });
+    throw new RxthermError("INVALID_ARGUMENT", `${m.fn} takes excessAir or equivalenceRatio, not both`, {
+      path: "input.equivalenceRatio",
+      excessAir: detailValue(excessAir),
+      equivalenceRatio: detailValue(equivalenceRatio),
+    });
   }
-  checkMixtureLimits(m.fn, { excessAir, equivalenceRatio }, m.allowExtremeMixture);
+  try {
+    checkMixtureLimits(m.fn, { excessAir, equivalenceRatio }, m.allowExtremeMixture);
+  } catch (e) {
+    // name the caller's field (checkMixtureLimits names its own argument)
+    if (e instanceof RxthermError && typeof e.details.path === "string") {
+      throw new RxthermError(e.code, e.message.replace(/^\[rxtherm\] /, ""), { ...e.details, path: e.details.path.replace(/^values\./, "input.") });
+    }
+    throw e;
+  }
   let e = 0;
   if (equivalenceRatio !== undefined) {
     if (typeof equivalenceRatio !== "number" || !Number.isFinite(equivalenceRatio) || !(equivalenceRatio > 0) || equivalenceRatio > 1) {
-      throw new RxthermError("INVALID_ARGUMENT", `${m.fn} requires 0 < equivalenceRatio <= 1 (complete combustion), got ${String(equivalenceRatio)}`, { equivalenceRatio });
+      throw new RxthermError("INVALID_ARGUMENT", `${m.fn} requires 0 < equivalenceRatio <= 1 (complete combustion), got ${describeValue(equivalenceRatio)}`, {
+        path: "input.equivalenceRatio",
+        equivalenceRatio: detailValue(equivalenceRatio),
+      });
     }
     e = 1 / equivalenceRatio - 1;
   } else if (excessAir !== undefined) {
     if (typeof excessAir !== "number" || !Number.isFinite(excessAir) || excessAir < 0) {
-      throw new RxthermError("INVALID_ARGUMENT", `${m.fn} requires excessAir >= 0 (a fraction: 0.2 = 20 %), got ${String(excessAir)}`, { excessAir });
+      throw new RxthermError("INVALID_ARGUMENT", `${m.fn} requires excessAir >= 0 (a fraction: 0.2 = 20 %), got ${describeValue(excessAir)}`, {
+        path: "input.excessAir",
+        excessAir: detailValue(excessAir),
+      });
     }
     e = excessAir;
   }
@@ -365,7 +396,10 @@ function isWater(sp: Species): boolean {
 
 function temperature(fn: string, name: string, T: number): number {
   if (typeof T !== "number" || !Number.isFinite(T) || !(T > 0)) {
-    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${name} as an absolute temperature > 0 K, got ${String(T)}`, { [name]: T });
+    throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${name} as an absolute temperature > 0 K, got ${describeValue(T)}`, {
+      path: `input.${name}`,
+      [name]: detailValue(T),
+    });
   }
   return T;
 }
