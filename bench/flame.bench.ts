@@ -19,7 +19,7 @@ import { flameTemperatureSweep } from "../src/flame/flameTemperatureSweep.js";
 import { DEFAULT_FLAME_PRODUCTS } from "../src/flame/flameDefaults.js";
 import { species } from "../src/species/species.js";
 import { GRI_MECH_30_NASA7_SPECIES } from "../src/species/data/griMech30Nasa7.js";
-import { formatTime, measure, report, runPeer, type BenchResult } from "./harness.js";
+import { formatTime, growthSlope, measure, report, runPeer, type BenchResult } from "./harness.js";
 
 const CO2 = species("CO2(g)");
 const H2O = species("H2O(g)");
@@ -170,17 +170,6 @@ export function equilibriumGrowth(): void {
   const sizes = [20, 50, 100, 200];
   const base = fastest("12 default products", small);
   const results = sizes.map((n) => fastest(`${n} products`, solve(n)));
-  // least-squares slope of ln t against ln n
-  const x = sizes.map(Math.log);
-  const y = results.map((r) => Math.log(r.medianNs));
-  const mx = x.reduce((a, b) => a + b, 0) / x.length;
-  const my = y.reduce((a, b) => a + b, 0) / y.length;
-  let sxy = 0;
-  let sxx = 0;
-  for (let i = 0; i < x.length; i++) {
-    sxy += (x[i]! - mx) * (y[i]! - my);
-    sxx += (x[i]! - mx) ** 2;
-  }
   const curve = sizes.map((n, i) => `${n}: ${formatTime(results[i]!.medianNs)} (${(results[i]!.medianNs / base.medianNs).toFixed(1)}×)`).join(", ");
-  console.log(`equilibrium cost growth, fastest batch (species: time, ratio to the 12 default products at ${formatTime(base.medianNs)}): ${curve} | fitted slope of log t vs log n: ${(sxy / sxx).toFixed(2)}`);
+  console.log(`equilibrium cost growth, fastest batch (species: time, ratio to the 12 default products at ${formatTime(base.medianNs)}): ${curve} | fitted slope of log t vs log n: ${growthSlope(sizes.map((size, i) => ({ size, medianNs: results[i]!.medianNs }))).toFixed(2)}`);
 }
