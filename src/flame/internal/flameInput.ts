@@ -103,7 +103,7 @@ export function toFlameResult(setup: FlameSetup, point: FlamePoint, r: FlamePoin
   out.condensed = r.condensed;
   out.oxidizer = r.oxidizerMoles;
   out.equivalenceRatio = point.phi;
-  out.theoreticalO2 = setup.theoreticalO2;
+  out.theoreticalO2 = setup.reactants.theoreticalO2;
   out.mode = setup.mode;
   out.process = setup.constantVolume ? "constant-volume" : "constant-pressure";
   out.reactantEnergy = r.reactantEnergy;

@@ -59,20 +59,11 @@ export interface FlameSetup {
   readonly library: Library | undefined;
   readonly mode: "complete" | "equilibrium";
   readonly constantVolume: boolean;
-  readonly fuel: readonly Member[];
-  readonly oxidizer: readonly Member[];
-  readonly diluent: readonly Member[];
-  /** Theoretical O2 of the fuel, mol (per the fuel amounts given). */
-  readonly theoreticalO2: number;
-  /** O2 that one unit of oxidizer supplies, mol. */
-  readonly o2PerOxidizerUnit: number;
   /** Equilibrium product keys (equilibrium mode). */
   readonly productKeys: readonly string[];
-  /** The resolved reactants (shared between setups of the same content). */
+  /** The resolved reactants, their stoichiometry and the lazily resolved product species (shared between setups of the same content). */
   readonly reactants: Reactants;
   readonly lim: EngineLimits;
-  /** Lazily resolved species of the products (shared with every setup of these reactants). */
-  readonly cache: Map<string, Species>;
   engine: Engine | null;
   lastT: number;
   lastCompleteT: number;
@@ -307,13 +298,9 @@ export function prepareFlame(args: {
   const r = reactantsOf(fn, args.fuel, oxFlows, args.diluent, library);
   const setup: FlameSetup = {
     fn, library, mode: args.mode, constantVolume: args.constantVolume,
-    fuel: r.fuel, oxidizer: r.oxidizer, diluent: r.diluent,
-    theoreticalO2: r.theoreticalO2,
-    o2PerOxidizerUnit: r.o2PerOxidizerUnit,
     reactants: r,
     productKeys: args.products,
     lim: args.lim,
-    cache: r.products,
     engine: null,
     lastT: Number.NaN,
     lastCompleteT: Number.NaN,
@@ -336,7 +323,7 @@ const OXYGEN: Flows = Object.freeze({ "O2(g)": 1 });
 
 /** Oxidizer units for an equivalence ratio. */
 function oxidizerUnits(s: FlameSetup, phi: number): number {
-  return s.theoreticalO2 / (phi * s.o2PerOxidizerUnit);
+  return s.reactants.theoreticalO2 / (phi * s.reactants.o2PerOxidizerUnit);
 }
 
 /** Solve one point of a prepared problem, warm-starting from the previous point. */
@@ -344,9 +331,9 @@ export function solveFlamePoint(s: FlameSetup, pt: FlamePoint): FlamePointResult
   const units = oxidizerUnits(s, pt.phi);
   // reactant enthalpy and Σ n R T of the gases (for the vessel volume)
   const acc: StreamSums = { H: 0, nRT: 0, extrapolated: [] };
-  addStream(s.fn, "fuel", acc, s.fuel, 1, pt.fuelT, s.lim.extrapolate);
-  addStream(s.fn, "oxidizer", acc, s.oxidizer, units, pt.oxidizerT, s.lim.extrapolate);
-  addStream(s.fn, "diluent", acc, s.diluent, 1, pt.diluentT, s.lim.extrapolate);
+  addStream(s.fn, "fuel", acc, s.reactants.fuel, 1, pt.fuelT, s.lim.extrapolate);
+  addStream(s.fn, "oxidizer", acc, s.reactants.oxidizer, units, pt.oxidizerT, s.lim.extrapolate);
+  addStream(s.fn, "diluent", acc, s.reactants.diluent, 1, pt.diluentT, s.lim.extrapolate);
 
   // constant volume: V = Σ n R T_in / P; the balance is on U = H − (n R T) for gases
   const volume = acc.nRT / pt.P;
@@ -357,7 +344,7 @@ export function solveFlamePoint(s: FlameSetup, pt: FlamePoint): FlamePointResult
     els.set(rx.elements[i]!, rx.fuelElements[i]! + units * rx.oxidizerElements[i]! + rx.diluentElements[i]!);
   }
   const oxidizerMoles: Record<string, number> = {};
-  for (const m of s.oxidizer) oxidizerMoles[m.key] = (oxidizerMoles[m.key] ?? 0) + m.n * units;
+  for (const m of s.reactants.oxidizer) oxidizerMoles[m.key] = (oxidizerMoles[m.key] ?? 0) + m.n * units;
 
   let completeT: number | null = null;
   let complete: CompleteSolution | null = null;
@@ -444,10 +431,10 @@ export function solveFlamePoint(s: FlameSetup, pt: FlamePoint): FlamePointResult
 }
 
 function cached(s: FlameSetup, key: string): Species {
-  let sp = s.cache.get(key);
+  let sp = s.reactants.products.get(key);
   if (!sp) {
     sp = flameSpecies(s.fn, key, s.library);
-    s.cache.set(key, sp);
+    s.reactants.products.set(key, sp);
   }
   return sp;
 }
