@@ -548,7 +548,7 @@ function readCount(s: string, i: number, end: number, exact: boolean, leading = 
     v = v * 10 + (c - 48);
     i++;
   }
-  if (i + 1 < end && c === 46 && isDigit(s.charCodeAt(i + 1)) && (leading || !isHydrateDot(s, i, end))) {
+  if (i + 1 < end && c === 46 && isDigit(s.charCodeAt(i + 1)) && (leading || v === 0 || !isHydrateDot(s, i, end))) {
     if (!exact) return -1;
     i++;
     const fracStart = i;
@@ -800,9 +800,12 @@ function describe(v: unknown): string {
  * True when the `.` at `dot` (between two digits) joins a hydrate, `CuSO4.5H2O`: the digits after it
  * form a whole number followed by `H2O` or `D2O` that is not the start of a longer formula (`H2O2`, `H2Os`).
  * Water of hydration is by far the most common use of a dot after a count in plant and supplier
- * documents, and reading it as a decimal (O 4.5) would silently give a wrong molar mass.
+ * documents, and reading it as a decimal (O 4.5) would silently give a wrong molar mass. A hydrate count
+ * never starts with 0, so `Fe1.05H2O` is Fe 1.05 (and the caller reads `H0.5H2O` as H 0.5: a count of 0
+ * before a hydrate would be invalid anyway).
  */
 function isHydrateDot(s: string, dot: number, end: number): boolean {
+  if (s.charCodeAt(dot + 1) === 48 /* 0 */) return false;
   let j = dot + 1;
   while (j < end && isDigit(s.charCodeAt(j))) j++;
   if (j === dot + 1 || j + 3 > end) return false;

@@ -20,12 +20,28 @@ export async function checkProperty(
   params?: fc.Parameters<never>,
 ): Promise<void> {
   const arbs = arbitraries as unknown as [fc.Arbitrary<unknown>];
+  params = withEnvironment(params);
   const run = predicate as unknown as (...v: unknown[]) => boolean | void | Promise<boolean | void>;
   if (run.constructor.name === "AsyncFunction") {
     await fc.assert(fc.asyncProperty(...arbs, async (...v: unknown[]) => (await run(...v)) !== false), params as never);
   } else {
     fc.assert(fc.property(...arbs, (...v: unknown[]) => run(...v) !== false), params as never);
   }
+}
+
+/**
+ * Exploration knobs from the environment: `RXTHERM_FC_RUNS` multiplies every property's run count
+ * (default 1), `RXTHERM_FC_SEED` replays one seed. Seeds are random by default, so every run explores.
+ */
+function withEnvironment<T>(params?: fc.Parameters<T>): fc.Parameters<T> | undefined {
+  const env = typeof process === "undefined" ? {} : process.env;
+  const factor = Number(env["RXTHERM_FC_RUNS"] ?? 1);
+  const seed = env["RXTHERM_FC_SEED"];
+  if (factor === 1 && seed === undefined) return params;
+  const out: fc.Parameters<T> = { ...params };
+  if (Number.isFinite(factor) && factor > 0) out.numRuns = Math.ceil((params?.numRuns ?? 100) * factor);
+  if (seed !== undefined) out.seed = Number(seed);
+  return out;
 }
 
 /** `test.prop(arbitraries, params)(name, predicate, timeout)`: one vitest test running a fast-check property. */

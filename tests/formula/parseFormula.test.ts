@@ -41,6 +41,10 @@ describe("parseFormula", () => {
   });
 
   it("parseFormula(text) reads decimal counts exactly", () => {
+    // a count that starts "0." or a fraction that starts with 0 is never a hydrate (docs/formula.md; common practice)
+    expect(el("(H0.001H2O)2·H")).toEqual({ H: 5.002, O: 2 });
+    expect(el("Fe1.05H2O")).toEqual({ Fe: 1.05, H: 2, O: 1 });
+    expect(el("CuSO4.5H2O")).toEqual({ Cu: 1, S: 1, O: 9, H: 10 });
     expect(el("Fe0.947O")).toEqual({ Fe: 0.947, O: 1 });
     expect(el("(Fe0.947O)3").Fe).toBe(2.841); // 0.947 × 3 in floating point is 2.8409999999999997
     expect(0.947 * 3).not.toBe(2.841);
