@@ -18,7 +18,10 @@ export default defineConfig([
     treeshake: true,
     target: "es2022",
     platform: "neutral",
-    external: ["decimal.js", "zod"],
+    external: ["decimal.js"],
+    // zod mini (the species-data schemas) goes inside, tree-shaken to the few kilobytes the schemas use:
+    // loading the zod package from node_modules would cost more than the rest of the import together
+    noExternal: ["zod"],
   },
   // the command line `rxtherm` (package.json "bin"): Node only, one ESM file with its shebang
   {

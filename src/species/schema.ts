@@ -1,6 +1,10 @@
 /**
  * The zod schema of species data files (JSON) and the JSON Schema generated from it.
  *
+ * Written with zod mini, whose functions tree-shake: the published dist carries only the parts these
+ * schemas use (a few kilobytes) instead of loading the zod package at import, which took longer than
+ * everything else the import does. The schemas work with full zod too (composition, `z.toJSONSchema`).
+ *
  * Units are carried by the field names and are fixed: formation enthalpy in kJ/mol
  * (`hf298KJPerMol`, as the tables print it), entropy and Cp in J/(mol·K), temperatures in K.
  * The schema checks the structure; {@link validateSpeciesData} adds the checks a structural
@@ -14,50 +18,54 @@
  *
  * @module
  */
-import { z } from "zod";
+import * as z from "zod/mini";
+import type { $ZodIssue, ParseContext } from "zod/v4/core";
+import en from "zod/v4/locales/en.js";
 
 /** Every schema, built together on first use so that they share their parts. */
 function buildSchemas() {
-  // zod 4 numbers reject NaN and ±Infinity
+  const d = (text: string) => z.describe(text);
+  // zod numbers reject NaN and ±Infinity
   const finite = z.number();
-  const positiveK = z.number().positive().describe("temperature in K (> 0)");
-  const sourceId = z.string().min(1).describe("id of a citation in the file's `sources` or in the built-in registry");
+  const positiveK = z.number().check(z.positive(), d("temperature in K (> 0)"));
+  const sourceId = z.string().check(z.minLength(1), d("id of a citation in the file's `sources` or in the built-in registry"));
+  const text1 = () => z.string().check(z.minLength(1));
 
   const shomate = z.strictObject({
     form: z.literal("shomate"),
     A: finite, B: finite, C: finite, D: finite, E: finite,
-    F: finite.optional().describe("kJ/mol"),
-    G: finite.optional().describe("J/(mol·K)"),
-    H: finite.optional().describe("kJ/mol"),
-  }).describe("Shomate: Cp = A + B·t + C·t² + D·t³ + E/t², t = T/1000 K, Cp in J/(mol·K)");
+    F: z.optional(z.number().check(d("kJ/mol"))),
+    G: z.optional(z.number().check(d("J/(mol·K)"))),
+    H: z.optional(z.number().check(d("kJ/mol"))),
+  }).check(d("Shomate: Cp = A + B·t + C·t² + D·t³ + E/t², t = T/1000 K, Cp in J/(mol·K)"));
 
   const polynomial = z.strictObject({
     form: z.literal("polynomial"),
-    a: finite, b: finite.optional(), c: finite.optional(), d: finite.optional(), e: finite.optional(),
-    temperatureUnit: z.enum(["K", "C"]).describe("the temperature variable: K or °C"),
-    energyUnit: z.enum(["J", "kJ"]).describe("Cp in J/(mol·K) or kJ/(mol·K)"),
-  }).describe("Cp = a + b·T + c·T² + d·T³ + e/T²");
+    a: finite, b: z.optional(finite), c: z.optional(finite), d: z.optional(finite), e: z.optional(finite),
+    temperatureUnit: z.enum(["K", "C"]).check(d("the temperature variable: K or °C")),
+    energyUnit: z.enum(["J", "kJ"]).check(d("Cp in J/(mol·K) or kJ/(mol·K)")),
+  }).check(d("Cp = a + b·T + c·T² + d·T³ + e/T²"));
 
   const nasa7 = z.strictObject({
     form: z.literal("nasa7"),
-    a: z.array(finite).length(7).describe("a1..a7, T in K"),
-  }).describe("NASA 7-coefficient polynomial: Cp/R = a1 + a2·T + a3·T² + a4·T³ + a5·T⁴");
+    a: z.array(finite).check(z.length(7), d("a1..a7, T in K")),
+  }).check(d("NASA 7-coefficient polynomial: Cp/R = a1 + a2·T + a3·T² + a4·T³ + a5·T⁴"));
 
   const nasa9 = z.strictObject({
     form: z.literal("nasa9"),
-    a: z.array(finite).length(9).describe("a1..a7 then b1, b2, T in K"),
-  }).describe("NASA 9-coefficient polynomial: Cp/R = a1/T² + a2/T + a3 + a4·T + a5·T² + a6·T³ + a7·T⁴");
+    a: z.array(finite).check(z.length(9), d("a1..a7 then b1, b2, T in K")),
+  }).check(d("NASA 9-coefficient polynomial: Cp/R = a1/T² + a2/T + a3 + a4·T + a5·T² + a6·T³ + a7·T⁴"));
 
   const constant = z.strictObject({
     form: z.literal("constant"),
     cpJPerMolK: finite,
-  }).describe("constant Cp in J/(mol·K)");
+  }).check(d("constant Cp in J/(mol·K)"));
 
   const tabulated = z.strictObject({
     form: z.literal("tabulated"),
-    temperaturesK: z.array(positiveK).min(2),
-    cpJPerMolK: z.array(finite).min(2),
-  }).describe("(T, Cp) points interpolated linearly");
+    temperaturesK: z.array(positiveK).check(z.minLength(2)),
+    cpJPerMolK: z.array(finite).check(z.minLength(2)),
+  }).check(d("(T, Cp) points interpolated linearly"));
 
   const cpForm = z.discriminatedUnion("form", [shomate, polynomial, nasa7, nasa9, constant, tabulated]);
 
@@ -65,57 +73,69 @@ function buildSchemas() {
     TminK: positiveK,
     TmaxK: positiveK,
     cp: cpForm,
-    source: sourceId.optional(),
-    note: z.string().optional(),
+    source: z.optional(sourceId),
+    note: z.optional(z.string()),
   });
 
   const transition = z.strictObject({
     TK: positiveK,
-    dHKJPerMol: finite.describe("transition enthalpy, kJ/mol"),
-    label: z.string().optional(),
+    dHKJPerMol: z.number().check(d("transition enthalpy, kJ/mol")),
+    label: z.optional(z.string()),
     source: sourceId,
   });
 
   const speciesEntry = z.strictObject({
-    key: z.string().min(1).max(64).describe("formula with phase, e.g. CO2(g); isomers may carry a prefix, e.g. n-C4H10(g)"),
-    formula: z.string().min(1).max(64),
+    key: z.string().check(z.minLength(1), z.maxLength(64),
+      d("formula with phase, e.g. CO2(g); isomers may carry a prefix, e.g. n-C4H10(g)")),
+    formula: z.string().check(z.minLength(1), z.maxLength(64)),
     phase: z.enum(["g", "l", "s", "aq", "cr"]),
-    name: z.string().min(1).optional(),
-    aliases: z.array(z.string().min(1)).optional(),
-    cas: z.string().regex(/^\d{2,7}-\d{2}-\d$/).optional(),
-    dataset: z.string().min(1).max(32).regex(/^[a-z0-9][a-z0-9._-]*$/).optional()
-      .describe("label of the data set this entry comes from, e.g. nist-janaf, gri-mech-3.0"),
-    alternative: z.boolean().optional()
-      .describe("true: selectable only by its dataset, not the default for its key"),
-    hf298KJPerMol: finite.describe("standard enthalpy of formation at 298.15 K, kJ/mol"),
+    name: z.optional(text1()),
+    aliases: z.optional(z.array(text1())),
+    cas: z.optional(z.string().check(z.regex(/^\d{2,7}-\d{2}-\d$/))),
+    dataset: z.optional(z.string().check(z.minLength(1), z.maxLength(32), z.regex(/^[a-z0-9][a-z0-9._-]*$/),
+      d("label of the data set this entry comes from, e.g. nist-janaf, gri-mech-3.0"))),
+    alternative: z.optional(z.boolean().check(d("true: selectable only by its dataset, not the default for its key"))),
+    hf298KJPerMol: z.number().check(d("standard enthalpy of formation at 298.15 K, kJ/mol")),
     hf298Source: sourceId,
-    hf298UncertaintyKJPerMol: z.number().nonnegative().optional(),
-    s298JPerMolK: finite.describe("standard molar entropy at 298.15 K and 1 bar, J/(mol·K)"),
+    hf298UncertaintyKJPerMol: z.optional(z.number().check(z.nonnegative())),
+    s298JPerMolK: z.number().check(d("standard molar entropy at 298.15 K and 1 bar, J/(mol·K)")),
     s298Source: sourceId,
     heatCapacity: z.strictObject({
       source: sourceId,
-      ranges: z.array(cpRange).min(1),
+      ranges: z.array(cpRange).check(z.minLength(1)),
     }),
-    transitions: z.array(transition).optional(),
-    note: z.string().optional(),
+    transitions: z.optional(z.array(transition)),
+    note: z.optional(z.string()),
   });
 
   const unitsBlock = z.strictObject({
-    hf298: z.literal("kJ/mol").optional(),
-    s298: z.literal("J/(mol K)").optional(),
-    cp: z.literal("J/(mol K)").optional(),
-    temperature: z.literal("K").optional(),
+    hf298: z.optional(z.literal("kJ/mol")),
+    s298: z.optional(z.literal("J/(mol K)")),
+    cp: z.optional(z.literal("J/(mol K)")),
+    temperature: z.optional(z.literal("K")),
   });
 
   const speciesData = z.strictObject({
-    $schema: z.string().optional(),
-    description: z.string().optional(),
-    units: unitsBlock.optional(),
-    sources: z.record(z.string().min(1), z.string().min(1)),
+    $schema: z.optional(z.string()),
+    description: z.optional(z.string()),
+    units: z.optional(unitsBlock),
+    sources: z.record(text1(), text1()),
     species: z.array(speciesEntry),
   });
 
   return { cpForm, cpRange, transition, speciesEntry, unitsBlock, speciesData };
+}
+
+let english: ParseContext<$ZodIssue> | undefined;
+/**
+ * Parse options that give English issue messages (full zod's default; zod mini ships without
+ * messages). Passed per call, never installed in zod's configuration, which all copies of zod in
+ * a process share: a user's own locale setting stays untouched.
+ * @internal
+ */
+export function englishMessages(): ParseContext<$ZodIssue> {
+  english ??= { error: en().localeError };
+  return english;
 }
 
 type Schemas = ReturnType<typeof buildSchemas>;

@@ -3,7 +3,7 @@ import { createHeatCapacity, MAX_CP_RANGES, MAX_CP_TABLE_POINTS } from "../heat-
 import type { CpRange } from "../heat-capacity/types.js";
 import { readSpeciesFormula } from "./internal/speciesFormula.js";
 import { SOURCES } from "./citation.js";
-import { speciesDataSchema, speciesEntrySchema, type SpeciesData, type SpeciesEntry } from "./schema.js";
+import { englishMessages, speciesDataSchema, speciesEntrySchema, type SpeciesData, type SpeciesEntry } from "./schema.js";
 import { optionsOf } from "../guards.js";
 
 /**
@@ -139,7 +139,7 @@ export function validateSpeciesData(data: unknown, options: ValidateSpeciesDataO
   findUnsafeKeys(data, [], issues, new Set());
   if (issues.length > 0) throw fail(issues);
 
-  const whole = speciesDataSchema.safeParse(data);
+  const whole = speciesDataSchema.safeParse(data, englishMessages());
   let parsed: SpeciesData | undefined;
   let entries: { index: number; entry: SpeciesEntry }[] = [];
   let sources: Record<string, string> = {};
@@ -153,7 +153,7 @@ export function validateSpeciesData(data: unknown, options: ValidateSpeciesDataO
     const raw = (typeof data === "object" && data !== null ? data : {}) as Record<string, unknown>;
     const list = Array.isArray(raw["species"]) ? (raw["species"] as unknown[]) : [];
     list.forEach((e, index) => {
-      const r = speciesEntrySchema.safeParse(e);
+      const r = speciesEntrySchema.safeParse(e, englishMessages());
       if (r.success) entries.push({ index, entry: r.data });
     });
     const src = raw["sources"];

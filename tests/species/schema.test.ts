@@ -75,19 +75,19 @@ describe("validation limits (the @examples)", async () => {
 describe("schemas built on first use (the exported constants stand in for them)", async () => {
   const m = await import("../../src/species/schema.js");
   const { z } = await import("zod");
-  it("behave as zod schemas: instanceof, shape, options, composition and JSON Schema", () => {
-    expect(m.speciesDataSchema instanceof z.ZodObject).toBe(true);
-    expect((m.cpFormSchema as object) instanceof z.ZodType).toBe(true);
-    expect((m.cpFormSchema as object) instanceof z.ZodObject).toBe(false);
+  it("behave as zod schemas (zod mini): instanceof, shape, options, composition and JSON Schema", () => {
+    expect(m.speciesDataSchema instanceof z.core.$ZodObject).toBe(true);
+    expect((m.cpFormSchema as object) instanceof z.core.$ZodType).toBe(true);
+    expect((m.cpFormSchema as object) instanceof z.core.$ZodObject).toBe(false);
     expect(Object.keys(m.speciesDataSchema.shape)).toEqual(["$schema", "description", "units", "sources", "species"]);
-    expect(m.cpFormSchema.options).toHaveLength(6);
+    expect(m.cpFormSchema.def.options).toHaveLength(6);
     expect("safeParse" in m.speciesEntrySchema).toBe(true);
-    // a user's own schema built from ours checks with our rules and paths
-    const mine = z.object({ ranges: z.array(m.cpRangeSchema), extra: m.unitsBlockSchema.optional() });
+    // a user's own schema (full zod) built from ours checks with our rules and paths
+    const mine = z.object({ ranges: z.array(m.cpRangeSchema), extra: z.optional(m.unitsBlockSchema) });
     const bad = mine.safeParse({ ranges: [{ TminK: 300, TmaxK: 400, cp: { form: "constant", cpJPerMolK: "29" } }] });
     expect(bad.success).toBe(false);
     expect(bad.error!.issues[0]!.path).toEqual(["ranges", 0, "cp", "cpJPerMolK"]);
-    expect(m.speciesEntrySchema.partial().safeParse({ key: "N2(g)" }).success).toBe(true);
+    expect(z.object(m.speciesEntrySchema.shape).partial().safeParse({ key: "N2(g)" }).success).toBe(true);
     const json = JSON.stringify(z.toJSONSchema(z.array(m.transitionSchema)));
     expect(json).toContain("transition enthalpy, kJ/mol"); // the description inside survives
   });
