@@ -1,15 +1,16 @@
 /**
- * Heat-duty case files: the zod schema, the JSON Schema generated from it (published as
+ * Heat-duty case files: the zod (mini) schema, the JSON Schema generated from it (published as
  * `docs/case-file.schema.json`), and the reader that validates a case and converts its units.
  *
  * @module
  */
-import { z } from "zod";
+import * as z from "zod/mini";
 import { RxthermError } from "../errors.js";
 import type { HeatDutyInput, HeatDutyOptions } from "../energy/heatDuty.js";
 import type { Flows, Stream } from "../extent/types.js";
 import { molarMass } from "../formula/molarMass.js";
 import { builtInLibrary } from "../species/builtInLibrary.js";
+import { englishMessages } from "../species/schema.js";
 import type { Library } from "../species/types.js";
 import { toMolPerSecond, type FlowUnit, type PowerUnit } from "../units.js";
 import { FLOW_UNITS, POWER_UNITS, PRESSURE_PATTERN, TEMPERATURE_PATTERN, readPressure, readTemperature } from "./internal/quantity.js";
@@ -39,7 +40,7 @@ export interface CaseFile {
   readonly names: { readonly inlet: readonly string[]; readonly outlet: readonly string[] };
 }
 
-let schema: z.ZodType | undefined;
+let schema: z.ZodMiniType | undefined;
 
 /**
  * The zod schema of a heat-duty case file, built on first use (so importing the command line costs no schema
@@ -50,38 +51,39 @@ let schema: z.ZodType | undefined;
  * @example
  * caseFileSchema().safeParse({ inlet: [{ T: "25C", flows: { "N2(g)": 1 } }], outlet: [{ T: 500, flows: { "N2(g)": 1 } }] }).success // => true
  */
-export function caseFileSchema(): z.ZodType {
+export function caseFileSchema(): z.ZodMiniType {
   if (schema !== undefined) return schema;
+  const d = (text: string) => z.describe(text);
   const temperature = z.union([
-    z.number().positive().describe("temperature in K"),
-    z.string().regex(new RegExp(TEMPERATURE_PATTERN), "expected a temperature such as \"25C\", \"77F\" or \"298.15K\" (a bare number is K)").describe("temperature with unit: K, C, °C, F, °F or R, e.g. \"25C\""),
+    z.number().check(z.positive(), d("temperature in K")),
+    z.string().check(z.regex(new RegExp(TEMPERATURE_PATTERN), "expected a temperature such as \"25C\", \"77F\" or \"298.15K\" (a bare number is K)"), d("temperature with unit: K, C, °C, F, °F or R, e.g. \"25C\"")),
   ]);
   const pressure = z.union([
-    z.number().positive().describe("pressure in Pa"),
-    z.string().regex(new RegExp(PRESSURE_PATTERN), "expected a pressure such as \"2bar\", \"1atm\", \"30psi\" or \"250kPa\" (a bare number is Pa)").describe("pressure with unit: Pa, kPa, MPa, bar, atm or psi, e.g. \"2bar\""),
+    z.number().check(z.positive(), d("pressure in Pa")),
+    z.string().check(z.regex(new RegExp(PRESSURE_PATTERN), "expected a pressure such as \"2bar\", \"1atm\", \"30psi\" or \"250kPa\" (a bare number is Pa)"), d("pressure with unit: Pa, kPa, MPa, bar, atm or psi, e.g. \"2bar\"")),
   ]);
-  const flowUnit = z.enum(FLOW_UNITS as [FlowUnit, ...FlowUnit[]]);
+  const flowUnit = () => z.enum(FLOW_UNITS as [FlowUnit, ...FlowUnit[]]);
   const stream = z.strictObject({
-    name: z.string().optional().describe("label printed in the results"),
+    name: z.optional(z.string()).check(d("label printed in the results")),
     T: temperature,
-    P: pressure.optional().describe("pressure (default 1 bar; enthalpies of ideal gases do not depend on it)"),
-    flowUnit: flowUnit.optional().describe("unit of this stream's flows (default: the file's flowUnit)"),
-    flows: z.record(z.string().min(1), z.number().nonnegative()).describe("species key with phase → flow, e.g. {\"CH4(g)\": 72}"),
+    P: z.optional(pressure).check(d("pressure (default 1 bar; enthalpies of ideal gases do not depend on it)")),
+    flowUnit: z.optional(flowUnit()).check(d("unit of this stream's flows (default: the file's flowUnit)")),
+    flows: z.record(z.string().check(z.minLength(1)), z.number().check(z.nonnegative())).check(d("species key with phase → flow, e.g. {\"CH4(g)\": 72}")),
   });
   schema = z.strictObject({
-    $schema: z.string().optional().describe("URL or path of this JSON Schema, for editors"),
-    title: z.string().optional(),
-    description: z.string().optional(),
-    flowUnit: flowUnit.optional().describe("unit of the stream flows (default mol/s); mass units use each species' molar mass, Nm³ the ideal gas at 0 °C, 101.325 kPa"),
-    inlet: z.array(stream).min(1).describe("streams entering the unit"),
-    outlet: z.array(stream).min(1).describe("streams leaving the unit"),
-    reactions: z.array(z.string().min(1)).optional().describe("balanced reactions, for the heat-of-reaction method by extents"),
-    extents: z.array(z.number()).optional().describe("extent of each reaction, in extentUnit"),
-    extentUnit: z.enum(EXTENT_UNITS).optional().describe("unit of the extents (default mol/s)"),
-    method: z.enum(["formation", "reaction"]).optional().describe("method that gives the duty (default formation; both are computed)"),
-    extrapolate: z.boolean().optional().describe("allow temperatures outside the species' data ranges (default false)"),
-    dutyUnit: z.enum(POWER_UNITS as [PowerUnit, ...PowerUnit[]]).optional().describe("unit of the printed duty (default kW)"),
-  }).describe("rxtherm heat-duty case file: streams in and out of a unit, for rxtherm duty");
+    $schema: z.optional(z.string()).check(d("URL or path of this JSON Schema, for editors")),
+    title: z.optional(z.string()),
+    description: z.optional(z.string()),
+    flowUnit: z.optional(flowUnit()).check(d("unit of the stream flows (default mol/s); mass units use each species' molar mass, Nm³ the ideal gas at 0 °C, 101.325 kPa")),
+    inlet: z.array(stream).check(z.minLength(1), d("streams entering the unit")),
+    outlet: z.array(stream).check(z.minLength(1), d("streams leaving the unit")),
+    reactions: z.optional(z.array(z.string().check(z.minLength(1)))).check(d("balanced reactions, for the heat-of-reaction method by extents")),
+    extents: z.optional(z.array(z.number())).check(d("extent of each reaction, in extentUnit")),
+    extentUnit: z.optional(z.enum(EXTENT_UNITS)).check(d("unit of the extents (default mol/s)")),
+    method: z.optional(z.enum(["formation", "reaction"])).check(d("method that gives the duty (default formation; both are computed)")),
+    extrapolate: z.optional(z.boolean()).check(d("allow temperatures outside the species' data ranges (default false)")),
+    dutyUnit: z.optional(z.enum(POWER_UNITS as [PowerUnit, ...PowerUnit[]])).check(d("unit of the printed duty (default kW)")),
+  }).check(d("rxtherm heat-duty case file: streams in and out of a unit, for rxtherm duty"));
   return schema;
 }
 
@@ -119,7 +121,7 @@ export function readCaseFile(text: string, library?: Library): CaseFile {
   } catch (e) {
     throw invalid([{ path: "$", message: `not valid JSON: ${(e as Error).message}` }]);
   }
-  const parsed = caseFileSchema().safeParse(data);
+  const parsed = caseFileSchema().safeParse(data, englishMessages());
   if (!parsed.success) {
     throw invalid(parsed.error.issues.map((i) => ({ path: jsonPath(i.path), message: i.message.charAt(0).toLowerCase() + i.message.slice(1) })));
   }
