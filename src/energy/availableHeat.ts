@@ -3,6 +3,7 @@ import { finiteResult } from "../guards.js";
 import { evaluateFired, excessAirOf, flueTemperature, prepareFired } from "./internal/firedModel.js";
 import type { AvailableHeatInput } from "./firedTypes.js";
 import { flueGasDewPoint } from "./flueGasDewPoint.js";
+import type { ExtrapolatedPoint } from "../species/noteExtrapolation.js";
 
 export type { AvailableHeatInput, UnburnedCarbon } from "./firedTypes.js";
 
@@ -72,7 +73,7 @@ export interface AvailableHeatResult {
   /** Energy basis of the result. */
   readonly per: "mol" | "kg" | "Nm3";
   /** Species evaluated outside their data range (only with `extrapolate`), with the temperature, K. */
-  readonly extrapolated: readonly { readonly species: string; readonly T: number }[];
+  readonly extrapolated: readonly ExtrapolatedPoint[];
 }
 
 /**
@@ -187,7 +188,7 @@ export function availableHeat(input: AvailableHeatInput): AvailableHeatResult {
     ...(acidDewPointK !== undefined ? { acidDewPointK } : {}),
     warnings,
     per: m.per,
-    extrapolated: m.extrapolated.map((x) => ({ ...x })),
+    extrapolated: [...m.extrapolated], // frozen points
   }, fn);
 }
 

@@ -2,6 +2,7 @@ import { RxthermError } from "../errors.js";
 import { MAX_INPUT_ARRAY_LENGTH, describeValue, finiteResult, requireArray } from "../guards.js";
 import { detailValue, evaluateFired, excessAirOf, flueTemperature, prepareFired } from "./internal/firedModel.js";
 import type { AvailableHeatInput } from "./firedTypes.js";
+import type { ExtrapolatedPoint } from "../species/noteExtrapolation.js";
 
 /**
  * Which setting {@link efficiencyCurve} varies, and over which values.
@@ -41,7 +42,7 @@ export interface EfficiencyCurveResult {
   /** HHV of the fuel. */
   readonly hhv: number;
   /** Species evaluated outside their data range (only with `extrapolate`). */
-  readonly extrapolated: readonly { readonly species: string; readonly T: number }[];
+  readonly extrapolated: readonly ExtrapolatedPoint[];
 }
 
 /**
@@ -131,7 +132,7 @@ export function efficiencyCurve(input: Omit<AvailableHeatInput, "flueT"> & { flu
   return finiteResult({
     parameter, values: values as number[], availableHeat, stackLoss, efficiencyLHV, efficiencyHHV, condensedWater,
     lhv: m.lhv * m.scale, hhv: m.hhv * m.scale,
-    extrapolated: m.extrapolated.map((x) => ({ ...x })),
+    extrapolated: [...m.extrapolated], // frozen points
   }, fn);
 }
 

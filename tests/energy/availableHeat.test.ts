@@ -166,7 +166,7 @@ describe("availableHeat", () => {
 
   it("extrapolates only when asked, and says where", () => {
     const r = availableHeat({ fuel: "CH4(g)", flueT: 450, fuelT: 280, extrapolate: true });
-    expect(r.extrapolated).toEqual([{ species: "CH4(g)", T: 280 }]);
+    expect(r.extrapolated).toEqual([{ species: "CH4(g)", T: 280, range: [298, 6000] }]); // NIST WebBook Shomate CH4(g): 298–6000 K
     expect(availableHeat({ fuel: "CH4(g)", flueT: 450 }).extrapolated).toEqual([]);
   });
 

@@ -20,6 +20,7 @@ import type { Library, Species } from "../../species/types.js";
 import { builtInLibrary } from "../../species/builtInLibrary.js";
 import { resolveSpeciesCached } from "../../enthalpy/resolveInputs.js";
 import { NORMAL_MOLAR_VOLUME_M3_PER_MOL, normalise, speciesHeatingValue } from "../../enthalpy/heatingValue.js";
+import { noteExtrapolation, type ExtrapolatedPoint } from "../../species/noteExtrapolation.js";
 
 
 /** The inputs of the fired-equipment balance (availableHeat without flueT). */
@@ -72,7 +73,7 @@ export interface FiredModel {
   readonly airEnthalpy: number;
   readonly airSensible: number;
   readonly allowExtremeMixture: boolean;
-  readonly extrapolated: { species: string; T: number }[];
+  readonly extrapolated: ExtrapolatedPoint[];
 }
 
 /** One evaluated point, per mol of fuel (scale applied by the caller). */
@@ -122,7 +123,7 @@ export function prepareFired(fn: string, input: FiredInputBase): FiredModel {
   }
 
   // ── fuel: mole fractions, species, heating values ──
-  const extrapolated: { species: string; T: number }[] = [];
+  const extrapolated: ExtrapolatedPoint[] = [];
   const fuel: Part[] = normalise(fn, input.fuel).map(([key, x]) => ({ key, species: resolveSpeciesCached(fn, key, library), n: x }));
   let lhv = 0, hhv = 0, molarMassG = 0, fuelEnthalpy = 0, fuelSensible = 0, fuelMoistureLatent = 0, fuelCarbon = 0;
   const hfWaterGas = resolveSpeciesCached(fn, "H2O(g)", library).hf298;
@@ -379,9 +380,9 @@ export function evaluateFired(m: FiredModel, e: number, T: number, out?: Float64
 }
 
 /** H(T) of a species; out-of-range temperatures are an error unless extrapolating (then recorded). */
-function enthalpyAt(sp: Species, T: number, extrapolate: boolean, record: { species: string; T: number }[]): number {
+function enthalpyAt(sp: Species, T: number, extrapolate: boolean, record: ExtrapolatedPoint[]): number {
   if (extrapolate && (T < sp.range[0] || T > sp.range[1])) {
-    if (!record.some((r) => r.species === sp.key && r.T === T)) record.push({ species: sp.key, T });
+    noteExtrapolation(record, sp, T);
     return sp.enthalpy(T, EXTRAPOLATE);
   }
   return sp.enthalpy(T);
