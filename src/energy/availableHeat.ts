@@ -4,6 +4,8 @@ import { evaluateFired, excessAirOf, flueTemperature, prepareFired } from "./int
 import type { AvailableHeatInput } from "./firedTypes.js";
 import { flueGasDewPoint } from "./flueGasDewPoint.js";
 import type { ExtrapolatedPoint } from "../species/noteExtrapolation.js";
+import { attachView } from "../view/attachView.js";
+import { AVAILABLE_HEAT_VIEW } from "./internal/firedView.js";
 
 export type { AvailableHeatInput, UnburnedCarbon } from "./firedTypes.js";
 
@@ -165,7 +167,7 @@ export function availableHeat(input: AvailableHeatInput): AvailableHeatResult {
   if (efficiencyLHV > 1) {
     warnings.push(`efficiency above 1 on the LHV basis: with a flue-gas air preheater, give flueT before the preheater (the preheat is heat taken from the flue gas)`);
   }
-  return finiteResult({
+  return attachView(finiteResult({
     availableHeat: clean(p.availableHeat * k),
     stackLoss: clean(p.stackLoss * k),
     efficiencyLHV,
@@ -189,7 +191,7 @@ export function availableHeat(input: AvailableHeatInput): AvailableHeatResult {
     warnings,
     per: m.per,
     extrapolated: [...m.extrapolated], // frozen points
-  }, fn);
+  }, fn), AVAILABLE_HEAT_VIEW);
 }
 
 function clean(x: number): number {

@@ -3,6 +3,8 @@ import { MAX_INPUT_ARRAY_LENGTH, describeValue, finiteResult, requireArray } fro
 import { detailValue, evaluateFired, excessAirOf, flueTemperature, prepareFired } from "./internal/firedModel.js";
 import type { AvailableHeatInput } from "./firedTypes.js";
 import type { ExtrapolatedPoint } from "../species/noteExtrapolation.js";
+import { attachView } from "../view/attachView.js";
+import { EFFICIENCY_CURVE_VIEW } from "./internal/firedView.js";
 
 /**
  * Which setting {@link efficiencyCurve} varies, and over which values.
@@ -129,11 +131,11 @@ export function efficiencyCurve(input: Omit<AvailableHeatInput, "flueT"> & { flu
     efficiencyHHV[i] = p.availableHeat / m.hhv;
     condensedWater[i] = p.condensedWater;
   }
-  return finiteResult({
+  return attachView(finiteResult({
     parameter, values: values as number[], availableHeat, stackLoss, efficiencyLHV, efficiencyHHV, condensedWater,
     lhv: m.lhv * m.scale, hhv: m.hhv * m.scale,
     extrapolated: [...m.extrapolated], // frozen points
-  }, fn);
+  }, fn), EFFICIENCY_CURVE_VIEW);
 }
 
 /** Largest number of points of one curve (more is `TOO_LARGE`); the library-wide input array cap. */

@@ -6,6 +6,8 @@ import type { Flows } from "../extent/types.js";
 import { waterSaturationTemperature } from "../extent/waterSaturationPressure.js";
 import type { Library } from "../species/types.js";
 import { resolveSpeciesCached } from "../enthalpy/resolveInputs.js";
+import { attachView } from "../view/attachView.js";
+import { DEW_POINT_VIEW } from "./internal/firedView.js";
 
 /**
  * Input of {@link flueGasDewPoint}.
@@ -133,7 +135,7 @@ export function flueGasDewPoint(input: FlueGasDewPointInput): FlueGasDewPointRes
     share = x;
   } else share = parts.so3 > 0 ? parts.so3 / sulfurOxides : DEFAULT_SO3_FRACTION;
   const so3Pa = sulfurOxides > 0 ? ((share * sulfurOxides) / parts.total) * P : 0;
-  if (!(so3Pa > 0)) return { waterK, waterPa, so3Pa: 0 };
+  if (!(so3Pa > 0)) return attachView({ waterK, waterPa, so3Pa: 0 }, DEW_POINT_VIEW);
   const acidK = acidDewPointK(waterPa, so3Pa);
   if (!Number.isFinite(acidK) || !(acidK > 0)) {
     // only at SO3 partial pressures far beyond any flue gas (the correlation's denominator reaches 0)
@@ -143,7 +145,7 @@ export function flueGasDewPoint(input: FlueGasDewPointInput): FlueGasDewPointRes
       waterPa,
     });
   }
-  return { waterK, acidK, waterPa, so3Pa, acidWithinRange: acidInRange(waterPa, so3Pa) };
+  return attachView({ waterK, acidK, waterPa, so3Pa, acidWithinRange: acidInRange(waterPa, so3Pa) }, DEW_POINT_VIEW);
 }
 
 /** Pa per mmHg (torr: 101 325/760 Pa; mmHg differs by 1.4e-7 relative). */

@@ -7,6 +7,9 @@ import {
 import { toReaction } from "./resolveInputs.js";
 import { ExactDecimal, exactWeightedSum } from "./preparedReaction.js";
 import { describeValue, requireArray, requireRecord } from "../guards.js";
+import { formatReaction } from "../reaction/formatReaction.js";
+import { attachView, viewDescriptors } from "../view/attachView.js";
+import { hessCombinationView, type HessViewParts } from "./internal/enthalpyView.js";
 
 /**
  * One known reaction and its enthalpy, for {@link hessCombine}.
@@ -70,8 +73,10 @@ export function hessCombine(target: Reaction | string, known: readonly KnownReac
   requireArray(known, "hessCombine", "known");
   known.forEach((k, j) => requireRecord(k, "hessCombine", `known[${j}]`));
   const enthalpies = known.map((k, j) => enthalpyText(k.enthalpy, j));
-  const targetVector = netVector(toReaction("hessCombine", target));
-  const vectors = known.map((k) => netVector(toReaction("hessCombine", k.reaction)));
+  const targetReaction = toReaction("hessCombine", target);
+  const knownReactions = known.map((k) => toReaction("hessCombine", k.reaction));
+  const targetVector = netVector(targetReaction);
+  const vectors = knownReactions.map(netVector);
   const keys: string[] = [];
   const seen = new Set<string>();
   for (const v of [targetVector, ...vectors]) for (const key of v.keys()) if (!seen.has(key)) { seen.add(key); keys.push(key); }
@@ -104,13 +109,20 @@ export function hessCombine(target: Reaction | string, known: readonly KnownReac
   }
   const exact = exactWeightedSum(x, enthalpies);
   const enthalpy = exact.toNumber();
-  return {
+  const result: HessCombination = {
     multipliers: x.map((r) => rationalToNumber(r)),
     exactMultipliers: x.map((r) => rationalToString(r)),
     enthalpy: enthalpy === 0 ? 0 : enthalpy,
     exact: exact.toString(),
     unique: pivots.length === cols,
   };
+  // the view needs the reactions' text, which the result does not hold: its display methods close over them
+  const parts: HessViewParts = {
+    target: formatReaction(targetReaction),
+    known: knownReactions.map((r) => formatReaction(r)),
+    enthalpies: enthalpies.map(Number),
+  };
+  return attachView(result, viewDescriptors((r: HessCombination) => hessCombinationView(r, parts)));
 }
 
 function enthalpyText(h: number | string, index: number): string {

@@ -13,6 +13,8 @@ import {
 import { solveLinearSystem } from "../numeric/linearAlgebra.js";
 import { buildSystem, resolveSpecies, validateFlows } from "./internal/extentSystem.js";
 import type { Flows } from "./types.js";
+import { attachView } from "../view/attachView.js";
+import { RECONCILE_VIEW } from "./internal/extentView.js";
 import { describeValue, finiteResult, optionsOf } from "../guards.js";
 
 /**
@@ -198,14 +200,14 @@ export function reconcileExtents(input: ReconcileExtentsInput, options: Reconcil
     closurePercent[el] = rationalToNumber(rationalMul(rationalDiv(elOut.get(el) ?? ZERO, vin), rationalFromNumber(100)));
   }
   const unmeasured = sys.species.filter((_, s) => !seen.has(s));
-  return finiteResult({
+  return attachView(finiteResult({
     extents: xi.map(rationalToNumber),
     outlet,
     residuals,
     sumOfSquares: rationalToNumber(ss),
     closurePercent,
     unmeasured,
-  }, fn);
+  }, fn), RECONCILE_VIEW);
 }
 
 const ZERO: Rational = /* @__PURE__ */ rationalFromNumber(0);

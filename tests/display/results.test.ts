@@ -7,7 +7,7 @@ import { describe, expect, it } from "vitest";
 import {
   JUPYTER_DISPLAY, RESULT_VIEW, adiabaticFlameTemperature, adiabaticReactionTemperature, adiabaticTemperatureRise,
   balanceReaction, checkBalance, combustion, equilibriumComposition, flameTemperatureSweep, heatDuty,
-  limitingReactant, mimeBundle, parseFormula, parseReaction, reactionEnthalpy, show, solveExtents, species,
+  limitingReactant, mimeBundle, availableHeat, efficiencyCurve, flueGasDewPoint, hessCombine, reconcileExtents, parseFormula, parseReaction, reactionEnthalpy, show, solveExtents, species,
   toHtml, toMarkdown, toText,
 } from "../../src/index.js";
 import { caught } from "../_helpers/caught.js";
@@ -39,6 +39,15 @@ const KINDS: Record<string, () => object> = {
   flame: () => adiabaticFlameTemperature({ fuel: "CH4(g)", equivalenceRatio: 1, mode: "complete" }),
   equilibrium: () => equilibriumComposition({ feed: { "CO2(g)": 1 }, T: 3000, P: 101325, species: ["CO2(g)", "CO(g)", "O2(g)", "O(g)"] }),
   sweep: () => flameTemperatureSweep({ fuel: "CH4(g)", mode: "complete" }, { parameter: "equivalenceRatio", values: [0.8, 1] }),
+  availableHeat: () => availableHeat({ fuel: GAS, excessAir: 0.15, flueT: 450 }),
+  efficiencyCurve: () => efficiencyCurve({ fuel: GAS, excessAir: 0.15 }, { parameter: "flueT", values: [400, 450, 500] }),
+  dewPoint: () => flueGasDewPoint({ composition: { "H2O(g)": 0.18, "CO2(g)": 0.09, "N2(g)": 0.729, "SO2(g)": 0.001 }, P: 101325 }),
+  hess: () => hessCombine("C(cr) + 0.5 O2(g) -> CO(g)", [
+    { reaction: "C(cr) + O2(g) -> CO2(g)", enthalpy: -393510 }, { reaction: "CO(g) + 0.5 O2(g) -> CO2(g)", enthalpy: -282980 },
+  ]),
+  reconcile: () => reconcileExtents({
+    feed: { CO: 10, H2O: 15, CO2: 0, H2: 0 }, reactions: ["CO + H2O -> CO2 + H2"], measured: { CO: 3, CO2: 7.2, H2: 6.8 },
+  }),
 };
 
 describe("display of every result kind", () => {
@@ -69,6 +78,23 @@ describe("display of every result kind", () => {
       expect(typeof (r[RESULT_VIEW] as () => unknown).call(r)).toBe("object");
     });
   }
+
+  it("the fired-equipment, Hess and reconciliation tables show the numbers of the results", () => {
+    const a = availableHeat({ fuel: GAS, excessAir: 0.15, flueT: 450 });
+    const text = toText(a);
+    // the efficiency row shows the result's own value, in %
+    expect(text).toContain((a.efficiencyLHV * 100).toPrecision(4));
+    expect(text).toContain("flue gas");
+    const h = toText(hessCombine("C(cr) + 0.5 O2(g) -> CO(g)", [
+      { reaction: "C(cr) + O2(g) -> CO2(g)", enthalpy: -393510 }, { reaction: "CO(g) + 0.5 O2(g) -> CO2(g)", enthalpy: -282980 },
+    ]));
+    // NIST-JANAF 4th ed. 1998: ΔfH°(CO2, g) −393.51, ΔfH°(CO, g) −110.53 kJ/mol, so the CO combustion is −282.98
+    expect(h).toContain("-110.53");
+    expect(h).toContain("CO(g) + 1/2 O2(g) -> CO2(g)");
+    const r = toText(reconcileExtents({ feed: { CO: 10, H2O: 15, CO2: 0, H2: 0 }, reactions: ["CO + H2O -> CO2 + H2"], measured: { CO: 3, CO2: 7.2, H2: 6.8 } }));
+    expect(r).toContain("102"); // C closure: (3 + 7.2) / 10 (invented plant data of the reconcileExtents example)
+    expect(r).toContain("not measured (taken at their reconciled flow): H2O");
+  });
 
   it("a formula stays deep-equal (and strict-equal) to a plain record", () => {
     expect(parseFormula("H2O(g)")).toStrictEqual({ text: "H2O(g)", elements: { H: 2, O: 1 }, charge: 0, phase: "g" });

@@ -45,3 +45,40 @@ export function reactionEnthalpyView(r: ReactionEnthalpyFields): ResultView {
 
 /** Prototype of every reaction enthalpy result: its display methods (built once; results are made on it). */
 export const REACTION_ENTHALPY_PROTOTYPE = /* @__PURE__ */ viewPrototype(/* @__PURE__ */ viewDescriptors(reactionEnthalpyView));
+
+/** What the view of a Hess combination shows, besides the result's own fields. */
+export interface HessViewParts {
+  readonly target: string;
+  readonly known: readonly string[];
+  /** Enthalpy of each known reaction, J/mol. */
+  readonly enthalpies: readonly number[];
+}
+
+/** The view of a Hess combination: the target's enthalpy, then each known reaction's multiplier and share. */
+export function hessCombinationView(
+  r: { readonly multipliers: readonly number[]; readonly exactMultipliers: readonly string[]; readonly enthalpy: number; readonly exact: string; readonly unique: boolean },
+  parts: HessViewParts,
+): ResultView {
+  return {
+    title: `Hess's law: ${parts.target}`,
+    tables: [
+      {
+        columns: [{ label: "ΔrH", unit: "kJ/mol" }, { label: "exact", unit: "J/mol" }, { label: "unique" }],
+        rows: [[r.enthalpy / 1000, r.exact, r.unique ? "yes" : "no"]],
+      },
+      {
+        caption: "known reactions",
+        columns: [
+          { label: "reaction" }, { label: "multiplier" }, { label: "exact" },
+          { label: "ΔrH", unit: "kJ/mol" }, { label: "multiplier·ΔrH", unit: "kJ/mol" },
+        ],
+        rows: parts.known.map((text, j) => {
+          const m = r.multipliers[j] ?? 0;
+          const h = parts.enthalpies[j] ?? 0;
+          return [text, m, r.exactMultipliers[j] ?? null, h / 1000, (m * h) / 1000];
+        }),
+      },
+    ],
+    ...(r.unique ? {} : { notes: ["the known reactions are linearly dependent: other multipliers give the same target (free ones set to 0)"] }),
+  };
+}

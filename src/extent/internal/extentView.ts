@@ -105,3 +105,43 @@ export function combustionView(r: CombustionFields): ResultView {
 export const EXTENTS_VIEW = /* @__PURE__ */ viewDescriptors(extentsView);
 export const LIMITING_VIEW = /* @__PURE__ */ viewDescriptors(limitingView);
 export const COMBUSTION_VIEW = /* @__PURE__ */ viewDescriptors(combustionView);
+
+/** Fields of a reconcileExtents result that its view reads. */
+interface ReconcileFields {
+  readonly extents: readonly number[];
+  readonly outlet: Flows;
+  readonly residuals: Flows;
+  readonly sumOfSquares: number;
+  readonly closurePercent: Readonly<Record<string, number>>;
+  readonly unmeasured: readonly string[];
+}
+
+/** The view of reconciled extents: extents, outlet with residuals, element closure. */
+export function reconcileView(r: ReconcileFields): ResultView {
+  return {
+    title: "reconciled extents of reaction (least squares)",
+    tables: [
+      {
+        caption: "extents",
+        columns: [{ label: "reaction" }, { label: "extent", unit: FLOW_UNIT }],
+        rows: r.extents.map((x, i) => [String(i + 1), x]),
+      },
+      recordTable("outlet", [
+        { label: "reconciled", unit: FLOW_UNIT, values: r.outlet },
+        { label: "measured − reconciled", unit: FLOW_UNIT, values: r.residuals },
+      ]),
+      {
+        caption: "element closure of the measured data (out ÷ in)",
+        columns: [{ label: "element" }, { label: "closure", unit: "%", digits: 4 }],
+        rows: Object.entries(r.closurePercent).map(([el, v]) => [el, v]),
+      },
+    ],
+    notes: [
+      `weighted sum of squared residuals ${r.sumOfSquares.toPrecision(6)} (mol or mol/s)²`,
+      ...(r.unmeasured.length > 0 ? [`not measured (taken at their reconciled flow): ${r.unmeasured.join(", ")}`] : []),
+    ],
+  };
+}
+
+/** Display methods of reconcileExtents results. */
+export const RECONCILE_VIEW = /* @__PURE__ */ viewDescriptors(reconcileView);
