@@ -1,8 +1,8 @@
 import { RxthermError } from "../errors.js";
 import { MAX_INPUT_ARRAY_LENGTH, describeValue, finiteResult, requireArray } from "../guards.js";
 import { detailValue, evaluateFired, excessAirOf, flueTemperature, prepareFired } from "./internal/firedModel.js";
-import type { AvailableHeatInput } from "./firedTypes.js";
-import type { ExtrapolatedPoint } from "../species/noteExtrapolation.js";
+import type { AvailableHeatInput, EfficiencyCurveResult } from "./firedTypes.js";
+export type { EfficiencyCurveResult } from "./firedTypes.js";
 import { attachView } from "../view/attachView.js";
 import { EFFICIENCY_CURVE_VIEW } from "./internal/firedView.js";
 
@@ -18,34 +18,6 @@ export interface EfficiencySweep {
   values: readonly number[];
 }
 
-/**
- * Result of {@link efficiencyCurve}: one array entry per swept value, ready for a chart.
- * Energies in J per mol of fuel (or per kg, per Nm³ with `per`).
- *
- * @category Fired equipment
- */
-export interface EfficiencyCurveResult {
-  /** The varied setting. */
-  readonly parameter: "flueT" | "excessAir";
-  /** The swept values (a copy). */
-  readonly values: readonly number[];
-  /** Available heat at each value. */
-  readonly availableHeat: readonly number[];
-  /** Stack loss at each value. */
-  readonly stackLoss: readonly number[];
-  /** availableHeat / LHV at each value. */
-  readonly efficiencyLHV: readonly number[];
-  /** availableHeat / HHV at each value. */
-  readonly efficiencyHHV: readonly number[];
-  /** Water condensed, mol per mol fuel (condensing only, else zeros). */
-  readonly condensedWater: readonly number[];
-  /** LHV of the fuel (the same for every point). */
-  readonly lhv: number;
-  /** HHV of the fuel. */
-  readonly hhv: number;
-  /** Species evaluated outside their data range (only with `extrapolate`). */
-  readonly extrapolated: readonly ExtrapolatedPoint[];
-}
 
 /**
  * The efficiency of a fired heater, furnace or boiler over a list of flue temperatures or

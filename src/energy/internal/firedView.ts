@@ -7,7 +7,7 @@
 import { viewDescriptors } from "../../view/attachView.js";
 import { recordTable } from "../../view/recordTable.js";
 import type { ResultView } from "../../view/types.js";
-import type { Flows } from "../../extent/types.js";
+import type { AvailableHeatResult, EfficiencyCurveResult } from "../firedTypes.js";
 
 /** Unit label of an energy per unit of fuel on the result's basis, shown in kJ. */
 function perFuel(per: "mol" | "kg" | "Nm3"): string {
@@ -15,29 +15,7 @@ function perFuel(per: "mol" | "kg" | "Nm3"): string {
 }
 
 /** Fields of an availableHeat result that its view reads. */
-interface AvailableHeatFields {
-  readonly availableHeat: number;
-  readonly stackLoss: number;
-  readonly efficiencyLHV: number;
-  readonly efficiencyHHV: number;
-  readonly lhv: number;
-  readonly hhv: number;
-  readonly heatInputLHV: number;
-  readonly sensibleFuel: number;
-  readonly sensibleAir: number;
-  readonly latentRecovered: number;
-  readonly latentLossHHV: number;
-  readonly losses: { readonly unburnedCO: number; readonly unburnedCarbon: number; readonly fuelMoisture: number };
-  readonly condensedWater: number;
-  readonly flueGas: Flows;
-  readonly wet: Readonly<Record<string, number>>;
-  readonly dry: Readonly<Record<string, number>>;
-  readonly excessAir: number;
-  readonly waterDewPointK?: number;
-  readonly acidDewPointK?: number;
-  readonly warnings: readonly string[];
-  readonly per: "mol" | "kg" | "Nm3";
-}
+type AvailableHeatFields = Omit<AvailableHeatResult, "extrapolated" | "heatInputHHV">;
 
 /** The view of an available-heat balance: efficiency, the heat balance on the LHV basis, the flue gas. */
 export function availableHeatView(r: AvailableHeatFields): ResultView {
@@ -84,15 +62,7 @@ export function availableHeatView(r: AvailableHeatFields): ResultView {
 export const AVAILABLE_HEAT_VIEW = /* @__PURE__ */ viewDescriptors(availableHeatView);
 
 /** Fields of an efficiencyCurve result that its view reads. */
-interface EfficiencyCurveFields {
-  readonly parameter: "flueT" | "excessAir";
-  readonly values: readonly number[];
-  readonly availableHeat: readonly number[];
-  readonly stackLoss: readonly number[];
-  readonly efficiencyLHV: readonly number[];
-  readonly efficiencyHHV: readonly number[];
-  readonly condensedWater: readonly number[];
-}
+type EfficiencyCurveFields = Omit<EfficiencyCurveResult, "extrapolated" | "lhv" | "hhv">;
 
 /** The view of an efficiency curve: one row per point. */
 export function efficiencyCurveView(r: EfficiencyCurveFields): ResultView {
