@@ -7,8 +7,17 @@
  */
 import { viewDescriptors } from "../../view/attachView.js";
 import { FLOW_UNIT, recordTable } from "../../view/recordTable.js";
-import type { ResultView } from "../../view/types.js";
+import type { ResultView, ViewTable } from "../../view/types.js";
 import type { Flows } from "../types.js";
+
+/** The table of extents, one row per reaction (numbered from 1). */
+function extentsTable(extents: readonly number[]): ViewTable {
+  return {
+    caption: "extents",
+    columns: [{ label: "reaction" }, { label: "extent", unit: FLOW_UNIT }],
+    rows: extents.map((x, i) => [String(i + 1), x]),
+  };
+}
 
 /** Fields of a solveExtents result that its view reads. */
 interface ExtentsFields {
@@ -23,11 +32,7 @@ export function extentsView(r: ExtentsFields): ResultView {
   return {
     title: "extents of reaction and outlet stream",
     tables: [
-      {
-        caption: "extents",
-        columns: [{ label: "reaction" }, { label: "extent", unit: FLOW_UNIT }],
-        rows: r.extents.map((x, i) => [String(i + 1), x]),
-      },
+      extentsTable(r.extents),
       recordTable("outlet", [
         { label: "outlet", unit: FLOW_UNIT, values: r.outlet },
         { label: "change", unit: FLOW_UNIT, values: r.change },
@@ -121,11 +126,7 @@ export function reconcileView(r: ReconcileFields): ResultView {
   return {
     title: "reconciled extents of reaction (least squares)",
     tables: [
-      {
-        caption: "extents",
-        columns: [{ label: "reaction" }, { label: "extent", unit: FLOW_UNIT }],
-        rows: r.extents.map((x, i) => [String(i + 1), x]),
-      },
+      extentsTable(r.extents),
       recordTable("outlet", [
         { label: "reconciled", unit: FLOW_UNIT, values: r.outlet },
         { label: "measured − reconciled", unit: FLOW_UNIT, values: r.residuals },
