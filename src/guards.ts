@@ -38,9 +38,10 @@ export function describeValue(v: unknown): string {
 
 /**
  * The options argument of `fn`: `undefined` becomes `{}`; anything that is not an object
- * (null, a number, an array...) is INVALID_ARGUMENT with `details.path` = `path`.
+ * (null, a number, an array...) is INVALID_ARGUMENT with `details.path` = `path`. With `known`
+ * (from {@link knownKeys}), a key `fn` does not read is INVALID_ARGUMENT too ({@link rejectUnknownKeys}).
  */
-export function optionsOf<T extends object>(options: T | undefined, fn: string, path = "options"): T {
+export function optionsOf<T extends object>(options: T | undefined, fn: string, path = "options", known?: ReadonlySet<string>): T {
   if (options === undefined) return {} as T;
   if (typeof options !== "object" || options === null || Array.isArray(options)) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${path} to be an object when given, got ${describeValue(options)}`, {
@@ -48,7 +49,53 @@ export function optionsOf<T extends object>(options: T | undefined, fn: string, 
       value: describeValue(options),
     });
   }
+  if (known !== undefined) rejectUnknownKeys(options, known, fn, path);
   return options;
+}
+
+/**
+ * The keys a function reads from an input or options object, checked complete against its type:
+ * `knownKeys<HeatDutyOptions>()("method", "extrapolate", …)` fails to compile when a key of the type
+ * is missing from the list (or a listed key is not one of the type's).
+ */
+export function knownKeys<T>() {
+  return <const K extends readonly (keyof T & string)[]>(
+    ...keys: K & ([Exclude<keyof T & string, K[number]>] extends [never] ? unknown : { missing: Exclude<keyof T & string, K[number]> })
+  ): ReadonlySet<string> => new Set<string>(keys);
+}
+
+/**
+ * Reject keys that `fn` does not read: a misspelt option (`excesAir`) would otherwise be ignored and
+ * the result computed with the default, silently. INVALID_ARGUMENT with `details.path`, `details.key`
+ * and, when a known key is within two edits, `details.suggestion` ("did you mean …?").
+ */
+export function rejectUnknownKeys(value: object, known: ReadonlySet<string>, fn: string, path: string): void {
+  for (const key in value) {
+    if (!Object.prototype.hasOwnProperty.call(value, key) || known.has(key)) continue;
+    let best: string | undefined;
+    let bestD = 3;
+    for (const k of known) {
+      const d = editDistance(key.toLowerCase(), k.toLowerCase());
+      if (d < bestD) { bestD = d; best = k; }
+    }
+    throw new RxthermError("INVALID_ARGUMENT",
+      `${fn} does not read ${path}.${describeValue(key)}${best !== undefined ? ` (did you mean "${best}"?)` : ""}; it reads ${[...known].join(", ")}`,
+      { path: `${path}.${describeValue(key)}`, key: describeValue(key), ...(best !== undefined ? { suggestion: best } : {}), known: [...known] });
+  }
+}
+
+/** Levenshtein distance (two-row dynamic programme). */
+export function editDistance(a: string, b: string): number {
+  if (a === b) return 0;
+  let prev = Array.from({ length: b.length + 1 }, (_, j) => j);
+  for (let i = 1; i <= a.length; i++) {
+    const cur = [i];
+    for (let j = 1; j <= b.length; j++) {
+      cur[j] = Math.min(prev[j]! + 1, cur[j - 1]! + 1, prev[j - 1]! + (a[i - 1] === b[j - 1] ? 0 : 1));
+    }
+    prev = cur;
+  }
+  return prev[b.length]!;
 }
 
 /**

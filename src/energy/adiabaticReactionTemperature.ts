@@ -10,7 +10,11 @@ import { resolveSpeciesCached } from "../enthalpy/resolveInputs.js";
 import { resolveStream } from "./internal/energyStreams.js";
 import { attachView } from "../view/attachView.js";
 import { ADIABATIC_VIEW } from "./internal/energyView.js";
-import { optionsOf, describeValue } from "../guards.js";
+import { describeValue, knownKeys, optionsOf, rejectUnknownKeys } from "../guards.js";
+
+/** The keys the adiabatic functions read (a misspelt one is an error, not a silent default). */
+const INPUT_KEYS = /* @__PURE__ */ knownKeys<AdiabaticReactionInput>()("inlet", "reactions", "specs", "library");
+const OPTION_KEYS = /* @__PURE__ */ knownKeys<AdiabaticReactionOptions>()("toleranceK", "maxIterations", "limitsK", "extrapolate", "vessel");
 
 /**
  * Input of {@link adiabaticReactionTemperature} and {@link adiabaticTemperatureRise}.
@@ -166,6 +170,8 @@ export function adiabaticTemperatureRise(input: AdiabaticReactionInput, options:
 
 function solveAdiabatic(fn: string, input: AdiabaticReactionInput, options: AdiabaticReactionOptions): { result: AdiabaticReactionResult; startT: number } {
   if (input === null || typeof input !== "object") throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object { inlet, reactions, specs }`, { input });
+  rejectUnknownKeys(input, INPUT_KEYS, fn, "input");
+  rejectUnknownKeys(options, OPTION_KEYS, fn, "options");
   const library = input.library;
   const extrapolate = options.extrapolate === true;
   const ro = extrapolate ? EXTRAPOLATE : undefined;

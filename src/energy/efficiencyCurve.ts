@@ -1,10 +1,12 @@
 import { RxthermError } from "../errors.js";
-import { MAX_INPUT_ARRAY_LENGTH, describeValue, finiteResult, requireArray } from "../guards.js";
+import { MAX_INPUT_ARRAY_LENGTH, describeValue, finiteResult, knownKeys, rejectUnknownKeys, requireArray } from "../guards.js";
 import { detailValue, evaluateFired, excessAirOf, flueTemperature, prepareFired } from "./internal/firedModel.js";
 import type { AvailableHeatInput, EfficiencyCurveResult } from "./firedTypes.js";
 export type { EfficiencyCurveResult } from "./firedTypes.js";
 import { attachView } from "../view/attachView.js";
 import { EFFICIENCY_CURVE_VIEW } from "./internal/firedView.js";
+
+const SWEEP_KEYS = /* @__PURE__ */ knownKeys<EfficiencySweep>()("parameter", "values");
 
 /**
  * Which setting {@link efficiencyCurve} varies, and over which values.
@@ -49,6 +51,7 @@ export function efficiencyCurve(input: Omit<AvailableHeatInput, "flueT"> & { flu
       value: describeValue(sweep),
     });
   }
+  rejectUnknownKeys(sweep, SWEEP_KEYS, fn, "sweep");
   const { parameter } = sweep;
   if (parameter !== "flueT" && parameter !== "excessAir") {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} can vary "flueT" or "excessAir", got ${describeValue(parameter)}`, {

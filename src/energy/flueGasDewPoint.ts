@@ -1,5 +1,5 @@
 import { RxthermError } from "../errors.js";
-import { describeValue, requireRecord } from "../guards.js";
+import { describeValue, knownKeys, rejectUnknownKeys, requireRecord } from "../guards.js";
 import { parseFormula } from "../formula/parseFormula.js";
 import type { Formula } from "../formula/types.js";
 import type { Flows } from "../extent/types.js";
@@ -8,6 +8,8 @@ import type { Library } from "../species/types.js";
 import { resolveSpeciesCached } from "../enthalpy/resolveInputs.js";
 import { attachView } from "../view/attachView.js";
 import { DEW_POINT_VIEW } from "./internal/firedView.js";
+
+const INPUT_KEYS = /* @__PURE__ */ knownKeys<FlueGasDewPointInput>()("composition", "P", "so3Fraction", "library");
 
 /**
  * Input of {@link flueGasDewPoint}.
@@ -110,6 +112,7 @@ export function flueGasDewPoint(input: FlueGasDewPointInput): FlueGasDewPointRes
       value: describeValue(input),
     });
   }
+  rejectUnknownKeys(input, INPUT_KEYS, fn, "input");
   const { P } = input;
   if (typeof P !== "number" || !Number.isFinite(P) || !(P > 0)) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a total pressure P > 0 Pa, got ${describeValue(P)}`, { path: "input.P", P: detail(P) });

@@ -7,7 +7,11 @@ import type { Stream } from "../extent/types.js";
 import { resolveStream, type Entry, type ResolvedStream } from "./internal/energyStreams.js";
 import { prepareReaction, standardEnthalpyExact } from "../enthalpy/preparedReaction.js";
 import { HEAT_DUTY_PROTOTYPE } from "./internal/energyView.js";
-import { describeValue, finiteResult, optionsOf } from "../guards.js";
+import { describeValue, finiteResult, knownKeys, optionsOf, rejectUnknownKeys } from "../guards.js";
+
+/** The keys heatDuty reads (a misspelt one is an error, not a silent default). */
+const INPUT_KEYS = /* @__PURE__ */ knownKeys<HeatDutyInput>()("inlet", "outlet", "library", "reactions", "extents");
+const OPTION_KEYS = /* @__PURE__ */ knownKeys<HeatDutyOptions>()("method", "warnings", "extrapolate", "vessel");
 
 /**
  * Streams and optional reactions of an energy balance, for {@link heatDuty}.
@@ -169,6 +173,8 @@ export function heatDuty(input: HeatDutyInput, options: HeatDutyOptions = {}): H
   options = optionsOf(options, "heatDuty");
   const fn = "heatDuty";
   if (input === null || typeof input !== "object") throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object with inlet and outlet`, { input });
+  rejectUnknownKeys(input, INPUT_KEYS, fn, "input");
+  rejectUnknownKeys(options, OPTION_KEYS, fn, "options");
   const library = input.library;
   const extrapolate = options.extrapolate === true;
   const ro = extrapolate ? EXTRAPOLATE : undefined;

@@ -5,7 +5,10 @@ import type { Reaction } from "../reaction/types.js";
 import { prepareReaction } from "./preparedReaction.js";
 import { checkTemperature, reactionEnthalpy } from "./reactionEnthalpy.js";
 import { reactionGibbs } from "./reactionGibbs.js";
-import { optionsOf, describeValue } from "../guards.js";
+import { describeValue, knownKeys, optionsOf } from "../guards.js";
+
+/** The option keys equilibriumConstant reads (a misspelt one is an error, not a silent default). */
+const OPTION_KEYS = /* @__PURE__ */ knownKeys<EquilibriumConstantOptions>()("method", "library", "extrapolate");
 
 /**
  * Options of {@link equilibriumConstant}.
@@ -47,7 +50,7 @@ export interface EquilibriumConstantOptions {
  *   CODATA 2018 (R).
  */
 export function equilibriumConstant(reaction: Reaction | string, T: number, options: EquilibriumConstantOptions = {}): number {
-  options = optionsOf(options, "equilibriumConstant");
+  options = optionsOf(options, "equilibriumConstant", "options", OPTION_KEYS);
   checkTemperature("equilibriumConstant", T);
   const method = options.method ?? "kirchhoff";
   const base = { ...(options.library ? { library: options.library } : {}), ...(options.extrapolate ? { extrapolate: true } : {}) };

@@ -6,7 +6,10 @@ import { molarMass } from "../formula/molarMass.js";
 import { resolveSpecies } from "./resolveInputs.js";
 import { ExactDecimal } from "./preparedReaction.js";
 import { combustionProducts } from "./internal/combustionProducts.js";
-import { optionsOf, describeValue } from "../guards.js";
+import { describeValue, knownKeys, optionsOf } from "../guards.js";
+
+/** The option keys heatingValue reads (a misspelt one is an error, not a silent default). */
+const OPTION_KEYS = /* @__PURE__ */ knownKeys<HeatingValueOptions>()("basis", "per", "library");
 
 /**
  * Options of {@link heatingValue}.
@@ -68,7 +71,7 @@ export const NORMAL_MOLAR_VOLUME_M3_PER_MOL = (GAS_CONSTANT_J_PER_MOL_K * NORMAL
  *   ISO 13443:1996 (natural gas — standard reference conditions, 0 °C and 101.325 kPa for "normal").
  */
 export function heatingValue(fuel: string | Flows, options: HeatingValueOptions = {}): number {
-  options = optionsOf(options, "heatingValue");
+  options = optionsOf(options, "heatingValue", "options", OPTION_KEYS);
   const { basis, per } = resolveOptions("heatingValue", options);
   const mixture = normalise("heatingValue", fuel);
   let perMol = 0;

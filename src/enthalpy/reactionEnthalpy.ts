@@ -7,7 +7,10 @@ import type Decimal from "decimal.js";
 import type { Rational } from "../numeric/rational.js";
 import { prepareReaction, standardEnthalpyExact, type PreparedReaction } from "./preparedReaction.js";
 import { REACTION_ENTHALPY_PROTOTYPE } from "./internal/enthalpyView.js";
-import { optionsOf, describeValue } from "../guards.js";
+import { describeValue, knownKeys, optionsOf } from "../guards.js";
+
+/** The option keys reactionEnthalpy reads (a misspelt one is an error, not a silent default). */
+const OPTION_KEYS = /* @__PURE__ */ knownKeys<ReactionEnthalpyOptions>()("T", "library", "per", "extrapolate");
 
 /**
  * Options of {@link reactionEnthalpy}.
@@ -114,7 +117,7 @@ export interface ReactionEnthalpyResult {
  *   IUPAC Green Book, 3rd ed. (2007), §2.11 (standard reaction quantities).
  */
 export function reactionEnthalpy(reaction: Reaction | string, options: ReactionEnthalpyOptions = {}): ReactionEnthalpyResult {
-  options = optionsOf(options, "reactionEnthalpy");
+  options = optionsOf(options, "reactionEnthalpy", "options", OPTION_KEYS);
   const T = options.T ?? STANDARD_TEMPERATURE_K;
   checkTemperature("reactionEnthalpy", T);
   const p = prepareReaction("reactionEnthalpy", reaction, options.library);

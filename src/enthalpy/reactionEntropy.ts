@@ -3,7 +3,10 @@ import type { Library } from "../species/types.js";
 import type { Reaction } from "../reaction/types.js";
 import { prepareReaction } from "./preparedReaction.js";
 import { checkTemperature } from "./reactionEnthalpy.js";
-import { optionsOf } from "../guards.js";
+import { knownKeys, optionsOf } from "../guards.js";
+
+/** The option keys reactionEntropy reads (a misspelt one is an error, not a silent default). */
+const OPTION_KEYS = /* @__PURE__ */ knownKeys<ReactionEntropyOptions>()("T", "library", "extrapolate");
 
 /**
  * Options of {@link reactionEntropy} and {@link reactionGibbs} (which accepts the same fields).
@@ -36,7 +39,7 @@ export interface ReactionEntropyOptions {
  * @see IUPAC Green Book, 3rd ed. (2007), §2.11; M. W. Chase, NIST-JANAF Thermochemical Tables, 4th ed. (1998).
  */
 export function reactionEntropy(reaction: Reaction | string, options: ReactionEntropyOptions = {}): number {
-  options = optionsOf(options, "reactionEntropy");
+  options = optionsOf(options, "reactionEntropy", "options", OPTION_KEYS);
   const T = options.T ?? STANDARD_TEMPERATURE_K;
   checkTemperature("reactionEntropy", T);
   const p = prepareReaction("reactionEntropy", reaction, options.library);

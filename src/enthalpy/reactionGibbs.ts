@@ -2,7 +2,10 @@ import { STANDARD_TEMPERATURE_K } from "../units.js";
 import type { Reaction } from "../reaction/types.js";
 import { checkTemperature, reactionEnthalpy } from "./reactionEnthalpy.js";
 import { reactionEntropy, type ReactionEntropyOptions } from "./reactionEntropy.js";
-import { optionsOf } from "../guards.js";
+import { knownKeys, optionsOf } from "../guards.js";
+
+/** The option keys reactionGibbs reads (a misspelt one is an error, not a silent default). */
+const OPTION_KEYS = /* @__PURE__ */ knownKeys<ReactionGibbsOptions>()("T", "library", "extrapolate");
 
 /**
  * Options of {@link reactionGibbs}: the same fields as {@link ReactionEntropyOptions}.
@@ -27,7 +30,7 @@ export type ReactionGibbsOptions = ReactionEntropyOptions;
  * @see IUPAC Green Book, 3rd ed. (2007), §2.11.
  */
 export function reactionGibbs(reaction: Reaction | string, options: ReactionGibbsOptions = {}): number {
-  options = optionsOf(options, "reactionGibbs");
+  options = optionsOf(options, "reactionGibbs", "options", OPTION_KEYS);
   const T = options.T ?? STANDARD_TEMPERATURE_K;
   checkTemperature("reactionGibbs", T);
   const h = reactionEnthalpy(reaction, { T, ...(options.library ? { library: options.library } : {}), ...(options.extrapolate ? { extrapolate: true } : {}) }).value;

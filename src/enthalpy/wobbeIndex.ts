@@ -4,7 +4,10 @@ import type { Flows } from "../extent/types.js";
 import { molarMass } from "../formula/molarMass.js";
 import { resolveSpecies } from "./resolveInputs.js";
 import { heatingValue } from "./heatingValue.js";
-import { optionsOf } from "../guards.js";
+import { knownKeys, optionsOf } from "../guards.js";
+
+/** The option keys wobbeIndex reads (a misspelt one is an error, not a silent default). */
+const OPTION_KEYS = /* @__PURE__ */ knownKeys<WobbeIndexOptions>()("basis", "library");
 
 /**
  * Options of {@link wobbeIndex}.
@@ -51,7 +54,7 @@ export const AIR_MOLAR_MASS_G_PER_MOL = 28.9644;
  *   ISO 13443:1996 (standard reference conditions); U.S. Standard Atmosphere 1976 (air molar mass).
  */
 export function wobbeIndex(gas: string | Flows, options: WobbeIndexOptions = {}): number {
-  options = optionsOf(options, "wobbeIndex");
+  options = optionsOf(options, "wobbeIndex", "options", OPTION_KEYS);
   const hv = heatingValue(gas, { basis: options.basis ?? "higher", per: "Nm3", ...(options.library ? { library: options.library } : {}) });
   const entries = typeof gas === "string" ? [[gas, 1] as const] : Object.entries(gas);
   let total = 0;

@@ -15,7 +15,10 @@ import { buildSystem, resolveSpecies, validateFlows } from "./internal/extentSys
 import type { Flows } from "./types.js";
 import { attachView } from "../view/attachView.js";
 import { RECONCILE_VIEW } from "./internal/extentView.js";
-import { describeValue, finiteResult, optionsOf } from "../guards.js";
+import { describeValue, finiteResult, knownKeys, optionsOf } from "../guards.js";
+
+/** The option keys reconcileExtents reads (a misspelt one is an error, not a silent default). */
+const OPTION_KEYS = /* @__PURE__ */ knownKeys<ReconcileExtentsOptions>()("weights");
 
 /**
  * Input of {@link reconcileExtents}.
@@ -100,7 +103,7 @@ export interface ReconcileExtentsResult {
  * @see C. F. Gauss, Theoria combinationis observationum erroribus minimis obnoxiae (1821–1823): least squares through the normal equations; element-balance closure: common practice
  */
 export function reconcileExtents(input: ReconcileExtentsInput, options: ReconcileExtentsOptions = {}): ReconcileExtentsResult {
-  options = optionsOf(options, "reconcileExtents");
+  options = optionsOf(options, "reconcileExtents", "options", OPTION_KEYS);
   const fn = "reconcileExtents";
   if (input === null || typeof input !== "object") {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object { feed, reactions, measured }`, {});

@@ -7,7 +7,10 @@ import { RxthermError } from "../errors.js";
 import { molarMassOf, validateFlows } from "./internal/extentSystem.js";
 import type { Flows } from "./types.js";
 import { compensatedSum } from "../numeric/compensatedSum.js";
-import { describeValue, finiteResult, optionsOf } from "../guards.js";
+import { describeValue, finiteResult, knownKeys, optionsOf } from "../guards.js";
+
+/** The option keys of the mass-flow conversions (a misspelt one is an error, not a silent default). */
+const OPTION_KEYS = /* @__PURE__ */ knownKeys<MassFlowOptions>()("massUnit");
 
 /**
  * Options of the mass-flow conversions {@link massToMolarFlows} and {@link molarToMassFlows}.
@@ -39,7 +42,7 @@ export interface MassFlowOptions {
  * @see IUPAC/CIAAW standard atomic weights (molar masses)
  */
 export function massToMolarFlows(massFlows: Flows, options: MassFlowOptions = {}): Flows {
-  options = optionsOf(options, "massToMolarFlows");
+  options = optionsOf(options, "massToMolarFlows", "options", OPTION_KEYS);
   const fn = "massToMolarFlows";
   const factor = unitFactor(options, fn);
   validateFlows(massFlows, fn, "mass");
@@ -64,7 +67,7 @@ export function massToMolarFlows(massFlows: Flows, options: MassFlowOptions = {}
  * @see IUPAC/CIAAW standard atomic weights (molar masses)
  */
 export function molarToMassFlows(flows: Flows, options: MassFlowOptions = {}): Flows {
-  options = optionsOf(options, "molarToMassFlows");
+  options = optionsOf(options, "molarToMassFlows", "options", OPTION_KEYS);
   const fn = "molarToMassFlows";
   const factor = unitFactor(options, fn);
   validateFlows(flows, fn, "flows");
@@ -154,7 +157,7 @@ export function totalFlow(flows: Flows): number {
  * @see IUPAC/CIAAW standard atomic weights (molar masses)
  */
 export function totalMassFlow(flows: Flows, options: MassFlowOptions = {}): number {
-  options = optionsOf(options, "totalMassFlow");
+  options = optionsOf(options, "totalMassFlow", "options", OPTION_KEYS);
   const fn = "totalMassFlow";
   const factor = unitFactor(options, fn);
   validateFlows(flows, fn, "flows");

@@ -3,7 +3,10 @@ import { mergeLibrary, SpeciesLibrary } from "./internal/speciesLibrary.js";
 import { libraryOf } from "./species.js";
 import type { Library, Species } from "./types.js";
 import { validateSpeciesData } from "./validateSpeciesData.js";
-import { optionsOf } from "../guards.js";
+import { knownKeys, optionsOf } from "../guards.js";
+
+/** The option keys createLibrary reads (a misspelt one is an error, not a silent default). */
+const OPTION_KEYS = /* @__PURE__ */ knownKeys<CreateLibraryOptions>()("base");
 
 /**
  * Options of {@link createLibrary}.
@@ -54,7 +57,7 @@ export interface CreateLibraryOptions {
  * @see NIST-JANAF Thermochemical Tables, 4th ed. (Chase 1998), introduction: the standard state and H°(T) − H°(298.15 K)
  */
 export function createLibrary(data: unknown, options: CreateLibraryOptions = {}): Library {
-  options = optionsOf(options, "createLibrary");
+  options = optionsOf(options, "createLibrary", "options", OPTION_KEYS);
   const valid = validateSpeciesData(data);
   const entries: { species: Species; alternative: boolean }[] = valid.species.map((e) => ({
     species: buildSpecies(e),

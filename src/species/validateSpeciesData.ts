@@ -4,7 +4,10 @@ import type { CpRange } from "../heat-capacity/types.js";
 import { readSpeciesFormula } from "./internal/speciesFormula.js";
 import { SOURCES } from "./citation.js";
 import { englishMessages, speciesDataSchema, speciesEntrySchema, type SpeciesData, type SpeciesEntry } from "./schema.js";
-import { optionsOf } from "../guards.js";
+import { knownKeys, optionsOf } from "../guards.js";
+
+/** The option keys validateSpeciesData reads (a misspelt one is an error, not a silent default). */
+const OPTION_KEYS = /* @__PURE__ */ knownKeys<ValidateSpeciesDataOptions>()("allowBuiltInSources");
 
 /**
  * One problem found by {@link validateSpeciesData}: where it is (a path into the data, as zod
@@ -133,7 +136,7 @@ function checkSizes(data: unknown): void {
  * @see zod 4 issue paths (`path`), which the issue list follows
  */
 export function validateSpeciesData(data: unknown, options: ValidateSpeciesDataOptions = {}): SpeciesData {
-  options = optionsOf(options, "validateSpeciesData");
+  options = optionsOf(options, "validateSpeciesData", "options", OPTION_KEYS);
   checkSizes(data);
   const issues: SpeciesDataIssue[] = [];
   findUnsafeKeys(data, [], issues, new Set());

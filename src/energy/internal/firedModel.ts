@@ -8,7 +8,7 @@
  * @internal
  */
 import { RxthermError } from "../../errors.js";
-import { describeValue } from "../../guards.js";
+import { describeValue, knownKeys, rejectUnknownKeys } from "../../guards.js";
 import { STANDARD_TEMPERATURE_K, ATMOSPHERE_PA, slipHintDetails, withSlipHint } from "../../units.js";
 import type { Flows } from "../../extent/types.js";
 import { combustion } from "../../extent/combustion.js";
@@ -21,6 +21,12 @@ import { builtInLibrary } from "../../species/builtInLibrary.js";
 import { resolveSpeciesCached } from "../../enthalpy/resolveInputs.js";
 import { NORMAL_MOLAR_VOLUME_M3_PER_MOL, normalise, speciesHeatingValue } from "../../enthalpy/heatingValue.js";
 import { noteExtrapolation, type ExtrapolatedPoint } from "../../species/noteExtrapolation.js";
+
+/** The keys availableHeat and efficiencyCurve read (a misspelt one is an error, not a silent default). */
+const FIRED_INPUT_KEYS = /* @__PURE__ */ knownKeys<AvailableHeatInput>()(
+  "fuel", "excessAir", "equivalenceRatio", "oxidizer", "fuelT", "airT", "flueT", "humidity", "P", "condensing", "coPpm",
+  "unburnedCarbon", "per", "library", "allowExtremeMixture", "extrapolate",
+);
 
 
 /** The inputs of the fired-equipment balance (availableHeat without flueT). */
@@ -104,6 +110,7 @@ export function prepareFired(fn: string, input: FiredInputBase): FiredModel {
   if (input === null || typeof input !== "object") {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object { fuel, flueT, ... }, got ${describeValue(input)}`, { path: "input", value: detailValue(input) });
   }
+  rejectUnknownKeys(input, FIRED_INPUT_KEYS, fn, "input");
   const library = input.library;
   const lookup = library ?? builtInLibrary();
   const extrapolate = input.extrapolate === true;

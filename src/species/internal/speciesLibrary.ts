@@ -8,6 +8,7 @@
 import { RxthermError } from "../../errors.js";
 import type { Library, LibraryGetOptions, Species } from "../types.js";
 import { queryFormula, sameComposition } from "./composition.js";
+import { editDistance } from "../../guards.js";
 
 /** All entries of one key: the default and every data-set variant. */
 export interface KeyRecord {
@@ -250,18 +251,4 @@ function labelOf(key: string): string {
 
 function unique<T>(xs: T[]): T[] {
   return [...new Set(xs)];
-}
-
-/** Levenshtein distance (two-row dynamic programme). */
-function editDistance(a: string, b: string): number {
-  if (a === b) return 0;
-  let prev = Array.from({ length: b.length + 1 }, (_, j) => j);
-  for (let i = 1; i <= a.length; i++) {
-    const cur = [i];
-    for (let j = 1; j <= b.length; j++) {
-      cur[j] = Math.min(prev[j]! + 1, cur[j - 1]! + 1, prev[j - 1]! + (a[i - 1] === b[j - 1] ? 0 : 1));
-    }
-    prev = cur;
-  }
-  return prev[b.length]!;
 }
