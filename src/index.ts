@@ -175,6 +175,7 @@ export type { CpChartOptions } from "./display/cpChart.js";
 export { enthalpyChart } from "./display/enthalpyChart.js";
 export type { EnthalpyChartOptions } from "./display/enthalpyChart.js";
 export { flameChart } from "./display/flameChart.js";
+export { efficiencyChart } from "./display/efficiencyChart.js";
 export { compositionChart } from "./display/compositionChart.js";
 export type { CompositionChartOptions } from "./display/compositionChart.js";
 export { dutyChart } from "./display/dutyChart.js";

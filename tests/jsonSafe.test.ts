@@ -145,6 +145,7 @@ const CALLS: Record<string, () => unknown> = {
   compositionChart: () => rx.compositionChart(
     rx.flameTemperatureSweep({ fuel: "CH4(g)", mode: "complete" }, { parameter: "equivalenceRatio", values: [0.8, 1] }), { species: ["CO2(g)", "H2O(g)"] },
   ),
+  efficiencyChart: () => rx.efficiencyChart(rx.efficiencyCurve({ fuel: "CH4(g)", excessAir: 0.15 }, { parameter: "flueT", values: [400, 500] })),
   dutyChart: () => rx.dutyChart(rx.heatDuty({ inlet: { T: 298.15, flows: { "N2(g)": 1 } }, outlet: { T: 500, flows: { "N2(g)": 1 } } })),
 };
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import {
-  JUPYTER_DISPLAY, compositionChart, cpChart, dutyChart, enthalpyChart, flameChart, flameTemperatureSweep, heatDuty,
+  JUPYTER_DISPLAY, efficiencyChart, efficiencyCurve, compositionChart, cpChart, dutyChart, enthalpyChart, flameChart, flameTemperatureSweep, heatDuty,
   mimeBundle, species, toText,
 } from "../../src/index.js";
 import { MAX_CHART_POINTS, MAX_CHART_SERIES } from "../../src/display/cpChart.js";
@@ -75,6 +75,24 @@ describe("enthalpyChart(species, options)", () => {
     const chart = enthalpyChart("CO2(g)", { TminK: 298.15, TmaxK: 1000, points: 2, absolute: true });
     expect(chart.data.values[0]!.value).toBeCloseTo(-393.522, 3); // NIST-JANAF 4th ed. 1998, ΔfH°(CO2, g) = −393.522 kJ/mol
     expect(chart.encoding.y.title).toBe("H° (kJ/mol)");
+  });
+});
+
+describe("efficiencyChart(curve)", () => {
+  const CURVE = efficiencyCurve({ fuel: "CH4(g)", excessAir: 0.15 }, { parameter: "flueT", values: [400, 450, 500] });
+  it("draws the curve's own efficiencies in % on both bases against flue temperature (the @example)", () => {
+    const c = efficiencyChart(CURVE);
+    expect(c.encoding.x.title).toBe("flue-gas temperature (K)");
+    const lhv = c.data.values.filter((v) => v.basis === "LHV").map((v) => v.efficiency);
+    expect(lhv).toEqual(CURVE.efficiencyLHV.map((e) => e * 100));
+    expect(c.data.values.filter((v) => v.basis === "HHV")).toHaveLength(3);
+    expect(Object.keys(mimeBundle(c))).toContain("application/vnd.vegalite.v5+json");
+  });
+  it("excess air in %; a value that is not a curve is INVALID_ARGUMENT", () => {
+    const ea = efficiencyCurve({ fuel: "CH4(g)", flueT: 450 }, { parameter: "excessAir", values: [0.1, 0.2] });
+    expect(efficiencyChart(ea).data.values.map((v) => v.x).slice(0, 2)).toEqual([10, 20]);
+    expect(caught(() => efficiencyChart({ ...CURVE, parameter: "T" } as never)).code).toBe("INVALID_ARGUMENT");
+    expect(caught(() => efficiencyChart({ ...CURVE, efficiencyHHV: [1] } as never)).details).toMatchObject({ path: "curve.efficiencyHHV" });
   });
 });
 

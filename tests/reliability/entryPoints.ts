@@ -169,5 +169,6 @@ export const ENTRY_POINTS: readonly EntryPoint[] = [
   e("compositionChart", () => [
     rx.flameTemperatureSweep({ fuel: "CH4(g)", mode: "complete" }, { parameter: "equivalenceRatio", values: [0.8, 1] }), { species: ["CO2(g)", "H2O(g)"] },
   ], true),
+  e("efficiencyChart", () => [rx.efficiencyCurve({ fuel: "CH4(g)", excessAir: 0.15 }, { parameter: "flueT", values: [400, 500] })], true),
   e("dutyChart", () => [rx.heatDuty({ inlet: { T: 298.15, flows: { "N2(g)": 1 } }, outlet: { T: 500, flows: { "N2(g)": 1 } } })]),
 ];
