@@ -15,7 +15,8 @@ import type { ChartSpec } from "./types.js";
  * @param curve - the result of `efficiencyCurve`
  * @returns the Vega-Lite specification (with display methods)
  * @throws RxthermError `INVALID_ARGUMENT` when `curve` is not an efficiency curve (unknown parameter; `values`,
- *   `efficiencyLHV` and `efficiencyHHV` not arrays of finite numbers of one non-zero length); `TOO_LARGE` past 100 000 points
+ *   `efficiencyLHV` and `efficiencyHHV` not arrays of finite numbers of one non-zero length, or a fraction whose
+ *   value in % is not finite); `TOO_LARGE` past 100 000 points
  * @category Display
  * @example
  * const c = efficiencyCurve({ fuel: "CH4(g)", excessAir: 0.15 }, { parameter: "flueT", values: [400, 450, 500] });
@@ -36,10 +37,18 @@ export function efficiencyChart(curve: EfficiencyCurveResult): ChartSpec {
   const lhv = sweepNumbers(fn, curve.efficiencyLHV, "curve.efficiencyLHV", x.length);
   const hhv = sweepNumbers(fn, curve.efficiencyHHV, "curve.efficiencyHHV", x.length);
   const flue = p === "flueT";
-  const at = (i: number): number => (flue ? (x[i] as number) : (x[i] as number) * 100);
+  /** A value in % (fractions ×100), finite, or INVALID_ARGUMENT at its path. */
+  const percent = (v: number, path: string): number => {
+    const y = v * 100;
+    if (!Number.isFinite(y)) {
+      throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${path} to be a fraction that stays finite in %, got ${describeValue(v)}`, { path, value: describeValue(v) });
+    }
+    return y;
+  };
+  const at = (i: number): number => (flue ? (x[i] as number) : percent(x[i] as number, `curve.values[${i}]`));
   const values = [
-    ...lhv.map((e, i) => ({ basis: "LHV", x: at(i), efficiency: e * 100 })),
-    ...hhv.map((e, i) => ({ basis: "HHV", x: at(i), efficiency: e * 100 })),
+    ...lhv.map((e, i) => ({ basis: "LHV", x: at(i), efficiency: percent(e, `curve.efficiencyLHV[${i}]`) })),
+    ...hhv.map((e, i) => ({ basis: "HHV", x: at(i), efficiency: percent(e, `curve.efficiencyHHV[${i}]`) })),
   ];
   return makeChart({
     title: "efficiency",

@@ -3,6 +3,7 @@ import type { Formula } from "../formula/types.js";
 import { builtInLibrary } from "./builtInLibrary.js";
 import { queryFormula, sameComposition } from "./internal/composition.js";
 import { libraryOf } from "./species.js";
+import { knownKeys, rejectUnknownKeys } from "../guards.js";
 import type { Library, Species } from "./types.js";
 
 /**
@@ -67,6 +68,9 @@ export function findSpecies(query: string | SpeciesQuery, library?: Library): Sp
 
 // ── private helpers ──────────────────────────────────────────────────────────
 
+/** The keys of a query object (a misspelt one is an error, not a silently broader search). */
+const QUERY_KEYS = /* @__PURE__ */ knownKeys<SpeciesQuery>()("formula", "name", "cas", "phase");
+
 /** A matcher returns a score (lower is better) or −1 for no match. */
 type Matcher = (sp: Species) => number;
 
@@ -97,6 +101,7 @@ function textMatcher(raw: string): Matcher {
 
 function objectMatcher(q: SpeciesQuery): Matcher {
   if (typeof q !== "object" || q === null) throw invalid("requires a text or a query object { formula, name, cas, phase }", q);
+  rejectUnknownKeys(q, QUERY_KEYS, "findSpecies", "query");
   const { formula, name, cas, phase } = q;
   for (const [field, v] of Object.entries({ formula, name, cas, phase })) {
     if (v !== undefined && (typeof v !== "string" || v.trim() === "")) throw invalid(`requires ${field} to be a non-empty text`, q);

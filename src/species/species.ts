@@ -1,7 +1,10 @@
 import { RxthermError } from "../errors.js";
-import { describeValue, optionsOf } from "../guards.js";
+import { describeValue, knownKeys, optionsOf } from "../guards.js";
 import { builtInLibrary } from "./builtInLibrary.js";
 import type { Library, LibraryGetOptions, Species } from "./types.js";
+
+/** The option keys species() reads (a misspelt one is an error, not a silent default). */
+const GET_KEYS = /* @__PURE__ */ knownKeys<LibraryGetOptions>()("dataset");
 
 /**
  * Look up a species by key (`"CO2(g)"`), by formula when only one phase exists (`"CO2"`), or by
@@ -29,7 +32,7 @@ export function species(key: string, library?: Library, options?: LibraryGetOpti
   if (typeof key !== "string") {
     throw new RxthermError("INVALID_ARGUMENT", `species requires a key as text, got ${describeValue(key)}`, { path: "key", value: describeValue(key) });
   }
-  return libraryOf(library, "species", "library").get(key, optionsOf(options, "species"));
+  return libraryOf(library, "species", "library").get(key, optionsOf(options, "species", "options", GET_KEYS));
 }
 
 /**

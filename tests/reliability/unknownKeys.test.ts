@@ -6,7 +6,7 @@ import { describe, expect, it } from "vitest";
 import {
   adiabaticReactionTemperature, adiabaticTemperatureRise, availableHeat, createLibrary, efficiencyCurve, equilibriumConstant,
   flueGasDewPoint, heatDuty, heatingValue, massToMolarFlows, molarToMassFlows, reactionEnthalpy, reactionEntropy, reactionGibbs,
-  reconcileExtents, totalMassFlow, validateSpeciesData, wobbeIndex,
+  reconcileExtents, totalMassFlow, validateSpeciesData, wobbeIndex, species, findSpecies,
 } from "../../src/index.js";
 import { caught } from "../_helpers/caught.js";
 
@@ -38,6 +38,8 @@ const CASES: [string, () => unknown, string, string | null][] = [
   ["totalMassFlow options", () => totalMassFlow({ H2O: 1 }, { massUnits: "kg" } as never), "options.massUnits", "massUnit"],
   ["createLibrary options", () => createLibrary({ sources: {}, species: [] }, { bases: null } as never), "options.bases", "base"],
   ["validateSpeciesData options", () => validateSpeciesData({ sources: {}, species: [] }, { allowBuiltinSources: true } as never), "options.allowBuiltinSources", "allowBuiltInSources"],
+  ["species options", () => species("CH4(g)", undefined, { dataSet: "gri-mech-3.0" } as never), "options.dataSet", "dataset"],
+  ["findSpecies query", () => findSpecies({ name: "acetone", phse: "g" } as never), "query.phse", "phase"],
 ];
 
 describe("unknown option and input keys", () => {
