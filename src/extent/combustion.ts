@@ -9,6 +9,7 @@ import { checkMixtureLimits } from "./mixtureLimits.js";
 import { attachView } from "../view/attachView.js";
 import { COMBUSTION_VIEW } from "./internal/extentView.js";
 import { describeValue, finiteResult, requireRecord } from "../guards.js";
+import { speciesByName } from "../formula/speciesNames.js";
 
 /**
  * Dry air by mole fraction, with its argon and CO₂ (pass it as `oxidizer` where the argon and the
@@ -133,10 +134,12 @@ export interface CombustionInput {
    */
   allowExtremeMixture?: boolean;
   /**
-   * Species library used to read fuel keys that are not formulas (names such as `"methane"`), as the
-   * flame functions and `availableHeat` do; pass `builtInLibrary()` for the built-in names. Keys that
-   * are formulas (`"CH4(g)"`, `"CH4"`) are read directly.
-   * @defaultValue none (formulas only)
+   * Species library used to read fuel keys that are not formulas (names), as the flame functions
+   * and `availableHeat` do. Without it names are those of the built-in species (`"methane"`,
+   * `"propane"`, `"n-butane"`: the table of names the built-in library takes its names
+   * from), so the result is the same as with `builtInLibrary()`. Keys that are formulas (`"CH4(g)"`,
+   * `"CH4"`) are read directly.
+   * @defaultValue the names of the built-in species
    */
   library?: FormulaLookup;
 }
@@ -192,7 +195,8 @@ export interface CombustionResult {
  * The default oxidizer is the 21/79 air ({@link AIR_21_79}) shared with the flame functions and
  * `availableHeat`; pass `oxidizer: DRY_AIR` for air with its argon and CO₂. Excess air above 3
  * (300 %) or φ outside 0.05–20 is taken as a unit slip unless `allowExtremeMixture: true`. Fuel keys
- * are formulas, or names looked up in `library`.
+ * are formulas, or names: those of the built-in species (`"methane"`, `"propane"`, `"hydrogen"`; the
+ * same reading as the flame functions and `availableHeat`), or those of `library` when given.
  *
  * The fuel is reduced to its elements (C, H, O, N, S and noble gases); complete combustion makes
  * CO₂, H₂O, SO₂ and N₂ (fuel nitrogen leaves as N₂ — thermal and fuel NOx are trace amounts not
@@ -217,12 +221,16 @@ export interface CombustionResult {
  * @throws {@link RxthermError} `NO_OXIDIZER` for an oxidizer without O₂
  * @throws {@link RxthermError} `ELEMENTS_NOT_COVERED` for fuel elements other than C, H, O, N, S and noble gases (details: `elements`)
  * @throws {@link RxthermError} `OUT_OF_RANGE` for a humidity temperature outside 273.15–647.096 K
- * @throws formula parse errors (their own codes) for a fuel key that is not a formula
+ * @throws {@link RxthermError} `UNKNOWN_SPECIES` for a fuel name that names no built-in species (or no species of `library`;
+ *   a mixture such as `"natural gas"` is given as species amounts; search with `findSpecies`), `AMBIGUOUS_PHASE` for a name
+ *   of several phases without one (`"ethanol"`: write `"ethanol(l)"`; details: `choices`)
+ * @throws formula parse errors (their own codes) for a fuel key that reads as a malformed formula
  * @example
  * const r = combustion({ fuel: { "CH4(g)": 1 }, oxidizer: AIR_21_79 });
  * r.theoreticalO2       // => 2
  * r.air                 // => 9.5238… (mol air per mol CH4)
  * r.dry["CO2(g)"]       // => 0.11731… (11.7 % dry CO₂)
+ * combustion({ fuel: { propane: 1 } }).theoreticalO2 // => 5 (names of the built-in species, as in the flame functions)
  * @category Combustion
  * @see the 21/79 air of combustion practice ({@link AIR_21_79}, the default) and the U.S. Standard Atmosphere, 1976 ({@link DRY_AIR});
  *   complete-combustion stoichiometry by elements: common practice
@@ -360,22 +368,17 @@ function fuelElements(fuelIn: CombustionInput["fuel"], fn: string, library: Form
 }
 
 /**
- * The formula of a fuel key: read as a formula, or — when it is not one and a library is given —
- * looked up there by key, formula or name (as the flame functions do).
+ * The formula of a fuel key: read as a formula, or — when it is not one — looked up by name: in
+ * `library` when one is given (by key, formula or name, as the flame functions do), else in the
+ * table of names of the built-in species (src/formula/speciesNames.ts, the table the built-in library
+ * takes its names from), so a name reads the same with and without `library: builtInLibrary()`.
  */
 function fuelFormula(key: string, fn: string, library: FormulaLookup | undefined): Formula {
   try {
     return formulaOf(key, fn, "fuel");
   } catch (e) {
     if (!(e instanceof RxthermError)) throw e;
-    if (library === undefined) {
-      if (!/^[a-z][a-z0-9 ,'-]*$/.test(key)) throw e; // formula-like text: keep the formula error (UNKNOWN_ELEMENT...)
-      throw new RxthermError(
-        "UNKNOWN_SPECIES",
-        `${fn}: fuel key "${key}" is not a formula; write the formula (e.g. "CH4(g)") or pass library: builtInLibrary() to read names as the flame functions do (${e.message.replace(/^\[rxtherm\] /, "")})`,
-        { ...e.details, species: key, formulaError: e.code },
-      );
-    }
+    if (library === undefined) return namedFuelFormula(key, fn, e);
     if (library === null || typeof library !== "object" || typeof library.get !== "function") {
       throw new RxthermError("INVALID_ARGUMENT", `${fn} requires library to be a species library (with get)`, { library: String(library) });
     }
@@ -388,6 +391,33 @@ function fuelFormula(key: string, fn: string, library: FormulaLookup | undefined
       throw e2;
     }
   }
+}
+
+/**
+ * A fuel key that is not a formula, read as the name of a built-in species. The outcomes match
+ * `builtInLibrary().get(key)`: one species, AMBIGUOUS_PHASE for a name of several phases
+ * (`"water"`, `"ethanol"`: add the phase), UNKNOWN_SPECIES for a name of no species.
+ */
+function namedFuelFormula(key: string, fn: string, formulaError: RxthermError): Formula {
+  const rows = speciesByName(key);
+  if (rows.length === 1) return formulaOf(rows[0]!.formula, fn, "fuel");
+  if (rows.length > 1) {
+    const choices = rows.map((r) => r.key);
+    throw new RxthermError(
+      "AMBIGUOUS_PHASE",
+      `${fn} needs the formula of fuel ${key}: ${JSON.stringify(key)} names a species in more than one phase; name the phase, one of ${choices.join(", ")}`,
+      { key, choices, species: key },
+    );
+  }
+  // formula-like text keeps the formula error (UNKNOWN_ELEMENT...); a name has a space, starts in
+  // lower case or has two lower-case letters in a row (no element symbol does)
+  const bare = key.trim().replace(/\([a-z]+\)$/, "");
+  if (!/\s|^[a-z]|[a-z]{2}/.test(bare)) throw formulaError;
+  throw new RxthermError(
+    "UNKNOWN_SPECIES",
+    `${fn}: fuel key "${key}" is neither a formula nor the name of a built-in species; write the formula (e.g. "CH4(g)"), give a mixture such as natural gas as species amounts (e.g. { "CH4(g)": 0.95, "C2H6(g)": 0.03, "N2(g)": 0.02 }), search with findSpecies(${JSON.stringify(key)}), or pass the library that names it as library`,
+    { ...formulaError.details, species: key, formulaError: formulaError.code },
+  );
 }
 
 function ultimateElements(fuel: UltimateFuel, fn: string): FuelElements {

@@ -118,7 +118,9 @@ export interface EquilibriumResult {
  * rises to at most mole fraction 1e-4), and a cold restart follows a failed warm start. The
  * element rows are scaled by each element's own amount, so an element present at 1e-12 of the
  * feed converges like a major one, continuous with the answer without it. Elements absent from the feed are removed and product
- * species holding them excluded (listed in `excluded`); a condensed species enters when it
+ * species holding them excluded (listed in `excluded`); a product that no non-negative composition
+ * of the feed species can hold (CH4 beside HCl, CO and He fed as such) is held at exactly 0 when
+ * the solve needs it; a condensed species enters when it
  * lowers G and leaves when its amount vanishes. With `H` the temperature is found by bracketed
  * Newton on H(T) using the equilibrium heat capacity (composition shift included).
  *
@@ -178,7 +180,7 @@ export function equilibriumComposition(input: EquilibriumInput, options: Equilib
   if (!Array.isArray(input.species) || input.species.length === 0) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a non-empty list of product species`, { species: input.species });
   }
-  const feedElements = elementTotals(fn, input);
+  const { totals: feedElements, directions } = elementTotals(fn, input);
   requireArray(input.species, fn, "input.species");
   input.species.forEach((key, i) => {
     if (typeof key !== "string") {
@@ -186,7 +188,7 @@ export function equilibriumComposition(input: EquilibriumInput, options: Equilib
     }
   });
   const products = input.species.map((key) => ({ key, species: flameSpecies(fn, key, input.library) }));
-  const engine = prepareEngine(fn, products, feedElements);
+  const engine = prepareEngine(fn, products, feedElements, directions);
   let T: number;
   let temperatureIterations = 0;
   let energyResidual = 0;
@@ -215,10 +217,10 @@ function buildResult(e: Engine, T: number, P: number, temperatureIterations: num
   for (let j = 0; j < e.keys.length; j++) {
     const n = amount(e, j);
     moles[e.keys[j]!] = n;
-    if (e.problem.gas[j]) gasMoles += n;
+    if (e.gasAll[j]) gasMoles += n;
     else if (n > 0) condensed[e.keys[j]!] = n;
   }
-  for (let j = 0; j < e.keys.length; j++) if (e.problem.gas[j]) moleFractions[e.keys[j]!] = moles[e.keys[j]!]! / gasMoles;
+  for (let j = 0; j < e.keys.length; j++) if (e.gasAll[j]) moleFractions[e.keys[j]!] = moles[e.keys[j]!]! / gasMoles;
   const elementPotentials: Record<string, number> = {};
   e.rows.forEach((r, i) => {
     elementPotentials[e.elements[r]!] = e.state.pi[i]!;
@@ -237,14 +239,18 @@ function buildResult(e: Engine, T: number, P: number, temperatureIterations: num
   };
 }
 
-/** Element totals (symbol → mol of atoms) of the feed or of the given element amounts. */
-function elementTotals(fn: string, input: EquilibriumInput): Map<string, number> {
+/**
+ * Element totals (symbol → mol of atoms) of the feed or of the given element amounts, and the
+ * element counts of each feed species of positive amount (null for element amounts).
+ */
+function elementTotals(fn: string, input: EquilibriumInput): { totals: Map<string, number>; directions: Readonly<Record<string, number>>[] | null } {
   const hasFeed = input.feed !== undefined;
   const hasEl = input.elements !== undefined;
   if (hasFeed === hasEl) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires exactly one of feed and elements`, {});
   }
   const totals = new Map<string, number>();
+  const directions: Readonly<Record<string, number>>[] = [];
   const src = (hasFeed ? input.feed : input.elements) as Record<string, number>;
   if (src === null || typeof src !== "object") {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${hasFeed ? "feed" : "elements"} to be an object of amounts`, {});
@@ -257,6 +263,7 @@ function elementTotals(fn: string, input: EquilibriumInput): Map<string, number>
     if (hasFeed) {
       const s: Species = flameSpecies(fn, key, input.library);
       for (const [el, c] of Object.entries(s.formula.elements)) totals.set(el, (totals.get(el) ?? 0) + n * c);
+      directions.push(s.formula.elements);
     } else {
       totals.set(key, (totals.get(key) ?? 0) + n);
     }
@@ -264,5 +271,5 @@ function elementTotals(fn: string, input: EquilibriumInput): Map<string, number>
   if (totals.size === 0) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a feed with a positive amount of some element`, {});
   }
-  return totals;
+  return { totals, directions: hasFeed ? directions : null };
 }

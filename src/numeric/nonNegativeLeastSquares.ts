@@ -50,12 +50,14 @@ export function nonNegativeLeastSquares(a0: Float64Array, m: number, n: number, 
     }
   };
   const s = new Float64Array(n);
+  // columns whose entry did not improve the fit at the current x (round-off); cleared when x moves
+  const blocked = new Uint8Array(n);
   for (let outer = 0; outer < 3 * n + 10; outer++) {
     gradient();
     let t = -1;
     let best = 0;
     for (let j = 0; j < n; j++) {
-      if (!passive[j] && w[j]! > colTol[j]! && w[j]! / colTol[j]! > best) {
+      if (!passive[j] && !blocked[j] && w[j]! > colTol[j]! && w[j]! / colTol[j]! > best) {
         best = w[j]! / colTol[j]!;
         t = j;
       }
@@ -64,6 +66,14 @@ export function nonNegativeLeastSquares(a0: Float64Array, m: number, n: number, 
     passive[t] = 1;
     for (let inner = 0; inner < 3 * n + 10; inner++) {
       if (!leastSquaresOnPassive(a, m, n, b, passive, s)) break;
+      if (inner === 0 && !(s[t]! > 0)) {
+        // in exact arithmetic the column that entered (positive gradient) comes out positive; at
+        // round-off it may not (then the step below was 0/0): leave it out until x moves, try the next
+        passive[t] = 0;
+        blocked[t] = 1;
+        break;
+      }
+      blocked.fill(0);
       let allPositive = true;
       for (let j = 0; j < n; j++) if (passive[j] && s[j]! <= 0) allPositive = false;
       if (allPositive) {
@@ -73,7 +83,8 @@ export function nonNegativeLeastSquares(a0: Float64Array, m: number, n: number, 
       let alpha = Infinity;
       for (let j = 0; j < n; j++) {
         if (passive[j] && s[j]! <= 0) {
-          const r = x[j]! / (x[j]! - s[j]!);
+          const d = x[j]! - s[j]!; // ≥ 0; 0 only for x_j = s_j = 0, a step of 0
+          const r = d > 0 ? x[j]! / d : 0;
           if (r < alpha) alpha = r;
         }
       }

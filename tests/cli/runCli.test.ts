@@ -118,6 +118,10 @@ describe("runCli(argv, io)", () => {
     expect(r.theoreticalAir).toBeCloseTo(2 / 0.21, 3);
     const flow = JSON.parse((await run(["air", "CH4", "--fuel-flow", "3.6kmol/h", "--json"])).out);
     expect(flow.flows.fuel.molPerS).toBeCloseTo(1, 12); // 3.6 kmol/h = 1 mol/s
+    // a fuel name reads as in the flame command, flows included
+    const named = JSON.parse((await run(["air", "methane", "--fuel-flow", "3.6kmol/h", "--json"])).out);
+    expect(named.flows).toEqual(flow.flows);
+    expect(named.theoreticalO2).toBe(r.theoreticalO2);
   });
 
   it("flame: methane–air at φ = 1 burns near 2225 K at equilibrium, complete combustion hotter", async () => {

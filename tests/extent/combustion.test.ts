@@ -122,14 +122,74 @@ describe("combustion", () => {
     expect(caught(() => combustion({ fuel: { "CH4(g)": 1 }, oxidizer: "ozone" as "air" })).code).toBe("INVALID_ARGUMENT");
   });
 
-  it("fuel names resolve through a library as in the flame functions; without one the error says how", async () => {
+  it("fuel names resolve through a library as in the flame functions, and without one through the same names", async () => {
     const { builtInLibrary } = await import("../../src/species/builtInLibrary.js");
     const byName = combustion({ fuel: { methane: 1, "n-C4H10(g)": 0.5 }, library: builtInLibrary() });
     expect(byName.theoreticalO2).toBeCloseTo(2 + 0.5 * 6.5, 12);
-    const e = caught(() => combustion({ fuel: { methane: 1 } }));
-    expect(e.code).toBe("UNKNOWN_SPECIES");
-    expect(e.message).toContain("builtInLibrary()");
+    // the documented example: propane needs 5 O2 (C3H8 + 5 O2 -> 3 CO2 + 4 H2O)
+    expect(combustion({ fuel: { propane: 1 } }).theoreticalO2).toBe(5);
+    expect(combustion({ fuel: { methane: 1, "n-butane": 0.5 } })).toEqual(byName);
     expect(caught(() => combustion({ fuel: { unobtainium: 1 }, library: builtInLibrary() })).code).toBe("UNKNOWN_SPECIES");
+  });
+
+  it("a fuel name means the same species without a library as with builtInLibrary(): every built-in name and alias", async () => {
+    const { builtInLibrary } = await import("../../src/species/builtInLibrary.js");
+    const { SPECIES_NAMES } = await import("../../src/formula/speciesNames.js");
+    const outcome = (fuel: Flows, library?: ReturnType<typeof builtInLibrary>): unknown => {
+      try {
+        return combustion({ fuel, excessAir: 0.1, ...(library !== undefined ? { library } : {}) });
+      } catch (e) {
+        return (e as { code: string }).code;
+      }
+    };
+    let names = 0;
+    for (const row of SPECIES_NAMES) {
+      for (const n of [row.name, ...row.aliases, row.name.toUpperCase(), `${row.name}(${row.phase})`]) {
+        expect(outcome({ [n]: 1 }), n).toEqual(outcome({ [n]: 1 }, builtInLibrary()));
+        names++;
+      }
+    }
+    expect(names).toBeGreaterThan(300);
+  });
+
+  it("same name, same result: combustion, availableHeat and the flame functions read methane, propane, hydrogen alike", async () => {
+    const { availableHeat } = await import("../../src/energy/availableHeat.js");
+    const { adiabaticFlameTemperature } = await import("../../src/flame/adiabaticFlameTemperature.js");
+    const cases: [string, string][] = [["methane", "CH4(g)"], ["propane", "C3H8(g)"], ["hydrogen", "H2(g)"], ["n-butane", "n-C4H10(g)"], ["carbon monoxide", "CO(g)"]];
+    for (const [name, key] of cases) {
+      const c = combustion({ fuel: { [name]: 1 }, excessAir: 0.15 });
+      expect(c, name).toEqual(combustion({ fuel: { [key]: 1 }, excessAir: 0.15 }));
+      const h = availableHeat({ fuel: name, excessAir: 0.15, flueT: 450 });
+      expect(h, name).toEqual(availableHeat({ fuel: key, excessAir: 0.15, flueT: 450 }));
+      const f = adiabaticFlameTemperature({ fuel: name, excessAir: 0.15 });
+      expect(f.T, name).toBe(adiabaticFlameTemperature({ fuel: key, excessAir: 0.15 }).T);
+      // the air of the flame is the air of combustion (same default air, same theoretical O2)
+      expect(f.oxidizer["O2(g)"]!, name).toBeCloseTo(c.o2Supplied, 12);
+      expect(f.oxidizer["N2(g)"]!, name).toBeCloseTo(c.airFlows["N2(g)"]!, 12);
+    }
+    for (const call of [
+      () => combustion({ fuel: { "natural gas": 1 } }),
+      () => availableHeat({ fuel: "natural gas", flueT: 450 }),
+      () => adiabaticFlameTemperature({ fuel: "natural gas" }),
+    ]) {
+      const e = caught(call);
+      expect(e.code).toBe("UNKNOWN_SPECIES");
+      expect(e.message).toContain("findSpecies");
+    }
+  });
+
+  it("a name is not a mixture: natural gas is UNKNOWN_SPECIES pointing to findSpecies; a name of two phases asks for the phase", () => {
+    const e = caught(() => combustion({ fuel: { "natural gas": 1 } }));
+    expect(e.code).toBe("UNKNOWN_SPECIES");
+    expect(e.message).toContain("findSpecies");
+    expect(e.message).toContain("species amounts");
+    expect(e.details.species).toBe("natural gas");
+    const w = caught(() => combustion({ fuel: { ethanol: 1 } }));
+    expect(w.code).toBe("AMBIGUOUS_PHASE");
+    expect(w.details.choices).toEqual(["C2H5OH(g)", "C2H5OH(l)"]);
+    expect(combustion({ fuel: { "ethanol(l)": 1 } }).theoreticalO2).toBe(3);
+    // formula-like text keeps the formula's own error
+    expect(caught(() => combustion({ fuel: { Xx2: 1 } })).code).toBe("UNKNOWN_ELEMENT");
   });
 
   it("a biogas with CO2, N2 and H2S burns by its elements", () => {

@@ -30,3 +30,18 @@ describe("nonNegativeLeastSquares", () => {
     },
   );
 });
+
+describe("nonNegativeLeastSquares at round-off", () => {
+  it("a column whose entry does not improve the fit at round-off is set aside, not turned into 0/0 (NaN)", () => {
+    // rows C, H, O; columns H2O, O2, CH4, O, H2 and −(CH4 + O2); b = −O: O(g) beside CH4 + 2 O
+    // (the support test of the equilibrium engine; before the fix the step ratio was 0/0 and x NaN)
+    const a = new Float64Array([
+      0, 0, 1, 0, 0, -1,
+      2, 0, 4, 0, 2, -4,
+      1, 2, 0, 1, 0, -2,
+    ]);
+    const { x, residual } = nonNegativeLeastSquares(a, 3, 6, new Float64Array([0, 0, -1]));
+    expect(residual).toBeLessThan(1e-12);
+    for (const v of x) expect(Number.isFinite(v) && v >= 0).toBe(true);
+  });
+});

@@ -18,6 +18,7 @@ import { flameSpecies } from "./flameLinks.js";
 import {
   amount,
   fullElementResidual,
+  enthalpyRT,
   prepareEngine,
   setFeedElements,
   solveEnergy,
@@ -384,7 +385,8 @@ export function solveFlamePoint(s: FlameSetup, pt: FlamePoint): FlamePointResult
   let engine = s.engine;
   if (engine === null || !setFeedElements(engine, els)) {
     const products = s.productKeys.map((key) => ({ key, species: cached(s, key) }));
-    engine = prepareEngine(s.fn, products, els);
+    const feed = [...rx.fuel, ...rx.oxidizer, ...rx.diluent].map((m) => m.species.formula.elements);
+    engine = prepareEngine(s.fn, products, els, feed);
     s.engine = engine;
     s.lastT = Number.NaN;
   }
@@ -409,9 +411,9 @@ export function solveFlamePoint(s: FlameSetup, pt: FlamePoint): FlamePointResult
   for (let j = 0; j < engine.keys.length; j++) {
     const n = amount(engine, j);
     moles[engine.keys[j]!] = n;
-    if (engine.problem.gas[j]) gas += n;
+    if (engine.gasAll[j]) gas += n;
     else if (n > 0) condensed[engine.keys[j]!] = n;
-    scale += Math.abs(n * engine.hRT[j]! * R * sol.T);
+    scale += Math.abs(n * enthalpyRT(engine, j) * R * sol.T);
   }
   return {
     T: sol.T,

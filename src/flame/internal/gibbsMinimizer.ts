@@ -10,7 +10,8 @@
  * (elements + 1 + active condensed) in the unknowns π_i, Δln N and Δn_k, solved by Gaussian
  * elimination with partial pivoting after symmetric diagonal scaling (so an element at 1e-12 of
  * the feed keeps its digits), for the change of the element potentials (a direction the matrix
- * cannot resolve at round-off is left unchanged). Steps are damped so that no major species
+ * cannot resolve at round-off is left unchanged, and the equation set aside for it is the one that
+ * has become dependent, never the ln N row). Steps are damped so that no major species
  * rises by more than a factor e² per iteration and no trace species jumps above mole fraction
  * 1e-4 in one step — the damping rules of Gordon and McBride (NASA RP-1311, 1994) — and no major
  * species falls by more than a factor e^20 (ours); trace species
@@ -528,8 +529,20 @@ export function solveDense(
     if (col < floorColumns && !(best > PIVOT_FLOOR)) {
       // an element-potential direction the matrix cannot resolve (after scaling, its pivot is
       // at round-off): two element rows told apart only by species at ~1e-16 of them, e.g.
-      // O and C in CH3OH when only traces of O2 and C2H6 differ. Drop that equation and set the
-      // unknown to 0, so the direction is left as it is instead of taking a step of pure noise.
+      // O and C in CH3OH when only traces of O2 and C2H6 differ. Drop the equation that has
+      // become dependent — the remaining row nearest to zero, not the one with the largest
+      // round-off in this column (that may be the ln N row, whose loss leaves the total wrong) —
+      // and set the unknown to 0, so the direction is left as it is instead of taking a step of
+      // pure noise.
+      let flat = Infinity;
+      for (let row = col; row < size; row++) {
+        let rowMax = 0;
+        for (let k = col; k < size; k++) rowMax = Math.max(rowMax, Math.abs(M[row * size + k]!));
+        if (rowMax < flat) {
+          flat = rowMax;
+          piv = row;
+        }
+      }
       for (let k = col; k < size; k++) M[piv * size + k] = 0;
       M[piv * size + col] = 1;
       r[piv] = 0;

@@ -16,10 +16,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "n-C4H10(g)",
     "formula": "C4H10",
     "phase": "g",
-    "name": "n-butane",
-    "aliases": [
-      "butane"
-    ],
     "cas": "106-97-8",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -125.789,
@@ -69,10 +65,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "i-C4H10(g)",
     "formula": "C4H10",
     "phase": "g",
-    "name": "isobutane",
-    "aliases": [
-      "2-methylpropane"
-    ],
     "cas": "75-28-5",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -134.989,
@@ -122,10 +114,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "C3H6(g)",
     "formula": "C3H6",
     "phase": "g",
-    "name": "propylene",
-    "aliases": [
-      "propene"
-    ],
     "cas": "115-07-1",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": 20.0,
@@ -175,10 +163,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "n-C5H12(g)",
     "formula": "C5H12",
     "phase": "g",
-    "name": "n-pentane",
-    "aliases": [
-      "pentane"
-    ],
     "cas": "109-66-0",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -146.76,
@@ -228,10 +212,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "n-C6H14(g)",
     "formula": "C6H14",
     "phase": "g",
-    "name": "n-hexane",
-    "aliases": [
-      "hexane"
-    ],
     "cas": "110-54-3",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -166.92,
@@ -281,10 +261,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "n-C7H16(g)",
     "formula": "C7H16",
     "phase": "g",
-    "name": "n-heptane",
-    "aliases": [
-      "heptane"
-    ],
     "cas": "142-82-5",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -187.78,
@@ -334,10 +310,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "n-C8H18(g)",
     "formula": "C8H18",
     "phase": "g",
-    "name": "n-octane",
-    "aliases": [
-      "octane"
-    ],
     "cas": "111-65-9",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -208.75,
@@ -387,7 +359,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "C6H6(g)",
     "formula": "C6H6",
     "phase": "g",
-    "name": "benzene",
     "cas": "71-43-2",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": 82.88,
@@ -437,10 +408,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "C7H8(g)",
     "formula": "C7H8",
     "phase": "g",
-    "name": "toluene",
-    "aliases": [
-      "methylbenzene"
-    ],
     "cas": "108-88-3",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": 50.17,
@@ -490,10 +457,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "C2H5OH(g)",
     "formula": "C2H5OH",
     "phase": "g",
-    "name": "ethanol",
-    "aliases": [
-      "ethyl alcohol"
-    ],
     "cas": "64-17-5",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -234.949,
@@ -543,11 +506,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "CH3OCH3(g)",
     "formula": "CH3OCH3",
     "phase": "g",
-    "name": "dimethyl ether",
-    "aliases": [
-      "DME",
-      "methoxymethane"
-    ],
     "cas": "115-10-6",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -184.053,
@@ -597,10 +555,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "CH3COCH3(g)",
     "formula": "CH3COCH3",
     "phase": "g",
-    "name": "acetone",
-    "aliases": [
-      "propanone"
-    ],
     "cas": "67-64-1",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -214.813,
@@ -650,10 +604,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "CH3COOH(g)",
     "formula": "CH3COOH",
     "phase": "g",
-    "name": "acetic acid",
-    "aliases": [
-      "ethanoic acid"
-    ],
     "cas": "64-19-7",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -432.247,
@@ -703,10 +653,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "CH2O(g)",
     "formula": "CH2O",
     "phase": "g",
-    "name": "formaldehyde",
-    "aliases": [
-      "methanal"
-    ],
     "cas": "50-00-0",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -115.897,
@@ -756,10 +702,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "C2H4O(g)",
     "formula": "C2H4O",
     "phase": "g",
-    "name": "ethylene oxide",
-    "aliases": [
-      "oxirane"
-    ],
     "cas": "75-21-8",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -52.634,
@@ -809,7 +751,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "HF(g)",
     "formula": "HF",
     "phase": "g",
-    "name": "hydrogen fluoride",
     "cas": "7664-39-3",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -273.298,
@@ -859,10 +800,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "CH3Cl(g)",
     "formula": "CH3Cl",
     "phase": "g",
-    "name": "chloromethane",
-    "aliases": [
-      "methyl chloride"
-    ],
     "cas": "74-87-3",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -83.68,
@@ -912,10 +849,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "COS(g)",
     "formula": "COS",
     "phase": "g",
-    "name": "carbonyl sulfide",
-    "aliases": [
-      "carbon oxysulfide"
-    ],
     "cas": "463-58-1",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -138.399,
@@ -965,7 +898,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "CS2(g)",
     "formula": "CS2",
     "phase": "g",
-    "name": "carbon disulfide",
     "cas": "75-15-0",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": 116.699,
@@ -1015,7 +947,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "O(g)",
     "formula": "O",
     "phase": "g",
-    "name": "atomic oxygen",
     "cas": "17778-80-2",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": 249.174,
@@ -1065,7 +996,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "H2SO4(g)",
     "formula": "H2SO4",
     "phase": "g",
-    "name": "sulfuric acid",
     "cas": "7664-93-9",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -732.696,
@@ -1115,7 +1045,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "HNO3(g)",
     "formula": "HNO3",
     "phase": "g",
-    "name": "nitric acid",
     "cas": "7697-37-2",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -134.299,
@@ -1165,7 +1094,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "SO(g)",
     "formula": "SO",
     "phase": "g",
-    "name": "sulfur monoxide",
     "cas": "13827-32-2",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": 5.008,
@@ -1215,7 +1143,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "O3(g)",
     "formula": "O3",
     "phase": "g",
-    "name": "ozone",
     "cas": "10028-15-6",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": 141.799,
@@ -1265,7 +1192,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "HO2(g)",
     "formula": "HO2",
     "phase": "g",
-    "name": "hydroperoxyl radical",
     "cas": "3170-83-0",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": 12.552,
@@ -1315,10 +1241,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "CH3CHO(g)",
     "formula": "CH3CHO",
     "phase": "g",
-    "name": "acetaldehyde",
-    "aliases": [
-      "ethanal"
-    ],
     "cas": "75-07-0",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -166.189,
@@ -1368,10 +1290,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "1-C4H8(g)",
     "formula": "C4H8",
     "phase": "g",
-    "name": "1-butene",
-    "aliases": [
-      "but-1-ene"
-    ],
     "cas": "106-98-9",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -0.544,
@@ -1421,7 +1339,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "c-C6H12(g)",
     "formula": "C6H12",
     "phase": "g",
-    "name": "cyclohexane",
     "cas": "110-82-7",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -123.3,
@@ -1471,7 +1388,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "Ne(g)",
     "formula": "Ne",
     "phase": "g",
-    "name": "neon",
     "cas": "7440-01-9",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": 0.0,
@@ -1521,12 +1437,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "C(cr)",
     "formula": "C",
     "phase": "cr",
-    "name": "graphite",
-    "aliases": [
-      "C(gr)",
-      "C(s)",
-      "carbon"
-    ],
     "cas": "7782-42-5",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": 0.0,
@@ -1576,10 +1486,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "S(cr)",
     "formula": "S",
     "phase": "cr",
-    "name": "sulfur",
-    "aliases": [
-      "rhombic sulfur"
-    ],
     "cas": "7704-34-9",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": 0.0,
@@ -1675,10 +1581,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "Al(cr)",
     "formula": "Al",
     "phase": "cr",
-    "name": "aluminium",
-    "aliases": [
-      "aluminum"
-    ],
     "cas": "7429-90-5",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -0.0,
@@ -1752,10 +1654,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "MgCO3(cr)",
     "formula": "MgCO3",
     "phase": "cr",
-    "name": "magnesite",
-    "aliases": [
-      "magnesium carbonate"
-    ],
     "cas": "546-93-0",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -1111.709,
@@ -1789,7 +1687,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "NH4NO3(cr)",
     "formula": "NH4NO3",
     "phase": "cr",
-    "name": "ammonium nitrate",
     "cas": "6484-52-2",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -365.598,
@@ -1929,10 +1826,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "CH3OH(l)",
     "formula": "CH3OH",
     "phase": "l",
-    "name": "methanol",
-    "aliases": [
-      "methyl alcohol"
-    ],
     "cas": "67-56-1",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -238.909,
@@ -1966,10 +1859,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "C2H5OH(l)",
     "formula": "C2H5OH",
     "phase": "l",
-    "name": "ethanol",
-    "aliases": [
-      "ethyl alcohol"
-    ],
     "cas": "64-17-5",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -277.508,
@@ -2003,10 +1892,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "n-C7H16(l)",
     "formula": "C7H16",
     "phase": "l",
-    "name": "n-heptane",
-    "aliases": [
-      "heptane"
-    ],
     "cas": "142-82-5",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -224.349,
@@ -2040,10 +1925,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "n-C8H18(l)",
     "formula": "C8H18",
     "phase": "l",
-    "name": "n-octane",
-    "aliases": [
-      "octane"
-    ],
     "cas": "111-65-9",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -250.259,
@@ -2077,7 +1958,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "C6H6(l)",
     "formula": "C6H6",
     "phase": "l",
-    "name": "benzene",
     "cas": "71-43-2",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": 49.08,
@@ -2111,10 +1991,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "C7H8(l)",
     "formula": "C7H8",
     "phase": "l",
-    "name": "toluene",
-    "aliases": [
-      "methylbenzene"
-    ],
     "cas": "108-88-3",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": 12.18,
@@ -2148,7 +2024,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "H2SO4(l)",
     "formula": "H2SO4",
     "phase": "l",
-    "name": "sulfuric acid",
     "cas": "7664-93-9",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -814.006,
@@ -2182,7 +2057,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "H2O2(l)",
     "formula": "H2O2",
     "phase": "l",
-    "name": "hydrogen peroxide",
     "cas": "7722-84-1",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -187.777,
@@ -2216,10 +2090,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "CH3OH(g)",
     "formula": "CH3OH",
     "phase": "g",
-    "name": "methanol",
-    "aliases": [
-      "methyl alcohol"
-    ],
     "cas": "67-56-1",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": -200.999,
@@ -2269,7 +2139,6 @@ export const BURCAT_RUSCIC_2005_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "Fe(cr)",
     "formula": "Fe",
     "phase": "cr",
-    "name": "iron",
     "cas": "7439-89-6",
     "dataset": "burcat-ruscic-2005",
     "hf298KJPerMol": 0,

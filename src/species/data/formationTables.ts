@@ -14,7 +14,6 @@ export const FORMATION_TABLE_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "HNO3(l)",
     "formula": "HNO3",
     "phase": "l",
-    "name": "nitric acid",
     "dataset": "memory",
     "hf298KJPerMol": -174.1,
     "hf298Source": "memory",
@@ -39,10 +38,6 @@ export const FORMATION_TABLE_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "NaHCO3(cr)",
     "formula": "NaHCO3",
     "phase": "cr",
-    "name": "sodium bicarbonate",
-    "aliases": [
-      "sodium hydrogen carbonate"
-    ],
     "dataset": "memory",
     "hf298KJPerMol": -950.81,
     "hf298Source": "memory",

@@ -15,11 +15,6 @@ export const JANAF_ROW_FIT_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "Ca(OH)2(cr)",
     "formula": "Ca(OH)2",
     "phase": "cr",
-    "name": "calcium hydroxide",
-    "aliases": [
-      "slaked lime",
-      "portlandite"
-    ],
     "dataset": "nist-janaf",
     "hf298KJPerMol": -986.085,
     "hf298Source": "nist-janaf-1998",
@@ -49,10 +44,6 @@ export const JANAF_ROW_FIT_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "Na2CO3(cr)",
     "formula": "Na2CO3",
     "phase": "cr",
-    "name": "sodium carbonate",
-    "aliases": [
-      "soda ash"
-    ],
     "dataset": "nist-janaf",
     "hf298KJPerMol": -1130.768,
     "hf298Source": "nist-janaf-1998",
@@ -103,10 +94,6 @@ export const JANAF_ROW_FIT_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "KCl(cr)",
     "formula": "KCl",
     "phase": "cr",
-    "name": "potassium chloride",
-    "aliases": [
-      "sylvite"
-    ],
     "dataset": "nist-janaf",
     "hf298KJPerMol": -436.684,
     "hf298Source": "nist-janaf-1998",
@@ -137,7 +124,6 @@ export const JANAF_ROW_FIT_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "CaCl2(cr)",
     "formula": "CaCl2",
     "phase": "cr",
-    "name": "calcium chloride",
     "dataset": "nist-janaf",
     "hf298KJPerMol": -795.797,
     "hf298Source": "nist-janaf-1998",
@@ -168,10 +154,6 @@ export const JANAF_ROW_FIT_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "NH4Cl(cr)",
     "formula": "NH4Cl",
     "phase": "cr",
-    "name": "ammonium chloride",
-    "aliases": [
-      "sal ammoniac"
-    ],
     "dataset": "nist-janaf",
     "hf298KJPerMol": -314.553,
     "hf298Source": "nist-janaf-1998",
@@ -256,10 +238,6 @@ export const JANAF_ROW_FIT_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "Na2SO4(cr)",
     "formula": "Na2SO4",
     "phase": "cr",
-    "name": "sodium sulfate",
-    "aliases": [
-      "thenardite"
-    ],
     "dataset": "nist-janaf",
     "hf298KJPerMol": -1387.816,
     "hf298Source": "nist-janaf-1998",
@@ -326,10 +304,6 @@ export const JANAF_ROW_FIT_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "NaOH(l)",
     "formula": "NaOH",
     "phase": "l",
-    "name": "sodium hydroxide",
-    "aliases": [
-      "caustic soda"
-    ],
     "dataset": "nist-janaf",
     "hf298KJPerMol": -416.878,
     "hf298Source": "nist-janaf-1998",
@@ -369,10 +343,6 @@ export const JANAF_ROW_FIT_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "NaOH(cr)",
     "formula": "NaOH",
     "phase": "cr",
-    "name": "sodium hydroxide",
-    "aliases": [
-      "caustic soda"
-    ],
     "dataset": "nist-janaf",
     "hf298KJPerMol": -425.931,
     "hf298Source": "nist-janaf-1998",

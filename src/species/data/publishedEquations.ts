@@ -15,11 +15,6 @@ export const PUBLISHED_EQUATION_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "CaCO3(cr)",
     "formula": "CaCO3",
     "phase": "cr",
-    "name": "calcite",
-    "aliases": [
-      "calcium carbonate",
-      "limestone"
-    ],
     "dataset": "jacobs-1981",
     "hf298KJPerMol": -1206.92,
     "hf298Source": "nbs-1982",
@@ -54,10 +49,6 @@ export const PUBLISHED_EQUATION_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "CaSO4(cr)",
     "formula": "CaSO4",
     "phase": "cr",
-    "name": "anhydrite",
-    "aliases": [
-      "calcium sulfate"
-    ],
     "dataset": "robie-1989",
     "hf298KJPerMol": -1434.11,
     "hf298Source": "memory",
@@ -92,10 +83,6 @@ export const PUBLISHED_EQUATION_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "CH3COCH3(l)",
     "formula": "CH3COCH3",
     "phase": "l",
-    "name": "acetone",
-    "aliases": [
-      "propanone"
-    ],
     "dataset": "perry-2008",
     "hf298KJPerMol": -248.1,
     "hf298Source": "memory",
@@ -125,10 +112,6 @@ export const PUBLISHED_EQUATION_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "CH3COOH(l)",
     "formula": "CH3COOH",
     "phase": "l",
-    "name": "acetic acid",
-    "aliases": [
-      "ethanoic acid"
-    ],
     "dataset": "perry-2008",
     "hf298KJPerMol": -484.5,
     "hf298Source": "memory",
@@ -157,7 +140,6 @@ export const PUBLISHED_EQUATION_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "CS2(l)",
     "formula": "CS2",
     "phase": "l",
-    "name": "carbon disulfide",
     "dataset": "perry-2008",
     "hf298KJPerMol": 89.7,
     "hf298Source": "memory",
@@ -190,10 +172,6 @@ export const PUBLISHED_EQUATION_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "CO(NH2)2(cr)",
     "formula": "CO(NH2)2",
     "phase": "cr",
-    "name": "urea",
-    "aliases": [
-      "carbamide"
-    ],
     "dataset": "nist-webbook",
     "hf298KJPerMol": -333.39,
     "hf298Source": "nist-webbook",

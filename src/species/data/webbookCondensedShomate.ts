@@ -13,11 +13,6 @@ export const WEBBOOK_CONDENSED_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "CaO(cr)",
     "formula": "CaO",
     "phase": "cr",
-    "name": "lime",
-    "aliases": [
-      "calcium oxide",
-      "quicklime"
-    ],
     "dataset": "nist-janaf",
     "hf298KJPerMol": -635.0894,
     "hf298Source": "nist-webbook",
@@ -49,10 +44,6 @@ export const WEBBOOK_CONDENSED_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "MgO(cr)",
     "formula": "MgO",
     "phase": "cr",
-    "name": "periclase",
-    "aliases": [
-      "magnesium oxide"
-    ],
     "dataset": "nist-janaf",
     "hf298KJPerMol": -601.2408,
     "hf298Source": "nist-webbook",
@@ -84,10 +75,6 @@ export const WEBBOOK_CONDENSED_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "NaCl(cr)",
     "formula": "NaCl",
     "phase": "cr",
-    "name": "halite",
-    "aliases": [
-      "sodium chloride"
-    ],
     "dataset": "nist-janaf",
     "hf298KJPerMol": -411.1203,
     "hf298Source": "nist-webbook",
@@ -119,11 +106,6 @@ export const WEBBOOK_CONDENSED_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "FeO(cr)",
     "formula": "FeO",
     "phase": "cr",
-    "name": "wustite",
-    "aliases": [
-      "iron(II) oxide",
-      "ferrous oxide"
-    ],
     "dataset": "nist-janaf",
     "hf298KJPerMol": -272.0441,
     "hf298Source": "nist-webbook",
@@ -155,7 +137,6 @@ export const WEBBOOK_CONDENSED_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "Fe3O4(cr)",
     "formula": "Fe3O4",
     "phase": "cr",
-    "name": "magnetite",
     "dataset": "nist-janaf",
     "hf298KJPerMol": -1120.894,
     "hf298Source": "nist-webbook",
@@ -202,7 +183,6 @@ export const WEBBOOK_CONDENSED_SPECIES: readonly SpeciesEntryInput[] = [
     "key": "Fe2O3(cr)",
     "formula": "Fe2O3",
     "phase": "cr",
-    "name": "hematite",
     "dataset": "nist-janaf",
     "hf298KJPerMol": -825.5032,
     "hf298Source": "nist-webbook",

@@ -54,7 +54,8 @@ export const airCommand: Command = {
     const flowText = optionValue(args, "fuel-flow");
     if (flowText !== undefined) {
       const f = readFlow(flowText, "--fuel-flow");
-      const fuelMolarMass = Object.entries(fuel).reduce((s, [k, x]) => s + x * molarMass(k), 0);
+      // g per mol of fuel from combustion itself, which also reads fuel names ("methane")
+      const fuelMolarMass = r.fuelMassKg * 1000;
       const fuelMolPerS = toMolPerSecond({ ...f, molarMassGPerMol: fuelMolarMass });
       const dryFlue = Object.fromEntries(keys.filter((k) => r.dry[k] !== undefined).map((k) => [k, r.flueGas[k]!]));
       const streams: [string, Flows][] = [
@@ -62,7 +63,8 @@ export const airCommand: Command = {
       ];
       flows = Object.fromEntries(streams.map(([name, perMolFuel]) => {
         const molPerS = Object.values(perMolFuel).reduce((s, x) => s + x, 0) * fuelMolPerS;
-        const kgPerH = Object.entries(perMolFuel).reduce((s, [k, x]) => s + x * molarMass(k), 0) * fuelMolPerS * 3.6;
+        const gPerMolFuel = name === "fuel" ? fuelMolarMass : Object.entries(perMolFuel).reduce((s, [k, x]) => s + x * molarMass(k), 0);
+        const kgPerH = gPerMolFuel * fuelMolPerS * 3.6;
         return [name, { molPerS, kmolPerH: fromMolPerSecond(molPerS, "kmol/h"), nm3PerH: fromMolPerSecond(molPerS, "Nm3/h"), kgPerH }];
       }));
       lines.push(
