@@ -18,8 +18,8 @@ export const airCommand: Command = {
   summary: "combustion air and flue gas (wet and dry analysis) of a fuel at some excess air",
   usage: "<fuel> [--excess-air PERCENT | --equivalence-ratio PHI] [--fuel-flow FLOW]",
   description:
-    "Complete combustion by element balance: theoretical O2 = C + H/4 + S - O/2, dry air of the U.S.\n" +
-    "Standard Atmosphere 1976 composition (N2, O2, Ar, CO2), fuel nitrogen to N2. Prints the air per mol of\n" +
+    "Complete combustion by element balance: theoretical O2 = C + H/4 + S - O/2, dry air taken as 21 % O2\n" +
+    "and 79 % N2 by volume (as in the flame functions), fuel nitrogen to N2. Prints the air per mol of\n" +
     "fuel and the flue gas with its wet and dry analysis; with --fuel-flow also the flows of fuel, air and\n" +
     "flue gas. A mixture is written key:amount,key:amount. Lean or stoichiometric only (rich mixtures need a\n" +
     "flame calculation: rxtherm flame). Screening values: burner and furnace work follows local codes.",
