@@ -8,8 +8,13 @@ import { compensatedSum } from "../numeric/compensatedSum.js";
 import { checkMixtureLimits } from "./mixtureLimits.js";
 import { attachView } from "../view/attachView.js";
 import { COMBUSTION_VIEW } from "./internal/extentView.js";
-import { describeValue, finiteResult, requireRecord } from "../guards.js";
+import { describeValue, finiteResult, knownKeys, rejectUnknownKeys, requireRecord } from "../guards.js";
 import { speciesByName } from "../formula/speciesNames.js";
+
+/** The keys combustion reads (a misspelt one is an error, not a silent default). */
+const INPUT_KEYS = /* @__PURE__ */ knownKeys<CombustionInput>()(
+  "fuel", "excessAir", "equivalenceRatio", "oxidizer", "oxygenEnrichment", "humidity", "carbonToCO", "allowExtremeMixture", "library",
+);
 
 /**
  * Dry air by mole fraction, with its argon and CO₂ (pass it as `oxidizer` where the argon and the
@@ -240,6 +245,7 @@ export function combustion(input: CombustionInput): CombustionResult {
   if (input === null || typeof input !== "object") {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object { fuel, ... }`, {});
   }
+  rejectUnknownKeys(input, INPUT_KEYS, fn, "input");
   const fuel = fuelElements(input.fuel, fn, input.library);
   const C = fuel.atoms.C ?? 0;
   const H = fuel.atoms.H ?? 0;

@@ -1,6 +1,11 @@
 import { RxthermError } from "../errors.js";
 import { type CombustionInput, combustion } from "./combustion.js";
-import { describeValue } from "../guards.js";
+import { describeValue, knownKeys, rejectUnknownKeys } from "../guards.js";
+
+/** The keys of the two readings' inputs (a misspelt one is an error, not a silent default). */
+const SHARED = ["fuel", "oxidizer", "oxygenEnrichment", "humidity", "carbonToCO", "allowExtremeMixture", "library"] as const;
+const O2_KEYS = /* @__PURE__ */ knownKeys<ExcessAirFromFlueO2Input>()(...SHARED, "dryO2");
+const CO2_KEYS = /* @__PURE__ */ knownKeys<ExcessAirFromFlueCO2Input>()(...SHARED, "dryCO2");
 
 /**
  * Input of {@link excessAirFromFlueO2}: the fuel and oxidizer as for {@link combustion}
@@ -77,6 +82,7 @@ function fromReading(
   if (input === null || typeof input !== "object") {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object { fuel, ${name} }`, {});
   }
+  rejectUnknownKeys(input, name === "dryO2" ? O2_KEYS : CO2_KEYS, fn, "input");
   if (typeof x !== "number" || !Number.isFinite(x) || x < 0 || x > 1) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires ${name} as a mole fraction in [0, 1], got ${describeValue(x)}${typeof x === "number" && x > 1 ? " — give a fraction, not %" : ""}`, {
       [name]: x,

@@ -6,7 +6,8 @@ import { describe, expect, it } from "vitest";
 import {
   adiabaticReactionTemperature, adiabaticTemperatureRise, availableHeat, createLibrary, efficiencyCurve, equilibriumConstant,
   flueGasDewPoint, heatDuty, heatingValue, massToMolarFlows, molarToMassFlows, reactionEnthalpy, reactionEntropy, reactionGibbs,
-  reconcileExtents, totalMassFlow, validateSpeciesData, wobbeIndex, species, findSpecies,
+  reconcileExtents, totalMassFlow, validateSpeciesData, wobbeIndex, species, findSpecies, combustion, excessAirFromFlueO2,
+  excessAirFromFlueCO2,
 } from "../../src/index.js";
 import { caught } from "../_helpers/caught.js";
 
@@ -38,6 +39,9 @@ const CASES: [string, () => unknown, string, string | null][] = [
   ["totalMassFlow options", () => totalMassFlow({ H2O: 1 }, { massUnits: "kg" } as never), "options.massUnits", "massUnit"],
   ["createLibrary options", () => createLibrary({ sources: {}, species: [] }, { bases: null } as never), "options.bases", "base"],
   ["validateSpeciesData options", () => validateSpeciesData({ sources: {}, species: [] }, { allowBuiltinSources: true } as never), "options.allowBuiltinSources", "allowBuiltInSources"],
+  ["combustion input", () => combustion({ fuel: "CH4(g)", excesAir: 0.15 } as never), "input.excesAir", "excessAir"],
+  ["excessAirFromFlueO2 input", () => excessAirFromFlueO2({ fuel: "CH4(g)", dryO2: 0.03, excessAir: 0.1 } as never), "input.excessAir", null],
+  ["excessAirFromFlueCO2 input", () => excessAirFromFlueCO2({ fuel: "CH4(g)", dryCo2: 0.1 } as never), "input.dryCo2", "dryCO2"],
   ["species options", () => species("CH4(g)", undefined, { dataSet: "gri-mech-3.0" } as never), "options.dataSet", "dataset"],
   ["findSpecies query", () => findSpecies({ name: "acetone", phse: "g" } as never), "query.phse", "phase"],
 ];
