@@ -37,6 +37,7 @@ import type { ExtentSpec, Flows } from "./types.js";
 import { attachView } from "../view/attachView.js";
 import { EXTENTS_VIEW } from "./internal/extentView.js";
 import { describeValue, finiteResult, optionsOf } from "../guards.js";
+import { exactLanes } from "./internal/exactLanes.js";
 
 /**
  * Options of {@link solveExtents}.
@@ -641,7 +642,7 @@ function laneRow<T>(L: Lane<T>, sys: StoichSystem, r: SpecRow): { a: T[]; b: T }
 
 /** Exact path: the safe-integer lane, redone with BigInt rationals if a value outgrows it. */
 function solveExactPath(sys: StoichSystem, rows: SpecRow[], fn: string): SolveExtentsResult {
-  if (sys.nuSafe !== null) {
+  if (sys.nuSafe !== null && !exactLanes.bigIntOnly) {
     try {
       const r = solveIn(SAFE, sys, rows, fn);
       if (r !== null) return r;
@@ -707,7 +708,9 @@ function solveIn<T>(L: Lane<T>, sys: StoichSystem, rows: SpecRow[], fn: string):
     change[s] = d;
     outlet[s] = L.toNumber(v);
   }
-  return assemble(L, sys, xi, extents, outlet, change, roundOffZeros);
+  // the safe lane's tables can outgrow it (a quotient of two exact values): they are then read from the BigInt lane
+  const exactTables = L === (SAFE as Lane<unknown>) ? () => solveIn(BIG, sys, rows, fn) as SolveExtentsResult : null;
+  return assemble(L, sys, xi, extents, outlet, change, roundOffZeros, exactTables);
 }
 
 /** Readable text of a spec row, for messages (built only when needed: number text is slow). */
@@ -798,7 +801,10 @@ function noNegZero(v: number): number {
  * Build the result from the lane's exact (or float) extents and changes out − in. Extents,
  * outlet and change are computed now; the conversion, per-reaction conversion, yield and
  * selectivity tables (the last grows with the square of the species count) are computed on
- * first access and then kept, so a caller who reads only the flows never pays for them.
+ * first access and then kept, so a caller who reads only the flows never pays for them. A lane
+ * that can outgrow its range while computing a table (the safe-integer lane throws
+ * {@link SafeOverflow}) passes `exactTables`, which solves the same problem in a lane that cannot,
+ * and the tables are then read from that result.
  */
 function assemble<T>(
   L: Lane<T>,
@@ -808,6 +814,7 @@ function assemble<T>(
   outlet: number[],
   change: T[],
   roundOffZeros: string[],
+  exactTables: (() => SolveExtentsResult) | null = null,
 ): SolveExtentsResult {
   const S = sys.species.length;
   const R = sys.reactions.length;
@@ -820,16 +827,36 @@ function assemble<T>(
   }
   const ext = new Array<number>(R);
   for (let j = 0; j < R; j++) ext[j] = noNegZero(extents[j] as number);
+  let other: SolveExtentsResult | null = null;
+  const table = <V>(compute: () => V, read: (r: SolveExtentsResult) => V): V => {
+    if (exactTables === null) return compute();
+    try {
+      return compute();
+    } catch (e) {
+      if (!(e instanceof SafeOverflow)) throw e;
+      return read((other ??= exactTables()));
+    }
+  };
   let conversions: { conversion: Record<string, number>; conversionByReaction: Record<string, number>[] } | null = null;
-  const conversionTables = () => (conversions ??= finiteResult(conversionTablesOf(L, sys, xi, change), "solveExtents (conversion)"));
+  const conversionTables = () =>
+    (conversions ??= table(
+      () => finiteResult(conversionTablesOf(L, sys, xi, change), "solveExtents (conversion)"),
+      (r) => ({ conversion: r.conversion, conversionByReaction: r.conversionByReaction }),
+    ));
   let yields: Record<string, Record<string, number>> | null = null;
   let selectivity: Record<string, Record<string, number>> | null = null;
   const result = { extents: ext, outlet: outletFlows, change: changeFlows, roundOffZeros } as SolveExtentsResult;
   Object.defineProperties(result, {
     conversion: { enumerable: true, get: () => conversionTables().conversion },
     conversionByReaction: { enumerable: true, get: () => conversionTables().conversionByReaction },
-    yield: { enumerable: true, get: () => (yields ??= finiteResult(yieldTableOf(L, sys, change), "solveExtents (yield)")) },
-    selectivity: { enumerable: true, get: () => (selectivity ??= finiteResult(selectivityTableOf(L, sys, change), "solveExtents (selectivity)")) },
+    yield: {
+      enumerable: true,
+      get: () => (yields ??= table(() => finiteResult(yieldTableOf(L, sys, change), "solveExtents (yield)"), (r) => r.yield)),
+    },
+    selectivity: {
+      enumerable: true,
+      get: () => (selectivity ??= table(() => finiteResult(selectivityTableOf(L, sys, change), "solveExtents (selectivity)"), (r) => r.selectivity)),
+    },
   });
   return result;
 }
