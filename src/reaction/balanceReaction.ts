@@ -21,6 +21,7 @@ import {
 import { parseReaction } from "./parseReaction.js";
 import type { Reaction, Term } from "./types.js";
 import { describeValue, optionsOf, requireArray } from "../guards.js";
+import { balanceLanes } from "./internal/balanceLanes.js";
 
 /**
  * The species to balance: an equation text (its coefficients are ignored) or the species of
@@ -100,7 +101,7 @@ export function balanceReaction(input: BalanceInput, options: BalanceReactionOpt
   const keys = entries.map((e) => e.species);
   const fixed = readFixed(options, keys);
 
-  if (fixed.size === 0) {
+  if (fixed.size === 0 && !balanceLanes.bigIntOnly) {
     const quick = quickBalance(entries, signs, nReactants);
     if (quick) return quick;
   }
