@@ -38,6 +38,19 @@ import { attachView } from "../view/attachView.js";
 import { EXTENTS_VIEW } from "./internal/extentView.js";
 import { describeValue, finiteResult, optionsOf } from "../guards.js";
 import { exactLanes } from "./internal/exactLanes.js";
+import {
+  EXPANSION_LIMIT,
+  addExpansions,
+  compressExpansion,
+  decimalOfNumber,
+  expansionOf,
+  expansionQuotient,
+  expansionSign,
+  multiplyExpansions,
+  negateExpansion,
+  scaleByPowerOfTen,
+  scaleExpansion,
+} from "../numeric/expansion.js";
 
 /**
  * Options of {@link solveExtents}.
@@ -402,6 +415,9 @@ interface Lane<T> {
   changes(nu: readonly (readonly T[])[], xi: readonly T[], S: number): T[];
 }
 
+/** What the result tables read of a lane (the wide lane has only these). */
+type TableLane<T> = Pick<Lane<T>, "nu" | "feed" | "quotient" | "isNegative" | "isZero" | "mul" | "pairRatio" | "toNumber">;
+
 /** Σⱼ νⱼₛ ξⱼ in any lane, term by term. */
 function laneChanges<T>(L: Lane<T>, nu: readonly (readonly T[])[], xi: readonly T[], S: number): T[] {
   const out = new Array<T>(S);
@@ -640,7 +656,11 @@ function laneRow<T>(L: Lane<T>, sys: StoichSystem, r: SpecRow): { a: T[]; b: T }
   }
 }
 
-/** Exact path: the safe-integer lane, redone with BigInt rationals if a value outgrows it. */
+/**
+ * Exact path: the safe-integer lane; when a value outgrows it (a spec or feed value with float
+ * round-off, 0.30000000000000004, has 17 significant digits), the wide lane; BigInt rationals for
+ * everything the wide lane declines (and for every error, which the BigInt lane words).
+ */
 function solveExactPath(sys: StoichSystem, rows: SpecRow[], fn: string): SolveExtentsResult {
   if (sys.nuSafe !== null && !exactLanes.bigIntOnly) {
     try {
@@ -649,8 +669,313 @@ function solveExactPath(sys: StoichSystem, rows: SpecRow[], fn: string): SolveEx
     } catch (e) {
       if (!(e instanceof SafeOverflow)) throw e;
     }
+    try {
+      const w = solveWide(sys, rows, fn);
+      if (w !== null) return w;
+    } catch (e) {
+      if (!(e instanceof SafeOverflow)) throw e;
+    }
   }
   return solveIn(BIG, sys, rows, fn) as SolveExtentsResult;
+}
+
+/**
+ * An exact value of the wide lane: integer expansions `n / d` (d > 0), unreduced. Values that
+ * share a denominator share the very array, which lets a quotient of two of them skip it.
+ */
+interface WideQ {
+  readonly n: readonly number[];
+  readonly d: readonly number[];
+}
+
+/** Largest power of ten the wide lane brings its values to (a decimal with more places goes to BigInt). */
+const WIDE_MAX_EXPONENT = 80;
+/** Largest component the wide lane keeps in an eager value, so products in the tables stay below the expansion limit. */
+const WIDE_MAX = Math.sqrt(EXPANSION_LIMIT);
+
+/** The exact decimal of a double in the wide lane, or SafeOverflow. */
+function wideDecimal(x: number): WideDecimal {
+  const d = decimalOfNumber(x, WIDE_MAX_EXPONENT);
+  if (d === null) throw new SafeOverflow();
+  checkedWide(d.digits);
+  return d;
+}
+
+/** The expansion itself when its magnitude is at most {@link WIDE_MAX}, else SafeOverflow (the product of two such stays finite). */
+function checkedWide<E extends readonly number[]>(e: E): E {
+  if (e.length > 0 && !(Math.abs(e[e.length - 1] as number) <= WIDE_MAX)) throw new SafeOverflow();
+  return e;
+}
+
+function lcmSafe(a: number, b: number): number {
+  return a === b || b === 1 ? a : checkedSafe((a / gcdNumber(a, b)) * b);
+}
+
+/**
+ * The wide exact lane. The stoichiometric numbers stay in safe integers; only the right-hand
+ * sides carry the long decimals. So the square system A ξ = b is inverted once in float64
+ * integers — fraction-free Gauss–Jordan of [A | I] gives pᵢ ξᵢ = Σₖ Kᵢₖ bₖ — and every extent,
+ * change and outlet is an integer combination of the bₖ over one common denominator, held
+ * exactly in floating-point expansions (src/numeric/expansion.ts) and rounded once, correctly.
+ * The exact values are those of the BigInt lane, so are the doubles. Returns null (or throws
+ * SafeOverflow) to leave a case to the BigInt lane: a singular system, an outlet negative beyond
+ * round-off (both reported there), a stoichiometric or selectivity value outside safe integers,
+ * a decimal with more than {@link WIDE_MAX_EXPONENT} places, or numbers beyond the expansions' range.
+ */
+function solveWide(sys: StoichSystem, rows: SpecRow[], fn: string): SolveExtentsResult | null {
+  const nu = sys.nuSafe as SafeQ[][];
+  const R = sys.reactions.length;
+  const S = sys.species.length;
+  const columns = wideColumns(nu, S);
+  // the feed's decimals, kept for the next call with the same feed numbers (as the safe lane keeps its feed)
+  let feedDecimals = columns.lastFeed !== null && sameNumbers(columns.lastFeed.values, sys.feed) ? columns.lastFeed.decimals : null;
+  if (feedDecimals === null) {
+    feedDecimals = new Array<WideDecimal | undefined>(S);
+    columns.lastFeed = { values: sys.feed, decimals: feedDecimals };
+  }
+  const decimals = feedDecimals;
+  const feedDecimal = (s: number) => (decimals[s] ??= wideDecimal(sys.feed[s] as number));
+  // 1. each row: its coefficients scaled to integers, then the identity; its right-hand side num / (q·10^e)
+  const M: number[][] = [];
+  const scales: number[] = [];
+  const rhsNum: number[][] = [];
+  const rhsQ: number[] = [];
+  const rhsE: number[] = [];
+  for (let k = 0; k < R; k++) {
+    const r = rows[k] as SpecRow;
+    const row = new Array<number>(2 * R).fill(0);
+    row[R + k] = 1;
+    let l = 1;
+    let num: number[] = [];
+    let q = 1;
+    let e = 0;
+    if (r.kind === "conversion" || r.kind === "outlet" || r.kind === "yield") {
+      // the species' column: Σⱼ νⱼ ξⱼ
+      const ints = columns.integerColumns[r.i] as number[];
+      for (let j = 0; j < R; j++) row[j] = ints[j] as number;
+      l = columns.columnScales[r.i] as number;
+    }
+    switch (r.kind) {
+      case "conversion":
+      case "conversionInReaction": {
+        const v = wideDecimal(r.value);
+        const f = feedDecimal(r.i);
+        num = multiplyExpansions(v.digits, f.digits);
+        if (r.kind === "conversion") num = negateExpansion(num);
+        else {
+          const c = (nu[r.j] as SafeQ[])[r.i] as SafeQ;
+          row[r.j] = -c.n;
+          l = c.d;
+        }
+        e = v.exponent + f.exponent;
+        break;
+      }
+      case "outlet": {
+        const v = wideDecimal(r.value);
+        const f = feedDecimal(r.i);
+        e = Math.max(v.exponent, f.exponent);
+        num = addExpansions(scaleByPowerOfTen(v.digits, e - v.exponent), negateExpansion(scaleByPowerOfTen(f.digits, e - f.exponent)));
+        break;
+      }
+      case "extent": {
+        row[r.j] = 1;
+        const v = wideDecimal(r.value);
+        num = v.digits;
+        e = v.exponent;
+        break;
+      }
+      case "yield": {
+        const ratio = sqFromRational((sys.yieldRatio[r.i] as (Rational | null | "inconsistent")[])[r.j] as Rational);
+        const v = wideDecimal(r.value);
+        const f = feedDecimal(r.j);
+        num = scaleExpansion(multiplyExpansions(v.digits, f.digits), ratio.n);
+        q = ratio.d;
+        e = v.exponent + f.exponent;
+        break;
+      }
+      case "selectivity": {
+        const Sq = sqFromNumber(r.value);
+        const a = new Array<SafeQ>(R);
+        for (let j = 0; j < R; j++) {
+          const c = sqSub((nu[j] as SafeQ[])[r.i] as SafeQ, sqMul(Sq, (nu[j] as SafeQ[])[r.j] as SafeQ));
+          a[j] = c;
+          if (c.d !== 1) l = lcmSafe(l, c.d);
+        }
+        for (let j = 0; j < R; j++) {
+          const c = a[j] as SafeQ;
+          row[j] = c.n === 0 ? 0 : checkedSafe(c.n * (l / c.d));
+        }
+        break;
+      }
+    }
+    M.push(row);
+    scales.push(l);
+    rhsNum.push(compressExpansion(num));
+    rhsQ.push(q);
+    rhsE.push(e);
+  }
+  // 2. [A | I] → [diag(p) | K]
+  const ech = integerGaussJordanNumber(M, R, true);
+  if (ech === null) throw new SafeOverflow();
+  if (ech.pivots.length < R) return null;
+  // 3. one denominator P·Qb·10^E for every extent, and for the feeds
+  let E = 0;
+  let Qb = 1;
+  for (let k = 0; k < R; k++) {
+    if ((rhsNum[k] as number[]).length === 0) continue;
+    if ((rhsE[k] as number) > E) E = rhsE[k] as number;
+    Qb = lcmSafe(Qb, rhsQ[k] as number);
+  }
+  for (let s = 0; s < sys.feedCount; s++) {
+    if (sys.feed[s] !== 0 && sys.reacting[s]) E = Math.max(E, feedDecimal(s).exponent);
+  }
+  let P = 1;
+  for (let i = 0; i < R; i++) P = lcmSafe(P, (ech.rows[i] as number[])[i] as number);
+  const PQ = checkedSafe(P * Qb);
+  const terms: (number[] | null)[] = new Array<number[] | null>(R).fill(null);
+  const N: number[][] = [];
+  for (let i = 0; i < R; i++) {
+    const row = ech.rows[i] as number[];
+    const pi = P / (row[i] as number);
+    let acc: number[] = [];
+    for (let k = 0; k < R; k++) {
+      const K = row[R + k] as number;
+      if (K === 0 || (rhsNum[k] as number[]).length === 0) continue;
+      const t = (terms[k] ??= scaleByPowerOfTen(rhsNum[k] as number[], E - (rhsE[k] as number)));
+      const c = checkedSafe(checkedSafe(checkedSafe(K * (scales[k] as number)) * pi) * (Qb / (rhsQ[k] as number)));
+      acc = addExpansions(acc, scaleExpansion(t, c));
+    }
+    N.push(checkedWide(compressExpansion(acc)));
+  }
+  const den = checkedWide(scaleByPowerOfTen(expansionOf(PQ), E));
+  const extents = new Array<number>(R);
+  const xi = new Array<WideQ>(R);
+  for (let j = 0; j < R; j++) {
+    xi[j] = { n: N[j] as number[], d: den };
+    extents[j] = expansionQuotient(N[j] as number[], den);
+  }
+  // 4. changes Σⱼ νⱼₛ ξⱼ over V·den, V the lcm of the stoichiometric denominators; outlets feed + change
+  const V = columns.V;
+  const denV = V === 1 ? den : checkedWide(scaleExpansion(den, V));
+  const PQV = checkedSafe(PQ * V);
+  const change = new Array<WideQ>(S);
+  const outlet = new Array<number>(S);
+  const roundOffZeros: string[] = [];
+  const empty: number[] = [];
+  let feedQ: WideQ[] | null = null;
+  const feedWide = (): WideQ[] =>
+    (feedQ ??= sys.feed.map((x, s) => {
+      if (x === 0) return { n: empty, d: ONE_EXPANSION };
+      const f = feedDecimal(s);
+      return { n: f.digits, d: scaleByPowerOfTen(ONE_EXPANSION, f.exponent) };
+    }));
+  for (let s = 0; s < S; s++) {
+    if (!sys.reacting[s]) {
+      change[s] = { n: empty, d: denV };
+      outlet[s] = sys.feed[s] as number;
+      continue;
+    }
+    const js = columns.reactions[s] as number[];
+    const cs = columns.coefficients[s] as number[];
+    let acc: number[] = [];
+    for (let k = 0; k < js.length; k++) acc = addExpansions(acc, scaleExpansion(N[js[k] as number] as number[], cs[k] as number));
+    const C = checkedWide(compressExpansion(acc));
+    const fed = sys.feed[s] as number;
+    const O = fed === 0 ? C : checkedWide(compressExpansion(addExpansions(scaleExpansion(scaleByPowerOfTen(feedDecimal(s).digits, E - feedDecimal(s).exponent), PQV), C)));
+    if (expansionSign(O) < 0) {
+      // round-off rule, as in solveIn
+      let scale = fed;
+      for (let j = 0; j < R; j++) scale += Math.abs(((sys.nuF[j] as number[])[s] as number) * (extents[j] as number));
+      const value = expansionQuotient(O, denV);
+      if (-value > ROUND_OFF_RELATIVE * scale) return null; // a real negative: the BigInt lane reports it
+      roundOffZeros.push(sys.species[s] as string);
+      const f = (feedWide()[s] as WideQ);
+      change[s] = { n: negateExpansion(f.n), d: f.d };
+      outlet[s] = 0;
+      continue;
+    }
+    change[s] = { n: C, d: denV };
+    outlet[s] = expansionQuotient(O, denV);
+  }
+  const lane: TableLane<WideQ> = {
+    nu: () => (columns.wide ??= nu.map((row) => row.map((c) => ({ n: expansionOf(c.n), d: expansionOf(c.d) })))),
+    feed: feedWide,
+    toNumber: (a) => expansionQuotient(a.n, a.d),
+    isNegative: (a) => expansionSign(a.n) < 0,
+    isZero: (a) => a.n.length === 0,
+    mul: (a, b) => ({
+      n: multiplyExpansions(checkedWide(a.n), checkedWide(b.n)),
+      d: multiplyExpansions(checkedWide(a.d), checkedWide(b.d)),
+    }),
+    quotient: (a, b) =>
+      a.d === b.d
+        ? expansionQuotient(a.n, b.n)
+        : expansionQuotient(multiplyExpansions(checkedWide(a.n), checkedWide(b.d)), multiplyExpansions(checkedWide(a.d), checkedWide(b.n))),
+    pairRatio(pair) {
+      if (pair.ratioSafe === null) throw new SafeOverflow();
+      return { n: expansionOf(pair.ratioSafe.n), d: expansionOf(pair.ratioSafe.d) };
+    },
+  };
+  return assemble(lane, sys, xi, extents, outlet, change, roundOffZeros, () => solveIn(BIG, sys, rows, fn) as SolveExtentsResult);
+}
+
+const ONE_EXPANSION: readonly number[] = [1];
+
+/** A double's exact decimal in the wide lane: `digits · 10^−exponent`. */
+type WideDecimal = { readonly digits: number[]; readonly exponent: number };
+
+/**
+ * What the wide lane reads of a stoichiometric table, memoised per table: per species the
+ * reactions it takes part in and its coefficients times V (the lcm of all denominators), its
+ * column scaled to integers (and the scale), the table as wide values for the result tables, and
+ * the decimals of the last feed.
+ */
+interface WideColumns {
+  readonly V: number;
+  readonly reactions: number[][];
+  readonly coefficients: number[][];
+  readonly integerColumns: number[][];
+  readonly columnScales: number[];
+  wide: WideQ[][] | null;
+  lastFeed: { values: readonly number[]; decimals: (WideDecimal | undefined)[] } | null;
+}
+
+const wideColumnsMemo = /* @__PURE__ */ new WeakMap<readonly (readonly SafeQ[])[], WideColumns>();
+
+function sameNumbers(a: readonly number[], b: readonly number[]): boolean {
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (!Object.is(a[i], b[i])) return false;
+  return true;
+}
+
+function wideColumns(nu: readonly (readonly SafeQ[])[], S: number): WideColumns {
+  const hit = wideColumnsMemo.get(nu);
+  if (hit !== undefined) return hit;
+  let V = 1;
+  for (const row of nu) for (let s = 0; s < S; s++) if ((row[s] as SafeQ).d !== 1) V = lcmSafe(V, (row[s] as SafeQ).d);
+  const reactions: number[][] = [];
+  const coefficients: number[][] = [];
+  const integerColumns: number[][] = [];
+  const columnScales: number[] = [];
+  for (let s = 0; s < S; s++) {
+    const js: number[] = [];
+    const cs: number[] = [];
+    let l = 1;
+    nu.forEach((row, j) => {
+      const c = row[s] as SafeQ;
+      if (c.d !== 1) l = lcmSafe(l, c.d);
+      if (c.n === 0) return;
+      js.push(j);
+      cs.push(checkedSafe(c.n * (V / c.d)));
+    });
+    reactions.push(js);
+    coefficients.push(cs);
+    integerColumns.push(nu.map((row) => ((row[s] as SafeQ).n === 0 ? 0 : checkedSafe((row[s] as SafeQ).n * (l / (row[s] as SafeQ).d)))));
+    columnScales.push(l);
+  }
+  const out: WideColumns = { V, reactions, coefficients, integerColumns, columnScales, wide: null, lastFeed: null };
+  wideColumnsMemo.set(nu, out);
+  return out;
 }
 
 /**
@@ -807,7 +1132,7 @@ function noNegZero(v: number): number {
  * and the tables are then read from that result.
  */
 function assemble<T>(
-  L: Lane<T>,
+  L: TableLane<T>,
   sys: StoichSystem,
   xi: T[],
   extents: number[],
@@ -861,7 +1186,7 @@ function assemble<T>(
   return result;
 }
 
-function conversionTablesOf<T>(L: Lane<T>, sys: StoichSystem, xi: readonly T[], change: readonly T[]): { conversion: Record<string, number>; conversionByReaction: Record<string, number>[] } {
+function conversionTablesOf<T>(L: TableLane<T>, sys: StoichSystem, xi: readonly T[], change: readonly T[]): { conversion: Record<string, number>; conversionByReaction: Record<string, number>[] } {
   const S = sys.species.length;
   const R = sys.reactions.length;
   const nu = L.nu(sys);
@@ -882,7 +1207,7 @@ function conversionTablesOf<T>(L: Lane<T>, sys: StoichSystem, xi: readonly T[], 
   return { conversion, conversionByReaction };
 }
 
-function yieldTableOf<T>(L: Lane<T>, sys: StoichSystem, change: readonly T[]): Record<string, Record<string, number>> {
+function yieldTableOf<T>(L: TableLane<T>, sys: StoichSystem, change: readonly T[]): Record<string, Record<string, number>> {
   const feed = L.feed(sys);
   const yields: Record<string, Record<string, number>> = {};
   for (const yp of sys.yieldPairs) {
@@ -893,7 +1218,7 @@ function yieldTableOf<T>(L: Lane<T>, sys: StoichSystem, change: readonly T[]): R
   return yields;
 }
 
-function selectivityTableOf<T>(L: Lane<T>, sys: StoichSystem, change: readonly T[]): Record<string, Record<string, number>> {
+function selectivityTableOf<T>(L: TableLane<T>, sys: StoichSystem, change: readonly T[]): Record<string, Record<string, number>> {
   const S = sys.species.length;
   const selectivity: Record<string, Record<string, number>> = {};
   if (sys.reactions.length > 1) {

@@ -34,9 +34,12 @@ export function integerGaussJordan(matrix: readonly (readonly bigint[])[], pivot
   return { rows, pivots: gaussJordanBigInt(rows, pivotCols) };
 }
 
-/** Same as {@link integerGaussJordan} for a matrix already in safe-integer numbers; null on overflow. */
-export function integerGaussJordanNumber(matrix: readonly (readonly number[])[], pivotCols: number): { rows: number[][]; pivots: number[] } | null {
-  const rows = matrix.map((row) => row.slice());
+/**
+ * Same as {@link integerGaussJordan} for a matrix already in safe-integer numbers; null on overflow.
+ * With `inPlace` the caller's rows are reduced (and reordered) in place instead of copies.
+ */
+export function integerGaussJordanNumber(matrix: readonly (readonly number[])[], pivotCols: number, inPlace = false): { rows: number[][]; pivots: number[] } | null {
+  const rows = inPlace ? (matrix as number[][]) : matrix.map((row) => row.slice());
   const pivots = gaussJordanNumber(rows, pivotCols);
   return pivots ? { rows, pivots } : null;
 }

@@ -48,7 +48,8 @@ const shortDecimal = (min: number, max: number): fc.Arbitrary<number> =>
 
 /**
  * A number in [min, max] as float arithmetic leaves it: a short decimal nudged by a few ulps, a
- * sum, a quotient times 0.7, or any double (17 significant digits).
+ * sum, a quotient times 0.7, a double spread evenly over the range (16–17 significant digits), or
+ * any double (fast-check's, which favours extremes such as 5e-324).
  */
 export const roundOffNumber = (min: number, max: number): fc.Arbitrary<number> => {
   const clamp = (x: number) => Math.min(Math.max(x, min), max);
@@ -57,6 +58,7 @@ export const roundOffNumber = (min: number, max: number): fc.Arbitrary<number> =
     fc.tuple(shortDecimal(min, max), fc.integer({ min: -3, max: 3 })).map(([x, m]) => clamp(x * (1 + m * 2 ** -52))),
     fc.tuple(shortDecimal(min, max), fc.constantFrom(0.1, 0.2, 0.7)).map(([x, y]) => clamp(x + y - y)),
     fc.tuple(shortDecimal(min, max), fc.integer({ min: 1, max: 9 })).map(([x, k]) => clamp((x / k) * k)),
+    fc.integer({ min: 0, max: 2 ** 53 - 1 }).map((n) => clamp(min + ((max - min) * n) / 2 ** 53)),
     fc.double({ min, max, noNaN: true, noDefaultInfinity: true }),
   );
 };
