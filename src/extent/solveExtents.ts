@@ -46,7 +46,9 @@ import {
   expansionOf,
   expansionQuotient,
   expansionSign,
+  linearCombination,
   multiplyExpansions,
+  shortDecimalPlaces,
   negateExpansion,
   scaleByPowerOfTen,
   scaleExpansion,
@@ -663,11 +665,19 @@ function laneRow<T>(L: Lane<T>, sys: StoichSystem, r: SpecRow): { a: T[]; b: T }
  */
 function solveExactPath(sys: StoichSystem, rows: SpecRow[], fn: string): SolveExtentsResult {
   if (sys.nuSafe !== null && !exactLanes.bigIntOnly) {
-    try {
-      const r = solveIn(SAFE, sys, rows, fn);
-      if (r !== null) return r;
-    } catch (e) {
-      if (!(e instanceof SafeOverflow)) throw e;
+    // a spec value with more than 15 significant digits cannot enter the safe lane: skip the attempt
+    let short = true;
+    for (let k = 0; k < rows.length && short; k++) {
+      const v = (rows[k] as SpecRow).value;
+      short = Number.isSafeInteger(v) || shortDecimalPlaces(v) > 0;
+    }
+    if (short) {
+      try {
+        const r = solveIn(SAFE, sys, rows, fn);
+        if (r !== null) return r;
+      } catch (e) {
+        if (!(e instanceof SafeOverflow)) throw e;
+      }
     }
     try {
       const w = solveWide(sys, rows, fn);
@@ -737,13 +747,14 @@ function solveWide(sys: StoichSystem, rows: SpecRow[], fn: string): SolveExtents
   const feedDecimal = (s: number) => (decimals[s] ??= wideDecimal(sys.feed[s] as number));
   // 1. each row: its coefficients scaled to integers, then the identity; its right-hand side num / (q·10^e)
   const M: number[][] = [];
+  if (WIDE_ROWS.length < R || (WIDE_ROWS[0] as number[]).length !== 2 * R) WIDE_ROWS = Array.from({ length: R }, () => new Array<number>(2 * R).fill(0));
   const scales: number[] = [];
   const rhsNum: number[][] = [];
   const rhsQ: number[] = [];
   const rhsE: number[] = [];
   for (let k = 0; k < R; k++) {
     const r = rows[k] as SpecRow;
-    const row = new Array<number>(2 * R).fill(0);
+    const row = (WIDE_ROWS[k] as number[]).fill(0);
     row[R + k] = 1;
     let l = 1;
     let num: number[] = [];
@@ -832,33 +843,33 @@ function solveWide(sys: StoichSystem, rows: SpecRow[], fn: string): SolveExtents
   let P = 1;
   for (let i = 0; i < R; i++) P = lcmSafe(P, (ech.rows[i] as number[])[i] as number);
   const PQ = checkedSafe(P * Qb);
-  const terms: (number[] | null)[] = new Array<number[] | null>(R).fill(null);
+  const terms: number[][] = new Array<number[]>(R);
+  for (let k = 0; k < R; k++) terms[k] = scaleByPowerOfTen(rhsNum[k] as number[], E - (rhsE[k] as number));
   const N: number[][] = [];
+  const pick: number[] = [];
+  const coefficients: number[] = [];
   for (let i = 0; i < R; i++) {
     const row = ech.rows[i] as number[];
     const pi = P / (row[i] as number);
-    let acc: number[] = [];
+    pick.length = 0;
+    coefficients.length = 0;
     for (let k = 0; k < R; k++) {
       const K = row[R + k] as number;
       if (K === 0 || (rhsNum[k] as number[]).length === 0) continue;
-      const t = (terms[k] ??= scaleByPowerOfTen(rhsNum[k] as number[], E - (rhsE[k] as number)));
-      const c = checkedSafe(checkedSafe(checkedSafe(K * (scales[k] as number)) * pi) * (Qb / (rhsQ[k] as number)));
-      acc = addExpansions(acc, scaleExpansion(t, c));
+      pick.push(k);
+      coefficients.push(checkedSafe(checkedSafe(checkedSafe(K * (scales[k] as number)) * pi) * (Qb / (rhsQ[k] as number))));
     }
-    N.push(checkedWide(compressExpansion(acc)));
+    N.push(checkedWide(linearCombination(terms, pick, coefficients)));
   }
   const den = checkedWide(scaleByPowerOfTen(expansionOf(PQ), E));
   const extents = new Array<number>(R);
-  const xi = new Array<WideQ>(R);
-  for (let j = 0; j < R; j++) {
-    xi[j] = { n: N[j] as number[], d: den };
-    extents[j] = expansionQuotient(N[j] as number[], den);
-  }
+  for (let j = 0; j < R; j++) extents[j] = expansionQuotient(N[j] as number[], den);
   // 4. changes Σⱼ νⱼₛ ξⱼ over V·den, V the lcm of the stoichiometric denominators; outlets feed + change
   const V = columns.V;
   const denV = V === 1 ? den : checkedWide(scaleExpansion(den, V));
   const PQV = checkedSafe(PQ * V);
-  const change = new Array<WideQ>(S);
+  const changeNumerators = new Array<readonly number[] | null>(S).fill(null); // null: minus the feed (a round-off zero)
+  const changeNumbers = new Array<number>(S);
   const outlet = new Array<number>(S);
   const roundOffZeros: string[] = [];
   const empty: number[] = [];
@@ -871,17 +882,19 @@ function solveWide(sys: StoichSystem, rows: SpecRow[], fn: string): SolveExtents
     }));
   for (let s = 0; s < S; s++) {
     if (!sys.reacting[s]) {
-      change[s] = { n: empty, d: denV };
+      changeNumerators[s] = empty;
+      changeNumbers[s] = 0;
       outlet[s] = sys.feed[s] as number;
       continue;
     }
     const js = columns.reactions[s] as number[];
     const cs = columns.coefficients[s] as number[];
-    let acc: number[] = [];
-    for (let k = 0; k < js.length; k++) acc = addExpansions(acc, scaleExpansion(N[js[k] as number] as number[], cs[k] as number));
-    const C = checkedWide(compressExpansion(acc));
+    const C = checkedWide(linearCombination(N, js, cs));
     const fed = sys.feed[s] as number;
-    const O = fed === 0 ? C : checkedWide(compressExpansion(addExpansions(scaleExpansion(scaleByPowerOfTen(feedDecimal(s).digits, E - feedDecimal(s).exponent), PQV), C)));
+    const O =
+      fed === 0
+        ? C
+        : checkedWide(linearCombination(N, js, cs, scaleExpansion(scaleByPowerOfTen(feedDecimal(s).digits, E - feedDecimal(s).exponent), PQV)));
     if (expansionSign(O) < 0) {
       // round-off rule, as in solveIn
       let scale = fed;
@@ -889,14 +902,24 @@ function solveWide(sys: StoichSystem, rows: SpecRow[], fn: string): SolveExtents
       const value = expansionQuotient(O, denV);
       if (-value > ROUND_OFF_RELATIVE * scale) return null; // a real negative: the BigInt lane reports it
       roundOffZeros.push(sys.species[s] as string);
-      const f = (feedWide()[s] as WideQ);
-      change[s] = { n: negateExpansion(f.n), d: f.d };
+      changeNumbers[s] = -fed;
       outlet[s] = 0;
       continue;
     }
-    change[s] = { n: C, d: denV };
-    outlet[s] = expansionQuotient(O, denV);
+    changeNumerators[s] = C;
+    changeNumbers[s] = expansionQuotient(C, denV);
+    outlet[s] = O === C ? (changeNumbers[s] as number) : expansionQuotient(O, denV);
   }
+  let values: { xi: WideQ[]; change: WideQ[] } | null = null;
+  const wideValues = () =>
+    (values ??= {
+      xi: N.map((n) => ({ n, d: den })),
+      change: changeNumerators.map((C, s) => {
+        if (C !== null) return { n: C, d: denV };
+        const f = feedWide()[s] as WideQ;
+        return { n: negateExpansion(f.n), d: f.d };
+      }),
+    });
   const lane: TableLane<WideQ> = {
     nu: () => (columns.wide ??= nu.map((row) => row.map((c) => ({ n: expansionOf(c.n), d: expansionOf(c.d) })))),
     feed: feedWide,
@@ -916,10 +939,13 @@ function solveWide(sys: StoichSystem, rows: SpecRow[], fn: string): SolveExtents
       return { n: expansionOf(pair.ratioSafe.n), d: expansionOf(pair.ratioSafe.d) };
     },
   };
-  return assemble(lane, sys, xi, extents, outlet, change, roundOffZeros, () => solveIn(BIG, sys, rows, fn) as SolveExtentsResult);
+  return assemble(lane, sys, wideValues, extents, outlet, changeNumbers, roundOffZeros, () => solveIn(BIG, sys, rows, fn) as SolveExtentsResult);
 }
 
 const ONE_EXPANSION: readonly number[] = [1];
+
+/** Scratch rows of the wide lane's [A | I] (reused from call to call; the lane never re-enters). */
+let WIDE_ROWS: number[][] = [];
 
 /** A double's exact decimal in the wide lane: `digits · 10^−exponent`. */
 type WideDecimal = { readonly digits: number[]; readonly exponent: number };
@@ -1035,7 +1061,10 @@ function solveIn<T>(L: Lane<T>, sys: StoichSystem, rows: SpecRow[], fn: string):
   }
   // the safe lane's tables can outgrow it (a quotient of two exact values): they are then read from the BigInt lane
   const exactTables = L === (SAFE as Lane<unknown>) ? () => solveIn(BIG, sys, rows, fn) as SolveExtentsResult : null;
-  return assemble(L, sys, xi, extents, outlet, change, roundOffZeros, exactTables);
+  const changeNumbers = new Array<number>(S);
+  for (let s = 0; s < S; s++) changeNumbers[s] = sys.reacting[s] ? L.toNumber(change[s] as T) : 0;
+  const values = { xi, change };
+  return assemble(L, sys, () => values, extents, outlet, changeNumbers, roundOffZeros, exactTables);
 }
 
 /** Readable text of a spec row, for messages (built only when needed: number text is slow). */
@@ -1129,15 +1158,16 @@ function noNegZero(v: number): number {
  * first access and then kept, so a caller who reads only the flows never pays for them. A lane
  * that can outgrow its range while computing a table (the safe-integer lane throws
  * {@link SafeOverflow}) passes `exactTables`, which solves the same problem in a lane that cannot,
- * and the tables are then read from that result.
+ * and the tables are then read from that result. `values` gives the lane's exact extents and
+ * changes (built only when a table is read); `changeNumbers` the changes as doubles.
  */
 function assemble<T>(
   L: TableLane<T>,
   sys: StoichSystem,
-  xi: T[],
+  values: () => { readonly xi: readonly T[]; readonly change: readonly T[] },
   extents: number[],
   outlet: number[],
-  change: T[],
+  changeNumbers: readonly number[],
   roundOffZeros: string[],
   exactTables: (() => SolveExtentsResult) | null = null,
 ): SolveExtentsResult {
@@ -1148,7 +1178,7 @@ function assemble<T>(
   for (let s = 0; s < S; s++) {
     const key = sys.species[s] as string;
     outletFlows[key] = noNegZero(outlet[s] as number);
-    if (sys.reacting[s]) changeFlows[key] = noNegZero(L.toNumber(change[s] as T));
+    if (sys.reacting[s]) changeFlows[key] = noNegZero(changeNumbers[s] as number);
   }
   const ext = new Array<number>(R);
   for (let j = 0; j < R; j++) ext[j] = noNegZero(extents[j] as number);
@@ -1165,7 +1195,7 @@ function assemble<T>(
   let conversions: { conversion: Record<string, number>; conversionByReaction: Record<string, number>[] } | null = null;
   const conversionTables = () =>
     (conversions ??= table(
-      () => finiteResult(conversionTablesOf(L, sys, xi, change), "solveExtents (conversion)"),
+      () => finiteResult(conversionTablesOf(L, sys, values().xi, values().change), "solveExtents (conversion)"),
       (r) => ({ conversion: r.conversion, conversionByReaction: r.conversionByReaction }),
     ));
   let yields: Record<string, Record<string, number>> | null = null;
@@ -1176,11 +1206,11 @@ function assemble<T>(
     conversionByReaction: { enumerable: true, get: () => conversionTables().conversionByReaction },
     yield: {
       enumerable: true,
-      get: () => (yields ??= table(() => finiteResult(yieldTableOf(L, sys, change), "solveExtents (yield)"), (r) => r.yield)),
+      get: () => (yields ??= table(() => finiteResult(yieldTableOf(L, sys, values().change), "solveExtents (yield)"), (r) => r.yield)),
     },
     selectivity: {
       enumerable: true,
-      get: () => (selectivity ??= table(() => finiteResult(selectivityTableOf(L, sys, change), "solveExtents (selectivity)"), (r) => r.selectivity)),
+      get: () => (selectivity ??= table(() => finiteResult(selectivityTableOf(L, sys, values().change), "solveExtents (selectivity)"), (r) => r.selectivity)),
     },
   });
   return result;

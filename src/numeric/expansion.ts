@@ -102,6 +102,67 @@ export function scaleExpansion(e: readonly number[], b: number): number[] {
   return h;
 }
 
+/** Scratch of {@link linearCombination} (grown on demand; the function never re-enters). */
+let ACC = /* @__PURE__ */ new Float64Array(64);
+
+/** Grow the expansion ACC[0 … n) by b in place (GROW-EXPANSION writes behind where it reads); returns the new length. */
+function growInPlace(n: number, b: number): number {
+  if (n + 1 > ACC.length) {
+    const bigger = new Float64Array(2 * ACC.length);
+    bigger.set(ACC);
+    ACC = bigger;
+  }
+  const h = ACC;
+  let q = b;
+  let w = 0;
+  for (let i = 0; i < n; i++) {
+    const enow = h[i] as number;
+    const sum = q + enow;
+    const hh = twoSumTail(q, enow, sum);
+    if (hh !== 0) h[w++] = hh;
+    q = sum;
+  }
+  if (q !== 0) h[w++] = q;
+  return w;
+}
+
+/**
+ * Σᵢ cᵢ·eᵢ[ᵢ] exactly (a linear combination of expansions with double coefficients), compressed.
+ * `pick` selects which expansions the coefficients go with (`es[pick[i]]`); every product
+ * component is grown into one running expansion kept in a scratch buffer, so only the result is
+ * allocated. `extra`, when given, is added as it is.
+ */
+export function linearCombination(
+  es: readonly (readonly number[])[],
+  pick: readonly number[],
+  cs: readonly number[],
+  extra: readonly number[] | null = null,
+): number[] {
+  let n = 0;
+  if (extra !== null) for (let i = 0; i < extra.length; i++) n = growInPlace(n, extra[i] as number);
+  for (let k = 0; k < pick.length; k++) {
+    const e = es[pick[k] as number] as readonly number[];
+    const c = cs[k] as number;
+    if (c === 0) continue;
+    for (let i = 0; i < e.length; i++) {
+      const x = e[i] as number;
+      const p = x * c;
+      const t = twoProductTail(x, c, p);
+      if (t !== 0) n = growInPlace(n, t);
+      n = growInPlace(n, p);
+    }
+    if (n > 24) n = compressInPlace(n);
+  }
+  return compressRange(ACC, n);
+}
+
+/** COMPRESS of ACC[0 … n) back into ACC; returns the new length. */
+function compressInPlace(n: number): number {
+  const c = compressRange(ACC, n);
+  ACC.set(c);
+  return c.length;
+}
+
 /** e·f, exact and compressed. */
 export function multiplyExpansions(e: readonly number[], f: readonly number[]): number[] {
   if (e.length < f.length) [e, f] = [f, e];
@@ -117,8 +178,12 @@ export function multiplyExpansions(e: readonly number[], f: readonly number[]): 
  * doubles can hold usually ends in two components or fewer).
  */
 export function compressExpansion(e: readonly number[]): number[] {
-  const n = e.length;
-  if (n <= 1) return e.slice();
+  return compressRange(e, e.length);
+}
+
+/** {@link compressExpansion} of the first n components of an array-like. */
+function compressRange(e: ArrayLike<number>, n: number): number[] {
+  if (n <= 1) return n === 0 ? [] : [e[0] as number];
   const g = new Array<number>(n);
   let bottom = n - 1;
   let q = e[bottom] as number;
@@ -194,17 +259,27 @@ export function scaleByPowerOfTen(e: readonly number[], k: number): number[] {
  */
 export function decimalOfNumber(x: number, maxExponent: number): { readonly digits: number[]; readonly exponent: number } | null {
   if (Number.isSafeInteger(x)) return { digits: expansionOf(x === 0 ? 0 : x), exponent: 0 };
-  // Fast route without String(x): the decimal c·10^−k with the fewest fraction digits k that rounds
-  // to x. With |c| < 10^15 such a decimal is the only one of at most 15 significant digits that
-  // rounds to x (DBL_DIG = 15), so it is the shortest text String(x) gives; and x·10^k is within
-  // 1/4 of c, so Math.round finds it (the reasoning of sqFromNumber in safeRational.ts).
-  for (let k = 1; k <= 15 && k <= maxExponent; k++) {
+  const k = shortDecimalPlaces(x);
+  if (k > 0) return k <= maxExponent ? { digits: expansionOf(Math.round(x * (POW10[k] as number))), exponent: k } : null;
+  return decimalOfText(String(x), maxExponent);
+}
+
+/**
+ * The number of decimal places k (1 … 15) of a double whose shortest decimal has at most 15
+ * significant digits and is not an integer; 0 otherwise. Such a decimal c·10^−k (|c| < 10^15) is the
+ * only one of at most 15 significant digits that rounds to x (DBL_DIG = 15), so it is the text
+ * String(x) gives; the one with the fewest places is found as the first k with
+ * fl(round(x·10^k)/10^k) = x, since x·10^k is within 1/4 of c (the reasoning of sqFromNumber in
+ * safeRational.ts). Values with float round-off (0.30000000000000004) give 0.
+ */
+export function shortDecimalPlaces(x: number): number {
+  for (let k = 1; k <= 15; k++) {
     const p = POW10[k] as number;
     const c = Math.round(x * p);
-    if (c >= 1e15 || c <= -1e15) break;
-    if (c / p === x) return { digits: expansionOf(c), exponent: k };
+    if (c >= 1e15 || c <= -1e15) return 0;
+    if (c / p === x) return k;
   }
-  return decimalOfText(String(x), maxExponent);
+  return 0;
 }
 
 /** {@link decimalOfNumber} from the number's text: digits read in two exact chunks, no intermediate strings. */

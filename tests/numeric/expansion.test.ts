@@ -10,6 +10,7 @@ import {
   expansionSign,
   expansionToBigInt,
   growExpansion,
+  linearCombination,
   multiplyExpansions,
   negateExpansion,
   scaleByPowerOfTen,
@@ -163,5 +164,16 @@ describe("decimalOfNumber: the shortest decimal of a double, as rationalFromNumb
     expect(d.exponent).toBe(17);
     expect(expansionToBigInt(decimalOfNumber(1e21, 40)!.digits)).toBe(10n ** 21n);
     expect(decimalOfNumber(1e-30, 20)).toBeNull();
+  });
+});
+
+describe("linearCombination: Σ cᵢ·eᵢ exactly, against BigInt", () => {
+  test.prop([fc.array(fc.tuple(big, factor), { maxLength: 12 }), fc.option(big, { nil: null })], { numRuns: 300 })("any combination", (terms, extra) => {
+    const es = terms.map(([a]) => toExpansion(a));
+    const pick = terms.map((_, i) => i);
+    const got = linearCombination(es, pick, terms.map(([, c]) => c), extra === null ? null : toExpansion(extra));
+    const want = terms.reduce((s, [a, c]) => s + a * BigInt(c), extra ?? 0n);
+    expect(isExpansion(got)).toBe(true);
+    expect(expansionToBigInt(got)).toBe(want);
   });
 });
