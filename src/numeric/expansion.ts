@@ -236,9 +236,12 @@ export function expansionFromDigits(digits: string): number[] {
 /** 10^k for k = 0 … 22, each exact as a double. */
 const POW10: readonly number[] = /* @__PURE__ */ Array.from({ length: 23 }, (_, k) => 10 ** k);
 
-/** e·10^k for k ≥ 0, exact: by powers of 5 (exact doubles up to 5^22) and one power of two. */
+/**
+ * e·10^k for k ≥ 0, exact: by powers of 5 (exact doubles up to 5^22) and one power of two. For
+ * k = 0 the result is e itself (expansions are never written to once built).
+ */
 export function scaleByPowerOfTen(e: readonly number[], k: number): number[] {
-  if (k === 0 || e.length === 0) return e.slice();
+  if (k === 0 || e.length === 0) return e as number[];
   let h = e as number[];
   let left = k;
   while (left > 0) {
