@@ -666,10 +666,13 @@ function laneRow<T>(L: Lane<T>, sys: StoichSystem, r: SpecRow): { a: T[]; b: T }
 function solveExactPath(sys: StoichSystem, rows: SpecRow[], fn: string): SolveExtentsResult {
   if (sys.nuSafe !== null && !exactLanes.bigIntOnly) {
     // a spec value with more than 15 significant digits cannot enter the safe lane: skip the attempt
+    const places: number[] = [];
     let short = true;
     for (let k = 0; k < rows.length && short; k++) {
       const v = (rows[k] as SpecRow).value;
-      short = Number.isSafeInteger(v) || shortDecimalPlaces(v) > 0;
+      const p = Number.isSafeInteger(v) ? -1 : shortDecimalPlaces(v);
+      places.push(p);
+      short = p !== 0;
     }
     if (short) {
       try {
@@ -680,7 +683,7 @@ function solveExactPath(sys: StoichSystem, rows: SpecRow[], fn: string): SolveEx
       }
     }
     try {
-      const w = solveWide(sys, rows, fn);
+      const w = solveWide(sys, rows, places, fn);
       if (w !== null) return w;
     } catch (e) {
       if (!(e instanceof SafeOverflow)) throw e;
@@ -704,8 +707,8 @@ const WIDE_MAX_EXPONENT = 80;
 const WIDE_MAX = Math.sqrt(EXPANSION_LIMIT);
 
 /** The exact decimal of a double in the wide lane, or SafeOverflow. */
-function wideDecimal(x: number): WideDecimal {
-  const d = decimalOfNumber(x, WIDE_MAX_EXPONENT);
+function wideDecimal(x: number, places?: number): WideDecimal {
+  const d = decimalOfNumber(x, WIDE_MAX_EXPONENT, places);
   if (d === null) throw new SafeOverflow();
   checkedWide(d.digits);
   return d;
@@ -732,7 +735,7 @@ function lcmSafe(a: number, b: number): number {
  * round-off (both reported there), a stoichiometric or selectivity value outside safe integers,
  * a decimal with more than {@link WIDE_MAX_EXPONENT} places, or numbers beyond the expansions' range.
  */
-function solveWide(sys: StoichSystem, rows: SpecRow[], fn: string): SolveExtentsResult | null {
+function solveWide(sys: StoichSystem, rows: SpecRow[], places: readonly number[], fn: string): SolveExtentsResult | null {
   const nu = sys.nuSafe as SafeQ[][];
   const R = sys.reactions.length;
   const S = sys.species.length;
@@ -769,7 +772,7 @@ function solveWide(sys: StoichSystem, rows: SpecRow[], fn: string): SolveExtents
     switch (r.kind) {
       case "conversion":
       case "conversionInReaction": {
-        const v = wideDecimal(r.value);
+        const v = wideDecimal(r.value, places[k]);
         const f = feedDecimal(r.i);
         num = multiplyExpansions(v.digits, f.digits);
         if (r.kind === "conversion") num = negateExpansion(num);
@@ -782,7 +785,7 @@ function solveWide(sys: StoichSystem, rows: SpecRow[], fn: string): SolveExtents
         break;
       }
       case "outlet": {
-        const v = wideDecimal(r.value);
+        const v = wideDecimal(r.value, places[k]);
         const f = feedDecimal(r.i);
         e = Math.max(v.exponent, f.exponent);
         num = addExpansions(scaleByPowerOfTen(v.digits, e - v.exponent), negateExpansion(scaleByPowerOfTen(f.digits, e - f.exponent)));
@@ -790,14 +793,14 @@ function solveWide(sys: StoichSystem, rows: SpecRow[], fn: string): SolveExtents
       }
       case "extent": {
         row[r.j] = 1;
-        const v = wideDecimal(r.value);
+        const v = wideDecimal(r.value, places[k]);
         num = v.digits;
         e = v.exponent;
         break;
       }
       case "yield": {
         const ratio = sqFromRational((sys.yieldRatio[r.i] as (Rational | null | "inconsistent")[])[r.j] as Rational);
-        const v = wideDecimal(r.value);
+        const v = wideDecimal(r.value, places[k]);
         const f = feedDecimal(r.j);
         num = scaleExpansion(multiplyExpansions(v.digits, f.digits), ratio.n);
         q = ratio.d;
@@ -843,23 +846,31 @@ function solveWide(sys: StoichSystem, rows: SpecRow[], fn: string): SolveExtents
   let P = 1;
   for (let i = 0; i < R; i++) P = lcmSafe(P, (ech.rows[i] as number[])[i] as number);
   const PQ = checkedSafe(P * Qb);
-  const terms: number[][] = new Array<number[]>(R);
-  for (let k = 0; k < R; k++) terms[k] = scaleByPowerOfTen(rhsNum[k] as number[], E - (rhsE[k] as number));
+  // each right-hand side brought to 10^E: by its coefficient when that stays a safe integer, else by the expansion itself
+  const terms = new Array<number[] | undefined>(R);
   const N: number[][] = [];
-  const pick: number[] = [];
+  const sources: number[][] = [];
   const coefficients: number[] = [];
   for (let i = 0; i < R; i++) {
     const row = ech.rows[i] as number[];
     const pi = P / (row[i] as number);
-    pick.length = 0;
+    sources.length = 0;
     coefficients.length = 0;
     for (let k = 0; k < R; k++) {
       const K = row[R + k] as number;
       if (K === 0 || (rhsNum[k] as number[]).length === 0) continue;
-      pick.push(k);
-      coefficients.push(checkedSafe(checkedSafe(checkedSafe(K * (scales[k] as number)) * pi) * (Qb / (rhsQ[k] as number))));
+      const c = checkedSafe(checkedSafe(checkedSafe(K * (scales[k] as number)) * pi) * (Qb / (rhsQ[k] as number)));
+      const m = E - (rhsE[k] as number);
+      const scaled = m <= 15 ? c * (POW10[m] as number) : NaN;
+      if (Number.isSafeInteger(scaled)) {
+        sources.push(rhsNum[k] as number[]);
+        coefficients.push(scaled);
+      } else {
+        sources.push((terms[k] ??= scaleByPowerOfTen(rhsNum[k] as number[], m)));
+        coefficients.push(c);
+      }
     }
-    N.push(checkedWide(linearCombination(terms, pick, coefficients)));
+    N.push(checkedWide(linearCombination(sources, null, coefficients)));
   }
   const den = checkedWide(scaleByPowerOfTen(expansionOf(PQ), E));
   const extents = new Array<number>(R);
@@ -891,10 +902,15 @@ function solveWide(sys: StoichSystem, rows: SpecRow[], fn: string): SolveExtents
     const cs = columns.coefficients[s] as number[];
     const C = checkedWide(linearCombination(N, js, cs));
     const fed = sys.feed[s] as number;
-    const O =
-      fed === 0
-        ? C
-        : checkedWide(linearCombination(N, js, cs, scaleExpansion(scaleByPowerOfTen(feedDecimal(s).digits, E - feedDecimal(s).exponent), PQV)));
+    let O = C;
+    if (fed !== 0) {
+      // feed·V·den = digits · P·Qb·V · 10^(E − exponent)
+      const f = feedDecimal(s);
+      const m = E - f.exponent;
+      const scaled = m <= 15 ? PQV * (POW10[m] as number) : NaN;
+      const F = Number.isSafeInteger(scaled) ? scaleExpansion(f.digits, scaled) : scaleExpansion(scaleByPowerOfTen(f.digits, m), PQV);
+      O = checkedWide(compressExpansion(addExpansions(F, C)));
+    }
     if (expansionSign(O) < 0) {
       // round-off rule, as in solveIn
       let scale = fed;
@@ -943,6 +959,9 @@ function solveWide(sys: StoichSystem, rows: SpecRow[], fn: string): SolveExtents
 }
 
 const ONE_EXPANSION: readonly number[] = [1];
+
+/** 10^k for k = 0 … 15 (exact doubles). */
+const POW10: readonly number[] = /* @__PURE__ */ Array.from({ length: 16 }, (_, k) => 10 ** k);
 
 /** Scratch rows of the wide lane's [A | I] (reused from call to call; the lane never re-enters). */
 let WIDE_ROWS: number[][] = [];

@@ -128,20 +128,21 @@ function growInPlace(n: number, b: number): number {
 
 /**
  * Σᵢ cᵢ·eᵢ[ᵢ] exactly (a linear combination of expansions with double coefficients), compressed.
- * `pick` selects which expansions the coefficients go with (`es[pick[i]]`); every product
+ * `pick` selects which expansions the coefficients go with (`es[pick[i]]`; null: `es[i]`); every product
  * component is grown into one running expansion kept in a scratch buffer, so only the result is
  * allocated. `extra`, when given, is added as it is.
  */
 export function linearCombination(
   es: readonly (readonly number[])[],
-  pick: readonly number[],
+  pick: readonly number[] | null,
   cs: readonly number[],
   extra: readonly number[] | null = null,
 ): number[] {
   let n = 0;
   if (extra !== null) for (let i = 0; i < extra.length; i++) n = growInPlace(n, extra[i] as number);
-  for (let k = 0; k < pick.length; k++) {
-    const e = es[pick[k] as number] as readonly number[];
+  const count = pick === null ? es.length : pick.length;
+  for (let k = 0; k < count; k++) {
+    const e = es[pick === null ? k : (pick[k] as number)] as readonly number[];
     const c = cs[k] as number;
     if (c === 0) continue;
     for (let i = 0; i < e.length; i++) {
@@ -259,10 +260,15 @@ export function scaleByPowerOfTen(e: readonly number[], k: number): number[] {
  * The value of a finite double's shortest decimal text (what `String(x)` prints, and what
  * `rationalFromNumber` reads) as `digits · 10^−exponent` with an integer expansion `digits` and
  * `exponent ≥ 0`. Null when the exponent would exceed `maxExponent` or the digits the expansion limit.
+ * `places`, when the caller already has it, is {@link shortDecimalPlaces}(x).
  */
-export function decimalOfNumber(x: number, maxExponent: number): { readonly digits: number[]; readonly exponent: number } | null {
+export function decimalOfNumber(
+  x: number,
+  maxExponent: number,
+  places?: number,
+): { readonly digits: number[]; readonly exponent: number } | null {
   if (Number.isSafeInteger(x)) return { digits: expansionOf(x === 0 ? 0 : x), exponent: 0 };
-  const k = shortDecimalPlaces(x);
+  const k = places ?? shortDecimalPlaces(x);
   if (k > 0) return k <= maxExponent ? { digits: expansionOf(Math.round(x * (POW10[k] as number))), exponent: k } : null;
   return decimalOfText(String(x), maxExponent);
 }
@@ -319,7 +325,15 @@ function decimalOfText(text: string, maxExponent: number): { readonly digits: nu
     if (!Number.isInteger(e)) return null;
     exponent -= e;
   }
-  let d = loDigits === 0 ? expansionOf(hi) : growExpansion(scaleExpansion(expansionOf(hi), POW10[loDigits] as number), lo);
+  let d: number[];
+  if (loDigits === 0) d = expansionOf(hi);
+  else {
+    // hi·10^m + lo: the product exactly as p + t, then lo grown in
+    const m = POW10[loDigits] as number;
+    const p = hi * m;
+    const t = twoProductTail(hi, m, p);
+    d = growExpansion(t === 0 ? [p] : [t, p], lo);
+  }
   if (exponent < 0) {
     if (-exponent > 300) return null;
     d = scaleByPowerOfTen(d, -exponent);
