@@ -47,6 +47,7 @@ import {
   expansionQuotient,
   expansionSign,
   linearCombination,
+  linearCombinationAndMore,
   multiplyExpansions,
   shortDecimalPlaces,
   negateExpansion,
@@ -900,16 +901,20 @@ function solveWide(sys: StoichSystem, rows: SpecRow[], places: readonly number[]
     }
     const js = columns.reactions[s] as number[];
     const cs = columns.coefficients[s] as number[];
-    const C = checkedWide(linearCombination(N, js, cs));
     const fed = sys.feed[s] as number;
-    let O = C;
-    if (fed !== 0) {
+    let C: number[];
+    let O: number[];
+    if (fed === 0) O = C = checkedWide(linearCombination(N, js, cs));
+    else {
       // feed·V·den = digits · P·Qb·V · 10^(E − exponent)
       const f = feedDecimal(s);
       const m = E - f.exponent;
       const scaled = m <= 15 ? PQV * (POW10[m] as number) : NaN;
-      const F = Number.isSafeInteger(scaled) ? scaleExpansion(f.digits, scaled) : scaleExpansion(scaleByPowerOfTen(f.digits, m), PQV);
-      O = checkedWide(compressExpansion(addExpansions(F, C)));
+      const both = Number.isSafeInteger(scaled)
+        ? linearCombinationAndMore(N, js, cs, f.digits, scaled)
+        : linearCombinationAndMore(N, js, cs, scaleByPowerOfTen(f.digits, m), PQV);
+      C = checkedWide(both[0]);
+      O = checkedWide(both[1]);
     }
     if (expansionSign(O) < 0) {
       // round-off rule, as in solveIn

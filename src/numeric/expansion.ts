@@ -154,8 +154,35 @@ export function linearCombination(
     }
     if (n > 24) n = compressInPlace(n);
   }
+  LAST_LENGTH = n;
   return compressRange(ACC, n);
 }
+
+/**
+ * Both Σᵢ cᵢ·eᵢ (as {@link linearCombination}, without `extra`) and that sum plus c·e, exactly and
+ * compressed, from one pass: the second result continues the first in the scratch buffer.
+ */
+export function linearCombinationAndMore(
+  es: readonly (readonly number[])[],
+  pick: readonly number[] | null,
+  cs: readonly number[],
+  e: readonly number[],
+  c: number,
+): [number[], number[]] {
+  const sum = linearCombination(es, pick, cs);
+  let n = LAST_LENGTH;
+  for (let i = 0; i < e.length; i++) {
+    const x = e[i] as number;
+    const p = x * c;
+    const t = twoProductTail(x, c, p);
+    if (t !== 0) n = growInPlace(n, t);
+    n = growInPlace(n, p);
+  }
+  return [sum, compressRange(ACC, n)];
+}
+
+/** Length of the running expansion the last {@link linearCombination} left in the scratch buffer. */
+let LAST_LENGTH = 0;
 
 /** COMPRESS of ACC[0 … n) back into ACC; returns the new length. */
 function compressInPlace(n: number): number {
@@ -268,7 +295,8 @@ export function decimalOfNumber(
   places?: number,
 ): { readonly digits: number[]; readonly exponent: number } | null {
   if (Number.isSafeInteger(x)) return { digits: expansionOf(x === 0 ? 0 : x), exponent: 0 };
-  const k = places ?? shortDecimalPlaces(x);
+  // a typed decimal (few places) without the text; anything else from the text, which decides every case
+  const k = places ?? shortDecimalPlaces(x, 8);
   if (k > 0) return k <= maxExponent ? { digits: expansionOf(Math.round(x * (POW10[k] as number))), exponent: k } : null;
   return decimalOfText(String(x), maxExponent);
 }
@@ -279,10 +307,11 @@ export function decimalOfNumber(
  * only one of at most 15 significant digits that rounds to x (DBL_DIG = 15), so it is the text
  * String(x) gives; the one with the fewest places is found as the first k with
  * fl(round(x·10^k)/10^k) = x, since x·10^k is within 1/4 of c (the reasoning of sqFromNumber in
- * safeRational.ts). Values with float round-off (0.30000000000000004) give 0.
+ * safeRational.ts). Values with float round-off (0.30000000000000004) give 0, and so does a decimal
+ * with more than `maxPlaces` places.
  */
-export function shortDecimalPlaces(x: number): number {
-  for (let k = 1; k <= 15; k++) {
+export function shortDecimalPlaces(x: number, maxPlaces = 15): number {
+  for (let k = 1; k <= maxPlaces; k++) {
     const p = POW10[k] as number;
     const c = Math.round(x * p);
     if (c >= 1e15 || c <= -1e15) return 0;

@@ -11,6 +11,7 @@ import {
   expansionToBigInt,
   growExpansion,
   linearCombination,
+  linearCombinationAndMore,
   multiplyExpansions,
   negateExpansion,
   scaleByPowerOfTen,
@@ -175,5 +176,16 @@ describe("linearCombination: Σ cᵢ·eᵢ exactly, against BigInt", () => {
     const want = terms.reduce((s, [a, c]) => s + a * BigInt(c), extra ?? 0n);
     expect(isExpansion(got)).toBe(true);
     expect(expansionToBigInt(got)).toBe(want);
+  });
+});
+
+describe("linearCombinationAndMore: Σ cᵢ·eᵢ and Σ cᵢ·eᵢ + c·e from one pass, against BigInt", () => {
+  test.prop([fc.array(fc.tuple(big, factor), { maxLength: 12 }), big, factor], { numRuns: 300 })("both sums", (terms, a, c) => {
+    const es = terms.map(([x]) => toExpansion(x));
+    const [sum, more] = linearCombinationAndMore(es, null, terms.map(([, k]) => k), toExpansion(a), c);
+    const want = terms.reduce((s, [x, k]) => s + x * BigInt(k), 0n);
+    expect(isExpansion(sum) && isExpansion(more)).toBe(true);
+    expect(expansionToBigInt(sum)).toBe(want);
+    expect(expansionToBigInt(more)).toBe(want + a * BigInt(c));
   });
 });
