@@ -825,7 +825,7 @@ function solveWide(sys: StoichSystem, rows: SpecRow[], places: readonly number[]
     }
     M.push(row);
     scales.push(l);
-    rhsNum.push(compressExpansion(num));
+    rhsNum.push(checkedWide(compressExpansion(num)));
     rhsQ.push(q);
     rhsE.push(e);
   }

@@ -50,6 +50,23 @@ describe("solveExtents exact lanes agree with the BigInt lane", () => {
     expect(outcome(input)).toEqual(bigIntOutcome(input));
   });
 
+  it("extreme magnitudes and many decimal places agree with the BigInt lane (or are left to it)", () => {
+    const reactions = ["C2H6 + 7/2 O2 -> 2 CO2 + 3 H2O", "H2 + 1/2 O2 -> H2O", "CO + 1/2 O2 -> CO2"];
+    const cases = [
+      { feed: { C2H6: 1e99 * 1.0000000000000002, O2: 9.999999999999999e99, H2: 3e98, CO: 1e98, N2: 1 }, x: [0.30000000000000004, 0.1 + 0.2, 0.7] },
+      { feed: { C2H6: 1.2345678901234567e-30, O2: 1e-20, H2: 2e-25, CO: 3.3333333333333335e-22, N2: 1 }, x: [0.1 + 0.2, 0.30000000000000004, 1 / 3] },
+      { feed: { C2H6: 10, O2: 100, H2: 5, CO: 5, N2: 1 }, x: [1 / 3, 2 / 3, 0.9999999999999999] },
+      { feed: { C2H6: 10, O2: 100, H2: 5, CO: 5, N2: 1 }, x: [1, 1, 1] },
+    ];
+    for (const c of cases) {
+      const input = { feed: c.feed, reactions, specs: [{ of: "C2H6", conversion: c.x[0]! }, { of: "H2", conversion: c.x[1]! }, { of: "CO", conversion: c.x[2]! }] };
+      expect(outcome(input)).toEqual(bigIntOutcome(input));
+      const extents = [{ reaction: 0, extent: c.feed.C2H6 * c.x[0]! }, { reaction: 1, extent: c.feed.H2 * c.x[1]! }, { reaction: 2, extent: c.feed.CO * c.x[2]! }];
+      const byExtent = { feed: c.feed, reactions, specs: extents };
+      expect(outcome(byExtent)).toEqual(bigIntOutcome(byExtent));
+    }
+  });
+
   it("outcomes recorded from the BigInt lane before the wide lane existed are unchanged", () => {
     // tests/extent/golden/roundOffSpecs.json: written once from the BigInt lane (see its note)
     const golden = JSON.parse(readFileSync(new URL("./golden/roundOffSpecs.json", import.meta.url), "utf8")) as {
