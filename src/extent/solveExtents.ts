@@ -152,8 +152,9 @@ export interface SolveExtentsResult {
  * (feed + Σⱼ |νⱼ ξⱼ|) is such a round-off zero: it is set to exactly 0 and the species is listed
  * in `roundOffZeros`. Anything more negative is never clamped: it is a `NEGATIVE_FLOW` error.
  * Both arithmetics apply the same rule. The exact path runs in float64 safe integers while every
- * numerator and denominator fits (exact there), and in BigInt rationals otherwise — the same
- * exact values either way.
+ * numerator and denominator fits (exact there); when a spec or feed value carries float round-off
+ * (17 significant digits) it holds the long numbers exactly as sums of doubles over one common
+ * denominator; and in BigInt rationals otherwise — the same exact values, rounded once, either way.
  *
  * @param input - feed (mol or mol/s), reactions, one spec per reaction
  * @param options - arithmetic (see {@link SolveExtentsOptions})
@@ -380,7 +381,8 @@ function specRow(sys: StoichSystem, spec: ExtentSpec, k: number, fn: string): Sp
 
 /**
  * The arithmetic a solve runs in: exact BigInt rationals, exact safe-integer rationals (the fast
- * lane, which throws {@link SafeOverflow} when a value outgrows it) or float64.
+ * lane, which throws {@link SafeOverflow} when a value outgrows it) or float64. The wide exact lane
+ * ({@link solveWide}) solves in its own way and provides only the {@link TableLane} part.
  */
 interface Lane<T> {
   readonly exact: boolean;
