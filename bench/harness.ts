@@ -161,3 +161,28 @@ export function paired(caseName: string, fn: () => unknown, baseName: string, ba
   pairs.sort((x, y) => x[0].medianNs / x[1].medianNs - y[0].medianNs / y[1].medianNs);
   return pairs[Math.floor(pairs.length / 2)]!;
 }
+
+/**
+ * Measure cases in many short interleaved rounds (each round runs every case `inner` times, in turn)
+ * and give each case's 10th-percentile time per call: on a shared machine the fastest rounds are the
+ * ones nothing else interrupted, and interleaving puts every case under the same drift of the load.
+ * @param cases - label and work of each case
+ * @param rounds - number of rounds
+ * @param inner - calls per case per round
+ */
+export function interleavedP10(cases: readonly (readonly [string, () => unknown])[], rounds = 300, inner = 40): BenchResult[] {
+  const times: number[][] = cases.map(() => []);
+  for (const [, fn] of cases) for (let i = 0; i < 200; i++) benchSink = fn();
+  for (let r = 0; r < rounds; r++) {
+    cases.forEach(([, fn], c) => {
+      const s = performance.now();
+      for (let i = 0; i < inner; i++) benchSink = fn();
+      (times[c] as number[]).push(((performance.now() - s) * 1e6) / inner);
+    });
+  }
+  return cases.map(([name], c) => {
+    const t = (times[c] as number[]).sort((a, b) => a - b);
+    const ns = t[Math.floor(t.length / 10)] ?? NaN;
+    return { name, medianNs: ns, perSecond: 1e9 / ns };
+  });
+}

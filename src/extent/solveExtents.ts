@@ -37,6 +37,23 @@ import type { ExtentSpec, Flows } from "./types.js";
 import { attachView } from "../view/attachView.js";
 import { EXTENTS_VIEW } from "./internal/extentView.js";
 import { describeValue, finiteResult, optionsOf } from "../guards.js";
+import { exactLanes } from "./internal/exactLanes.js";
+import {
+  EXPANSION_LIMIT,
+  addExpansions,
+  compressExpansion,
+  decimalOfNumber,
+  expansionOf,
+  expansionQuotient,
+  expansionSign,
+  linearCombination,
+  linearCombinationAndMore,
+  multiplyExpansions,
+  shortDecimalPlaces,
+  negateExpansion,
+  scaleByPowerOfTen,
+  scaleExpansion,
+} from "../numeric/expansion.js";
 
 /**
  * Options of {@link solveExtents}.
@@ -135,8 +152,9 @@ export interface SolveExtentsResult {
  * (feed + Σⱼ |νⱼ ξⱼ|) is such a round-off zero: it is set to exactly 0 and the species is listed
  * in `roundOffZeros`. Anything more negative is never clamped: it is a `NEGATIVE_FLOW` error.
  * Both arithmetics apply the same rule. The exact path runs in float64 safe integers while every
- * numerator and denominator fits (exact there), and in BigInt rationals otherwise — the same
- * exact values either way.
+ * numerator and denominator fits (exact there); when a spec or feed value carries float round-off
+ * (17 significant digits) it holds the long numbers exactly as sums of doubles over one common
+ * denominator; and in BigInt rationals otherwise — the same exact values, rounded once, either way.
  *
  * @param input - feed (mol or mol/s), reactions, one spec per reaction
  * @param options - arithmetic (see {@link SolveExtentsOptions})
@@ -363,7 +381,8 @@ function specRow(sys: StoichSystem, spec: ExtentSpec, k: number, fn: string): Sp
 
 /**
  * The arithmetic a solve runs in: exact BigInt rationals, exact safe-integer rationals (the fast
- * lane, which throws {@link SafeOverflow} when a value outgrows it) or float64.
+ * lane, which throws {@link SafeOverflow} when a value outgrows it) or float64. The wide exact lane
+ * ({@link solveWide}) solves in its own way and provides only the {@link TableLane} part.
  */
 interface Lane<T> {
   readonly exact: boolean;
@@ -400,6 +419,9 @@ interface Lane<T> {
   /** Net change Σⱼ νⱼₛ ξⱼ of each of the S species. */
   changes(nu: readonly (readonly T[])[], xi: readonly T[], S: number): T[];
 }
+
+/** What the result tables read of a lane (the wide lane has only these). */
+type TableLane<T> = Pick<Lane<T>, "nu" | "feed" | "quotient" | "isNegative" | "isZero" | "mul" | "pairRatio" | "toNumber">;
 
 /** Σⱼ νⱼₛ ξⱼ in any lane, term by term. */
 function laneChanges<T>(L: Lane<T>, nu: readonly (readonly T[])[], xi: readonly T[], S: number): T[] {
@@ -639,17 +661,373 @@ function laneRow<T>(L: Lane<T>, sys: StoichSystem, r: SpecRow): { a: T[]; b: T }
   }
 }
 
-/** Exact path: the safe-integer lane, redone with BigInt rationals if a value outgrows it. */
+/**
+ * Exact path: the safe-integer lane; when a value outgrows it (a spec or feed value with float
+ * round-off, 0.30000000000000004, has 17 significant digits), the wide lane; BigInt rationals for
+ * everything the wide lane declines (and for every error, which the BigInt lane words).
+ */
 function solveExactPath(sys: StoichSystem, rows: SpecRow[], fn: string): SolveExtentsResult {
-  if (sys.nuSafe !== null) {
+  if (sys.nuSafe !== null && !exactLanes.bigIntOnly) {
+    // a spec value with more than 15 significant digits cannot enter the safe lane: skip the attempt
+    const places: number[] = [];
+    let short = true;
+    for (let k = 0; k < rows.length && short; k++) {
+      const v = (rows[k] as SpecRow).value;
+      const p = Number.isSafeInteger(v) ? -1 : shortDecimalPlaces(v);
+      places.push(p);
+      short = p !== 0;
+    }
+    if (short) {
+      try {
+        const r = solveIn(SAFE, sys, rows, fn);
+        if (r !== null) return r;
+      } catch (e) {
+        if (!(e instanceof SafeOverflow)) throw e;
+      }
+    }
     try {
-      const r = solveIn(SAFE, sys, rows, fn);
-      if (r !== null) return r;
+      const w = solveWide(sys, rows, places, fn);
+      if (w !== null) return w;
     } catch (e) {
       if (!(e instanceof SafeOverflow)) throw e;
     }
   }
   return solveIn(BIG, sys, rows, fn) as SolveExtentsResult;
+}
+
+/**
+ * An exact value of the wide lane: integer expansions `n / d` (d > 0), unreduced. Values that
+ * share a denominator share the very array, which lets a quotient of two of them skip it.
+ */
+interface WideQ {
+  readonly n: readonly number[];
+  readonly d: readonly number[];
+}
+
+/** Largest power of ten the wide lane brings its values to (a decimal with more places goes to BigInt). */
+const WIDE_MAX_EXPONENT = 80;
+/** Largest component the wide lane keeps in an eager value, so products in the tables stay below the expansion limit. */
+const WIDE_MAX = Math.sqrt(EXPANSION_LIMIT);
+
+/** The exact decimal of a double in the wide lane, or SafeOverflow. */
+function wideDecimal(x: number, places?: number): WideDecimal {
+  const d = decimalOfNumber(x, WIDE_MAX_EXPONENT, places);
+  if (d === null) throw new SafeOverflow();
+  checkedWide(d.digits);
+  return d;
+}
+
+/** The expansion itself when its magnitude is at most {@link WIDE_MAX}, else SafeOverflow (the product of two such stays finite). */
+function checkedWide<E extends readonly number[]>(e: E): E {
+  if (e.length > 0 && !(Math.abs(e[e.length - 1] as number) <= WIDE_MAX)) throw new SafeOverflow();
+  return e;
+}
+
+function lcmSafe(a: number, b: number): number {
+  return a === b || b === 1 ? a : checkedSafe((a / gcdNumber(a, b)) * b);
+}
+
+/**
+ * The wide exact lane. The stoichiometric numbers stay in safe integers; only the right-hand
+ * sides carry the long decimals. So the square system A ξ = b is inverted once in float64
+ * integers — fraction-free Gauss–Jordan of [A | I] gives pᵢ ξᵢ = Σₖ Kᵢₖ bₖ — and every extent,
+ * change and outlet is an integer combination of the bₖ over one common denominator, held
+ * exactly in floating-point expansions (src/numeric/expansion.ts) and rounded once, correctly.
+ * The exact values are those of the BigInt lane, so are the doubles. Returns null (or throws
+ * SafeOverflow) to leave a case to the BigInt lane: a singular system, an outlet negative beyond
+ * round-off (both reported there), a stoichiometric or selectivity value outside safe integers,
+ * a decimal with more than {@link WIDE_MAX_EXPONENT} places, or numbers beyond the expansions' range.
+ */
+function solveWide(sys: StoichSystem, rows: SpecRow[], places: readonly number[], fn: string): SolveExtentsResult | null {
+  const nu = sys.nuSafe as SafeQ[][];
+  const R = sys.reactions.length;
+  const S = sys.species.length;
+  const columns = wideColumns(nu, S);
+  // the feed's decimals, kept for the next call with the same feed numbers (as the safe lane keeps its feed)
+  let feedDecimals = columns.lastFeed !== null && sameNumbers(columns.lastFeed.values, sys.feed) ? columns.lastFeed.decimals : null;
+  if (feedDecimals === null) {
+    feedDecimals = new Array<WideDecimal | undefined>(S);
+    columns.lastFeed = { values: sys.feed, decimals: feedDecimals };
+  }
+  const decimals = feedDecimals;
+  const feedDecimal = (s: number) => (decimals[s] ??= wideDecimal(sys.feed[s] as number));
+  // 1. each row: its coefficients scaled to integers, then the identity; its right-hand side num / (q·10^e)
+  const M: number[][] = [];
+  if (WIDE_ROWS.length < R || (WIDE_ROWS[0] as number[]).length !== 2 * R) WIDE_ROWS = Array.from({ length: R }, () => new Array<number>(2 * R).fill(0));
+  const scales: number[] = [];
+  const rhsNum: number[][] = [];
+  const rhsQ: number[] = [];
+  const rhsE: number[] = [];
+  for (let k = 0; k < R; k++) {
+    const r = rows[k] as SpecRow;
+    const row = (WIDE_ROWS[k] as number[]).fill(0);
+    row[R + k] = 1;
+    let l = 1;
+    let num: number[] = [];
+    let q = 1;
+    let e = 0;
+    if (r.kind === "conversion" || r.kind === "outlet" || r.kind === "yield") {
+      // the species' column: Σⱼ νⱼ ξⱼ
+      const ints = columns.integerColumns[r.i] as number[];
+      for (let j = 0; j < R; j++) row[j] = ints[j] as number;
+      l = columns.columnScales[r.i] as number;
+    }
+    switch (r.kind) {
+      case "conversion":
+      case "conversionInReaction": {
+        const v = wideDecimal(r.value, places[k]);
+        const f = feedDecimal(r.i);
+        num = multiplyExpansions(v.digits, f.digits);
+        if (r.kind === "conversion") num = negateExpansion(num);
+        else {
+          const c = (nu[r.j] as SafeQ[])[r.i] as SafeQ;
+          row[r.j] = -c.n;
+          l = c.d;
+        }
+        e = v.exponent + f.exponent;
+        break;
+      }
+      case "outlet": {
+        const v = wideDecimal(r.value, places[k]);
+        const f = feedDecimal(r.i);
+        e = Math.max(v.exponent, f.exponent);
+        num = addExpansions(scaleByPowerOfTen(v.digits, e - v.exponent), negateExpansion(scaleByPowerOfTen(f.digits, e - f.exponent)));
+        break;
+      }
+      case "extent": {
+        row[r.j] = 1;
+        const v = wideDecimal(r.value, places[k]);
+        num = v.digits;
+        e = v.exponent;
+        break;
+      }
+      case "yield": {
+        const ratio = sqFromRational((sys.yieldRatio[r.i] as (Rational | null | "inconsistent")[])[r.j] as Rational);
+        const v = wideDecimal(r.value, places[k]);
+        const f = feedDecimal(r.j);
+        num = scaleExpansion(multiplyExpansions(v.digits, f.digits), ratio.n);
+        q = ratio.d;
+        e = v.exponent + f.exponent;
+        break;
+      }
+      case "selectivity": {
+        const Sq = sqFromNumber(r.value);
+        const a = new Array<SafeQ>(R);
+        for (let j = 0; j < R; j++) {
+          const c = sqSub((nu[j] as SafeQ[])[r.i] as SafeQ, sqMul(Sq, (nu[j] as SafeQ[])[r.j] as SafeQ));
+          a[j] = c;
+          if (c.d !== 1) l = lcmSafe(l, c.d);
+        }
+        for (let j = 0; j < R; j++) {
+          const c = a[j] as SafeQ;
+          row[j] = c.n === 0 ? 0 : checkedSafe(c.n * (l / c.d));
+        }
+        break;
+      }
+    }
+    M.push(row);
+    scales.push(l);
+    rhsNum.push(checkedWide(compressExpansion(num)));
+    rhsQ.push(q);
+    rhsE.push(e);
+  }
+  // 2. [A | I] → [diag(p) | K]
+  const ech = integerGaussJordanNumber(M, R, true);
+  if (ech === null) throw new SafeOverflow();
+  if (ech.pivots.length < R) return null;
+  // 3. one denominator P·Qb·10^E for every extent, and for the feeds
+  let E = 0;
+  let Qb = 1;
+  for (let k = 0; k < R; k++) {
+    if ((rhsNum[k] as number[]).length === 0) continue;
+    if ((rhsE[k] as number) > E) E = rhsE[k] as number;
+    Qb = lcmSafe(Qb, rhsQ[k] as number);
+  }
+  for (let s = 0; s < sys.feedCount; s++) {
+    if (sys.feed[s] !== 0 && sys.reacting[s]) E = Math.max(E, feedDecimal(s).exponent);
+  }
+  let P = 1;
+  for (let i = 0; i < R; i++) P = lcmSafe(P, (ech.rows[i] as number[])[i] as number);
+  const PQ = checkedSafe(P * Qb);
+  // each right-hand side brought to 10^E: by its coefficient when that stays a safe integer, else by the expansion itself
+  const terms = new Array<number[] | undefined>(R);
+  const N: number[][] = [];
+  const sources: number[][] = [];
+  const coefficients: number[] = [];
+  for (let i = 0; i < R; i++) {
+    const row = ech.rows[i] as number[];
+    const pi = P / (row[i] as number);
+    sources.length = 0;
+    coefficients.length = 0;
+    for (let k = 0; k < R; k++) {
+      const K = row[R + k] as number;
+      if (K === 0 || (rhsNum[k] as number[]).length === 0) continue;
+      const c = checkedSafe(checkedSafe(checkedSafe(K * (scales[k] as number)) * pi) * (Qb / (rhsQ[k] as number)));
+      const m = E - (rhsE[k] as number);
+      const scaled = m <= 15 ? c * (POW10[m] as number) : NaN;
+      if (Number.isSafeInteger(scaled)) {
+        sources.push(rhsNum[k] as number[]);
+        coefficients.push(scaled);
+      } else {
+        sources.push((terms[k] ??= scaleByPowerOfTen(rhsNum[k] as number[], m)));
+        coefficients.push(c);
+      }
+    }
+    N.push(checkedWide(linearCombination(sources, null, coefficients)));
+  }
+  const den = checkedWide(scaleByPowerOfTen(expansionOf(PQ), E));
+  const extents = new Array<number>(R);
+  for (let j = 0; j < R; j++) extents[j] = expansionQuotient(N[j] as number[], den);
+  // 4. changes Σⱼ νⱼₛ ξⱼ over V·den, V the lcm of the stoichiometric denominators; outlets feed + change
+  const V = columns.V;
+  const denV = V === 1 ? den : checkedWide(scaleExpansion(den, V));
+  const PQV = checkedSafe(PQ * V);
+  const changeNumerators = new Array<readonly number[] | null>(S).fill(null); // null: minus the feed (a round-off zero)
+  const changeNumbers = new Array<number>(S);
+  const outlet = new Array<number>(S);
+  const roundOffZeros: string[] = [];
+  const empty: number[] = [];
+  let feedQ: WideQ[] | null = null;
+  const feedWide = (): WideQ[] =>
+    (feedQ ??= sys.feed.map((x, s) => {
+      if (x === 0) return { n: empty, d: ONE_EXPANSION };
+      const f = feedDecimal(s);
+      return { n: f.digits, d: scaleByPowerOfTen(ONE_EXPANSION, f.exponent) };
+    }));
+  for (let s = 0; s < S; s++) {
+    if (!sys.reacting[s]) {
+      changeNumerators[s] = empty;
+      changeNumbers[s] = 0;
+      outlet[s] = sys.feed[s] as number;
+      continue;
+    }
+    const js = columns.reactions[s] as number[];
+    const cs = columns.coefficients[s] as number[];
+    const fed = sys.feed[s] as number;
+    let C: number[];
+    let O: number[];
+    if (fed === 0) O = C = checkedWide(linearCombination(N, js, cs));
+    else {
+      // feed·V·den = digits · P·Qb·V · 10^(E − exponent)
+      const f = feedDecimal(s);
+      const m = E - f.exponent;
+      const scaled = m <= 15 ? PQV * (POW10[m] as number) : NaN;
+      const both = Number.isSafeInteger(scaled)
+        ? linearCombinationAndMore(N, js, cs, f.digits, scaled)
+        : linearCombinationAndMore(N, js, cs, scaleByPowerOfTen(f.digits, m), PQV);
+      C = checkedWide(both[0]);
+      O = checkedWide(both[1]);
+    }
+    if (expansionSign(O) < 0) {
+      // round-off rule, as in solveIn
+      let scale = fed;
+      for (let j = 0; j < R; j++) scale += Math.abs(((sys.nuF[j] as number[])[s] as number) * (extents[j] as number));
+      const value = expansionQuotient(O, denV);
+      if (-value > ROUND_OFF_RELATIVE * scale) return null; // a real negative: the BigInt lane reports it
+      roundOffZeros.push(sys.species[s] as string);
+      changeNumbers[s] = -fed;
+      outlet[s] = 0;
+      continue;
+    }
+    changeNumerators[s] = C;
+    changeNumbers[s] = expansionQuotient(C, denV);
+    outlet[s] = O === C ? (changeNumbers[s] as number) : expansionQuotient(O, denV);
+  }
+  let values: { xi: WideQ[]; change: WideQ[] } | null = null;
+  const wideValues = () =>
+    (values ??= {
+      xi: N.map((n) => ({ n, d: den })),
+      change: changeNumerators.map((C, s) => {
+        if (C !== null) return { n: C, d: denV };
+        const f = feedWide()[s] as WideQ;
+        return { n: negateExpansion(f.n), d: f.d };
+      }),
+    });
+  const lane: TableLane<WideQ> = {
+    nu: () => (columns.wide ??= nu.map((row) => row.map((c) => ({ n: expansionOf(c.n), d: expansionOf(c.d) })))),
+    feed: feedWide,
+    toNumber: (a) => expansionQuotient(a.n, a.d),
+    isNegative: (a) => expansionSign(a.n) < 0,
+    isZero: (a) => a.n.length === 0,
+    mul: (a, b) => ({
+      n: multiplyExpansions(checkedWide(a.n), checkedWide(b.n)),
+      d: multiplyExpansions(checkedWide(a.d), checkedWide(b.d)),
+    }),
+    quotient: (a, b) =>
+      a.d === b.d
+        ? expansionQuotient(a.n, b.n)
+        : expansionQuotient(multiplyExpansions(checkedWide(a.n), checkedWide(b.d)), multiplyExpansions(checkedWide(a.d), checkedWide(b.n))),
+    pairRatio(pair) {
+      if (pair.ratioSafe === null) throw new SafeOverflow();
+      return { n: expansionOf(pair.ratioSafe.n), d: expansionOf(pair.ratioSafe.d) };
+    },
+  };
+  return assemble(lane, sys, wideValues, extents, outlet, changeNumbers, roundOffZeros, () => solveIn(BIG, sys, rows, fn) as SolveExtentsResult);
+}
+
+const ONE_EXPANSION: readonly number[] = [1];
+
+/** 10^k for k = 0 … 15 (exact doubles). */
+const POW10: readonly number[] = /* @__PURE__ */ Array.from({ length: 16 }, (_, k) => 10 ** k);
+
+/** Scratch rows of the wide lane's [A | I] (reused from call to call; the lane never re-enters). */
+let WIDE_ROWS: number[][] = [];
+
+/** A double's exact decimal in the wide lane: `digits · 10^−exponent`. */
+type WideDecimal = { readonly digits: number[]; readonly exponent: number };
+
+/**
+ * What the wide lane reads of a stoichiometric table, memoised per table: per species the
+ * reactions it takes part in and its coefficients times V (the lcm of all denominators), its
+ * column scaled to integers (and the scale), the table as wide values for the result tables, and
+ * the decimals of the last feed.
+ */
+interface WideColumns {
+  readonly V: number;
+  readonly reactions: number[][];
+  readonly coefficients: number[][];
+  readonly integerColumns: number[][];
+  readonly columnScales: number[];
+  wide: WideQ[][] | null;
+  lastFeed: { values: readonly number[]; decimals: (WideDecimal | undefined)[] } | null;
+}
+
+const wideColumnsMemo = /* @__PURE__ */ new WeakMap<readonly (readonly SafeQ[])[], WideColumns>();
+
+function sameNumbers(a: readonly number[], b: readonly number[]): boolean {
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (!Object.is(a[i], b[i])) return false;
+  return true;
+}
+
+function wideColumns(nu: readonly (readonly SafeQ[])[], S: number): WideColumns {
+  const hit = wideColumnsMemo.get(nu);
+  if (hit !== undefined) return hit;
+  let V = 1;
+  for (const row of nu) for (let s = 0; s < S; s++) if ((row[s] as SafeQ).d !== 1) V = lcmSafe(V, (row[s] as SafeQ).d);
+  const reactions: number[][] = [];
+  const coefficients: number[][] = [];
+  const integerColumns: number[][] = [];
+  const columnScales: number[] = [];
+  for (let s = 0; s < S; s++) {
+    const js: number[] = [];
+    const cs: number[] = [];
+    let l = 1;
+    nu.forEach((row, j) => {
+      const c = row[s] as SafeQ;
+      if (c.d !== 1) l = lcmSafe(l, c.d);
+      if (c.n === 0) return;
+      js.push(j);
+      cs.push(checkedSafe(c.n * (V / c.d)));
+    });
+    reactions.push(js);
+    coefficients.push(cs);
+    integerColumns.push(nu.map((row) => ((row[s] as SafeQ).n === 0 ? 0 : checkedSafe((row[s] as SafeQ).n * (l / (row[s] as SafeQ).d)))));
+    columnScales.push(l);
+  }
+  const out: WideColumns = { V, reactions, coefficients, integerColumns, columnScales, wide: null, lastFeed: null };
+  wideColumnsMemo.set(nu, out);
+  return out;
 }
 
 /**
@@ -707,7 +1085,12 @@ function solveIn<T>(L: Lane<T>, sys: StoichSystem, rows: SpecRow[], fn: string):
     change[s] = d;
     outlet[s] = L.toNumber(v);
   }
-  return assemble(L, sys, xi, extents, outlet, change, roundOffZeros);
+  // the safe lane's tables can outgrow it (a quotient of two exact values): they are then read from the BigInt lane
+  const exactTables = L === (SAFE as Lane<unknown>) ? () => solveIn(BIG, sys, rows, fn) as SolveExtentsResult : null;
+  const changeNumbers = new Array<number>(S);
+  for (let s = 0; s < S; s++) changeNumbers[s] = sys.reacting[s] ? L.toNumber(change[s] as T) : 0;
+  const values = { xi, change };
+  return assemble(L, sys, () => values, extents, outlet, changeNumbers, roundOffZeros, exactTables);
 }
 
 /** Readable text of a spec row, for messages (built only when needed: number text is slow). */
@@ -798,16 +1181,21 @@ function noNegZero(v: number): number {
  * Build the result from the lane's exact (or float) extents and changes out − in. Extents,
  * outlet and change are computed now; the conversion, per-reaction conversion, yield and
  * selectivity tables (the last grows with the square of the species count) are computed on
- * first access and then kept, so a caller who reads only the flows never pays for them.
+ * first access and then kept, so a caller who reads only the flows never pays for them. A lane
+ * that can outgrow its range while computing a table (the safe-integer lane throws
+ * {@link SafeOverflow}) passes `exactTables`, which solves the same problem in a lane that cannot,
+ * and the tables are then read from that result. `values` gives the lane's exact extents and
+ * changes (built only when a table is read); `changeNumbers` the changes as doubles.
  */
 function assemble<T>(
-  L: Lane<T>,
+  L: TableLane<T>,
   sys: StoichSystem,
-  xi: T[],
+  values: () => { readonly xi: readonly T[]; readonly change: readonly T[] },
   extents: number[],
   outlet: number[],
-  change: T[],
+  changeNumbers: readonly number[],
   roundOffZeros: string[],
+  exactTables: (() => SolveExtentsResult) | null = null,
 ): SolveExtentsResult {
   const S = sys.species.length;
   const R = sys.reactions.length;
@@ -816,25 +1204,45 @@ function assemble<T>(
   for (let s = 0; s < S; s++) {
     const key = sys.species[s] as string;
     outletFlows[key] = noNegZero(outlet[s] as number);
-    if (sys.reacting[s]) changeFlows[key] = noNegZero(L.toNumber(change[s] as T));
+    if (sys.reacting[s]) changeFlows[key] = noNegZero(changeNumbers[s] as number);
   }
   const ext = new Array<number>(R);
   for (let j = 0; j < R; j++) ext[j] = noNegZero(extents[j] as number);
+  let other: SolveExtentsResult | null = null;
+  const table = <V>(compute: () => V, read: (r: SolveExtentsResult) => V): V => {
+    if (exactTables === null) return compute();
+    try {
+      return compute();
+    } catch (e) {
+      if (!(e instanceof SafeOverflow)) throw e;
+      return read((other ??= exactTables()));
+    }
+  };
   let conversions: { conversion: Record<string, number>; conversionByReaction: Record<string, number>[] } | null = null;
-  const conversionTables = () => (conversions ??= finiteResult(conversionTablesOf(L, sys, xi, change), "solveExtents (conversion)"));
+  const conversionTables = () =>
+    (conversions ??= table(
+      () => finiteResult(conversionTablesOf(L, sys, values().xi, values().change), "solveExtents (conversion)"),
+      (r) => ({ conversion: r.conversion, conversionByReaction: r.conversionByReaction }),
+    ));
   let yields: Record<string, Record<string, number>> | null = null;
   let selectivity: Record<string, Record<string, number>> | null = null;
   const result = { extents: ext, outlet: outletFlows, change: changeFlows, roundOffZeros } as SolveExtentsResult;
   Object.defineProperties(result, {
     conversion: { enumerable: true, get: () => conversionTables().conversion },
     conversionByReaction: { enumerable: true, get: () => conversionTables().conversionByReaction },
-    yield: { enumerable: true, get: () => (yields ??= finiteResult(yieldTableOf(L, sys, change), "solveExtents (yield)")) },
-    selectivity: { enumerable: true, get: () => (selectivity ??= finiteResult(selectivityTableOf(L, sys, change), "solveExtents (selectivity)")) },
+    yield: {
+      enumerable: true,
+      get: () => (yields ??= table(() => finiteResult(yieldTableOf(L, sys, values().change), "solveExtents (yield)"), (r) => r.yield)),
+    },
+    selectivity: {
+      enumerable: true,
+      get: () => (selectivity ??= table(() => finiteResult(selectivityTableOf(L, sys, values().change), "solveExtents (selectivity)"), (r) => r.selectivity)),
+    },
   });
   return result;
 }
 
-function conversionTablesOf<T>(L: Lane<T>, sys: StoichSystem, xi: readonly T[], change: readonly T[]): { conversion: Record<string, number>; conversionByReaction: Record<string, number>[] } {
+function conversionTablesOf<T>(L: TableLane<T>, sys: StoichSystem, xi: readonly T[], change: readonly T[]): { conversion: Record<string, number>; conversionByReaction: Record<string, number>[] } {
   const S = sys.species.length;
   const R = sys.reactions.length;
   const nu = L.nu(sys);
@@ -855,7 +1263,7 @@ function conversionTablesOf<T>(L: Lane<T>, sys: StoichSystem, xi: readonly T[], 
   return { conversion, conversionByReaction };
 }
 
-function yieldTableOf<T>(L: Lane<T>, sys: StoichSystem, change: readonly T[]): Record<string, Record<string, number>> {
+function yieldTableOf<T>(L: TableLane<T>, sys: StoichSystem, change: readonly T[]): Record<string, Record<string, number>> {
   const feed = L.feed(sys);
   const yields: Record<string, Record<string, number>> = {};
   for (const yp of sys.yieldPairs) {
@@ -866,7 +1274,7 @@ function yieldTableOf<T>(L: Lane<T>, sys: StoichSystem, change: readonly T[]): R
   return yields;
 }
 
-function selectivityTableOf<T>(L: Lane<T>, sys: StoichSystem, change: readonly T[]): Record<string, Record<string, number>> {
+function selectivityTableOf<T>(L: TableLane<T>, sys: StoichSystem, change: readonly T[]): Record<string, Record<string, number>> {
   const S = sys.species.length;
   const selectivity: Record<string, Record<string, number>> = {};
   if (sys.reactions.length > 1) {

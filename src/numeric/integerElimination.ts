@@ -34,9 +34,12 @@ export function integerGaussJordan(matrix: readonly (readonly bigint[])[], pivot
   return { rows, pivots: gaussJordanBigInt(rows, pivotCols) };
 }
 
-/** Same as {@link integerGaussJordan} for a matrix already in safe-integer numbers; null on overflow. */
-export function integerGaussJordanNumber(matrix: readonly (readonly number[])[], pivotCols: number): { rows: number[][]; pivots: number[] } | null {
-  const rows = matrix.map((row) => row.slice());
+/**
+ * Same as {@link integerGaussJordan} for a matrix already in safe-integer numbers; null on overflow.
+ * With `inPlace` the caller's rows are reduced (and reordered) in place instead of copies.
+ */
+export function integerGaussJordanNumber(matrix: readonly (readonly number[])[], pivotCols: number, inPlace = false): { rows: number[][]; pivots: number[] } | null {
+  const rows = inPlace ? (matrix as number[][]) : matrix.map((row) => row.slice());
   const pivots = gaussJordanNumber(rows, pivotCols);
   return pivots ? { rows, pivots } : null;
 }
@@ -93,6 +96,141 @@ export function integerNullSpaceNumber(rows: readonly (readonly number[])[], piv
   }
   return out;
 }
+
+/** Scratch of {@link integerNullVectorNumber}: row offsets, row maxima, pivot columns (grown on demand). */
+let ROW_AT = /* @__PURE__ */ new Int32Array(32);
+let ROW_MAX = /* @__PURE__ */ new Float64Array(32);
+let PIVOT_COL = /* @__PURE__ */ new Int32Array(32);
+
+/**
+ * The integer vector spanning the null space of a matrix whose null space is one-dimensional, by
+ * fraction-free forward elimination and back substitution in float64 integers (a balancing fast
+ * path: no reduced echelon form, no per-row gcd while the numbers stay below 2^26).
+ *
+ * Exact: before each row update and each step of the back substitution a bound on every product and
+ * sum (largest magnitudes times the multipliers, computed in float64, which can only round it
+ * upward past the limit) is checked to stay a safe integer; otherwise the function gives up.
+ *
+ * @param a - the matrix, row-major (`rows × cols` entries, safe integers); overwritten
+ * @param rows - number of rows
+ * @param cols - number of columns
+ * @returns the vector with coprime entries (its sign arbitrary), or null when the null space is not
+ *   one-dimensional or a value would leave the safe-integer range (the caller then decides in BigInt)
+ */
+export function integerNullVectorNumber(a: Float64Array, rows: number, cols: number): number[] | null {
+  if (ROW_AT.length < rows) {
+    ROW_AT = new Int32Array(rows);
+    ROW_MAX = new Float64Array(rows);
+    PIVOT_COL = new Int32Array(rows);
+  }
+  const at = ROW_AT;
+  const rmax = ROW_MAX;
+  for (let i = 0; i < rows; i++) {
+    const o = i * cols;
+    at[i] = o;
+    let m = 0;
+    for (let j = 0; j < cols; j++) {
+      const v = Math.abs(a[o + j] as number);
+      if (v > m) m = v;
+    }
+    rmax[i] = m;
+  }
+  let r = 0;
+  let free = -1;
+  for (let c = 0; c < cols; c++) {
+    if (r === rows) {
+      // no rows left: every remaining column is free
+      if (free >= 0 || c < cols - 1) return null;
+      free = c;
+      break;
+    }
+    let p = -1;
+    let best = Infinity;
+    for (let i = r; i < rows; i++) {
+      const v = Math.abs(a[(at[i] as number) + c] as number);
+      if (v !== 0 && v < best) {
+        best = v;
+        p = i;
+      }
+    }
+    if (p < 0) {
+      if (free >= 0) return null;
+      free = c;
+      continue;
+    }
+    const po = at[p] as number;
+    at[p] = at[r] as number;
+    at[r] = po;
+    const mp = rmax[p] as number;
+    rmax[p] = rmax[r] as number;
+    rmax[r] = mp;
+    const pv = a[po + c] as number;
+    for (let i = r + 1; i < rows; i++) {
+      const o = at[i] as number;
+      const x = a[o + c] as number;
+      if (x === 0) continue;
+      const g = gcdNum(x, pv);
+      const fa = pv / g;
+      const fb = x / g;
+      if ((rmax[i] as number) * Math.abs(fa) + mp * Math.abs(fb) > MAX_SAFE) return null;
+      a[o + c] = 0;
+      let m = 0;
+      for (let j = c + 1; j < cols; j++) {
+        const v = (a[o + j] as number) * fa - (a[po + j] as number) * fb;
+        a[o + j] = v;
+        const av = Math.abs(v);
+        if (av > m) m = av;
+      }
+      if (m > GROWTH) {
+        let rg = 0;
+        for (let j = c + 1; j < cols && rg !== 1; j++) if (a[o + j] !== 0) rg = gcdNum(rg, a[o + j] as number);
+        if (rg > 1) {
+          for (let j = c + 1; j < cols; j++) a[o + j] = (a[o + j] as number) / rg;
+          m /= rg;
+        }
+      }
+      rmax[i] = m;
+    }
+    PIVOT_COL[r] = c;
+    r++;
+  }
+  if (free < 0) return null;
+  // back substitution from the last pivot row up, with the free entry 1, keeping the vector integer
+  const x = new Array<number>(cols).fill(0);
+  x[free] = 1;
+  let sumAbs = 1;
+  let xMax = 1;
+  for (let k = r - 1; k >= 0; k--) {
+    const o = at[k] as number;
+    const pc = PIVOT_COL[k] as number;
+    if ((rmax[k] as number) * sumAbs > MAX_SAFE) return null;
+    let s = 0;
+    for (let j = pc + 1; j < cols; j++) {
+      const xj = x[j] as number;
+      if (xj !== 0) s += (a[o + j] as number) * xj;
+    }
+    if (s === 0) continue;
+    const u = a[o + pc] as number;
+    const g = gcdNum(s, u);
+    const m = Math.abs(u) / g;
+    if (m !== 1) {
+      if (xMax * m > MAX_SAFE) return null;
+      for (let j = 0; j < cols; j++) x[j] = (x[j] as number) * m;
+      sumAbs *= m;
+      xMax *= m;
+    }
+    const xp = u < 0 ? s / g : -s / g;
+    x[pc] = xp;
+    const axp = Math.abs(xp);
+    sumAbs += axp;
+    if (axp > xMax) xMax = axp;
+  }
+  reduceRowNumber(x);
+  return x;
+}
+
+/** Row magnitude above which {@link integerNullVectorNumber} divides a row by the gcd of its entries. */
+const GROWTH = 2 ** 26;
 
 /** One null-space vector held sparsely: its non-zero columns (ascending) and their values. */
 export interface SparseIntegerVector {
@@ -178,6 +316,17 @@ function toSmall(matrix: readonly (readonly bigint[])[]): number[][] | null {
 function gcdNum(a: number, b: number): number {
   a = Math.abs(a);
   b = Math.abs(b);
+  if (a <= 0x7fffffff && b <= 0x7fffffff) {
+    // int32 remainders: a float64 remainder is a library call, an int32 one an instruction
+    let x = a | 0;
+    let y = b | 0;
+    while (y !== 0) {
+      const t = x % y;
+      x = y;
+      y = t;
+    }
+    return x;
+  }
   while (b !== 0) {
     const t = a % b;
     a = b;
@@ -197,7 +346,29 @@ function reduceRowNumber(row: number[]): void {
   if (g > 1) for (let j = 0; j < row.length; j++) row[j] = (row[j] as number) / g;
 }
 
-/** In-place elimination in float64 integers; returns the pivots, or null when a value overflowed. */
+/** Largest safe integer: every product and sum of integers whose exact value stays within it is exact in float64. */
+const MAX_SAFE = 9007199254740991;
+
+/** Largest |entry| of a row. */
+function maxAbs(row: readonly number[]): number {
+  let m = 0;
+  for (let j = 0; j < row.length; j++) {
+    const a = Math.abs(row[j] as number);
+    if (a > m) m = a;
+  }
+  return m;
+}
+
+/**
+ * In-place elimination in float64 integers; returns the pivots, or null when a value overflowed.
+ *
+ * Exactness is checked per row, not per entry: with m_i and m_p the largest magnitudes of the row
+ * and of the pivot row, every entry of `fa·row − fb·pivotRow` is bounded by `fa·m_i + fb·m_p`; when
+ * that bound (computed in float64, which can only round it upward past the limit, never below it)
+ * is a safe integer, every product and difference of the row is exact. Otherwise the row is
+ * eliminated with a check on each entry, as before. The result is the unique integer reduced row
+ * echelon form (rows primitive, pivots positive), whichever way it is reached.
+ */
 function gaussJordanNumber(m: number[][], pivotCols: number): number[] | null {
   const nRows = m.length;
   const pivots: number[] = [];
@@ -214,13 +385,14 @@ function gaussJordanNumber(m: number[][], pivotCols: number): number[] | null {
       }
     }
     if (p < 0) continue;
-    const tmp = m[p] as number[];
+    const pr = m[p] as number[];
     m[p] = m[r] as number[];
-    m[r] = tmp;
-    const pr = tmp;
-    if ((pr[c] as number) < 0) for (let j = 0; j < pr.length; j++) pr[j] = -(pr[j] as number) || 0;
+    m[r] = pr;
+    const width = pr.length;
+    if ((pr[c] as number) < 0) for (let j = 0; j < width; j++) pr[j] = -(pr[j] as number) || 0;
     reduceRowNumber(pr);
     const pv = pr[c] as number;
+    const mp = maxAbs(pr);
     for (let i = 0; i < nRows; i++) {
       if (i === r) continue;
       const row = m[i] as number[];
@@ -229,14 +401,25 @@ function gaussJordanNumber(m: number[][], pivotCols: number): number[] | null {
       const g = gcdNum(a, pv);
       const fa = pv / g;
       const fb = a / g;
-      for (let j = 0; j < row.length; j++) {
-        const x = (row[j] as number) * fa;
-        const y = (pr[j] as number) * fb;
-        const v = x - y;
-        if (!Number.isSafeInteger(x) || !Number.isSafeInteger(y) || !Number.isSafeInteger(v)) return null;
-        row[j] = v || 0;
+      if (maxAbs(row) * fa + mp * Math.abs(fb) <= MAX_SAFE) {
+        // every value below is exact; track the row's gcd on the way
+        let rg = 0;
+        for (let j = 0; j < width; j++) {
+          const v = (row[j] as number) * fa - (pr[j] as number) * fb || 0;
+          row[j] = v;
+          if (v !== 0 && rg !== 1) rg = gcdNum(rg, v);
+        }
+        if (rg > 1) for (let j = 0; j < width; j++) row[j] = (row[j] as number) / rg;
+      } else {
+        for (let j = 0; j < width; j++) {
+          const x = (row[j] as number) * fa;
+          const y = (pr[j] as number) * fb;
+          const v = x - y;
+          if (!Number.isSafeInteger(x) || !Number.isSafeInteger(y) || !Number.isSafeInteger(v)) return null;
+          row[j] = v || 0;
+        }
+        reduceRowNumber(row);
       }
-      reduceRowNumber(row);
     }
     pivots.push(c);
     r++;

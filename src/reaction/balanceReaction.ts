@@ -7,20 +7,22 @@ import {
   integerGaussJordanNumber,
   integerNullSpaceFromEchelon,
   integerNullSpaceNumber,
+  integerNullVectorNumber,
 } from "../numeric/integerElimination.js";
 import {
   equationText,
   integerElementMatrix,
-  makeIntegerTerm,
+  integerTerm,
   makeReaction,
   makeTerm,
   numberElementMatrix,
   reactionFromSigned,
   type SpeciesEntry,
 } from "./internal/reactionTerms.js";
-import { parseReaction } from "./parseReaction.js";
+import { scanEquation } from "./parseReaction.js";
 import type { Reaction, Term } from "./types.js";
 import { describeValue, optionsOf, requireArray } from "../guards.js";
+import { balanceLanes } from "./internal/balanceLanes.js";
 
 /**
  * The species to balance: an equation text (its coefficients are ignored) or the species of
@@ -95,16 +97,17 @@ export interface BalanceReactionOptions {
  */
 export function balanceReaction(input: BalanceInput, options: BalanceReactionOptions = {}): Reaction {
   options = optionsOf(options, "balanceReaction");
-  const { entries, signs, nReactants } = readInput(input);
-  const n = entries.length;
-  const keys = entries.map((e) => e.species);
+  const { species: keys, formulas, nReactants } = readInput(input);
+  const n = keys.length;
   const fixed = readFixed(options, keys);
 
-  if (fixed.size === 0) {
-    const quick = quickBalance(entries, signs, nReactants);
+  if (fixed.size === 0 && !balanceLanes.bigIntOnly) {
+    const quick = quickBalance(keys, formulas, nReactants);
     if (quick) return quick;
   }
 
+  const entries: SpeciesEntry[] = keys.map((species, j) => ({ species, formula: formulas[j] as Formula }));
+  const signs = entries.map((_, j) => (j < nReactants ? -1 : 1));
   const { rows, rowNames } = integerElementMatrix(
     entries.map((e) => e.formula),
     signs,
@@ -178,65 +181,118 @@ export function balanceReaction(input: BalanceInput, options: BalanceReactionOpt
 
 /**
  * Fast path for the common case — integer counts, small numbers, a one-dimensional null space
- * with every coefficient positive — done entirely in float64 integers (exact, overflow-checked).
- * Returns null whenever anything else happens; the exact BigInt path then decides and reports.
+ * with every coefficient positive — done entirely in float64 integers (exact, overflow-checked):
+ * the signed element matrix is written straight into a scratch buffer and its null vector found by
+ * forward elimination and back substitution. Returns null whenever anything else happens; the
+ * exact BigInt path then decides and reports. The vector of a one-dimensional null space is unique
+ * up to scale, so the coprime positive coefficients are the same whichever exact route finds them.
  */
-function quickBalance(entries: readonly SpeciesEntry[], signs: readonly number[], nReactants: number): Reaction | null {
-  const m = numberElementMatrix(
-    entries.map((e) => e.formula),
-    signs,
-  );
-  if (!m) return null;
-  const n = entries.length;
-  const ech = integerGaussJordanNumber(m.rows, n);
-  if (!ech || n - ech.pivots.length !== 1) return null;
-  const ns = integerNullSpaceNumber(ech.rows, ech.pivots, n);
-  const v = ns?.[0];
-  if (!v) return null;
+function quickBalance(species: readonly string[], formulas: readonly Formula[], nReactants: number): Reaction | null {
+  const n = formulas.length;
+  // rows: the elements in order of first appearance, then the charge when a species carries one
+  const names: string[] = [];
+  let charged = false;
+  for (let j = 0; j < n; j++) {
+    const f = formulas[j] as Formula;
+    const els = f.elements;
+    for (const el in els) {
+      if (!Object.prototype.hasOwnProperty.call(els, el)) continue;
+      const v = els[el] as number;
+      if (!Number.isInteger(v) || Math.abs(v) >= 2 ** 31) return null;
+      if (names.indexOf(el) < 0) names.push(el);
+    }
+    const q = f.charge;
+    if (q !== 0) {
+      if (!Number.isInteger(q) || Math.abs(q) >= 2 ** 31) return null;
+      charged = true;
+    }
+  }
+  const rows = names.length + (charged ? 1 : 0);
+  if (rows * n > MATRIX.length) MATRIX = new Float64Array(rows * n);
+  const a = MATRIX;
+  a.fill(0, 0, rows * n);
+  for (let j = 0; j < n; j++) {
+    const f = formulas[j] as Formula;
+    const sign = j < nReactants ? -1 : 1;
+    const els = f.elements;
+    for (const el in els) {
+      if (!Object.prototype.hasOwnProperty.call(els, el)) continue;
+      a[names.indexOf(el) * n + j] = sign * (els[el] as number);
+    }
+    if (charged) a[(rows - 1) * n + j] = sign * f.charge;
+  }
+  let v = integerNullVectorNumber(a, rows, n);
+  if (v === null) {
+    // the reduced-echelon route keeps its numbers smaller (a gcd per row after every step)
+    const m = numberElementMatrix(formulas, formulas.map((_, j) => (j < nReactants ? -1 : 1)));
+    const ech = m && integerGaussJordanNumber(m.rows, n);
+    if (!ech || n - ech.pivots.length !== 1) return null;
+    v = integerNullSpaceNumber(ech.rows, ech.pivots, n)?.[0] ?? null;
+    if (v === null) return null;
+  }
   const sign = (v[0] as number) < 0 ? -1 : 1;
-  for (const x of v) if (x * sign <= 0) return null;
-  const terms = entries.map((e, j) => makeIntegerTerm(e, (v[j] as number) * sign));
-  return makeReaction(terms.slice(0, nReactants), terms.slice(nReactants));
+  for (let j = 0; j < n; j++) if ((v[j] as number) * sign <= 0) return null;
+  const reactants: Term[] = new Array<Term>(nReactants);
+  const products: Term[] = new Array<Term>(n - nReactants);
+  for (let j = 0; j < n; j++) {
+    const t = integerTerm(species[j] as string, formulas[j] as Formula, (v[j] as number) * sign);
+    if (j < nReactants) reactants[j] = t;
+    else products[j - nReactants] = t;
+  }
+  return makeReaction(reactants, products);
 }
+
+/** Scratch element matrix of {@link quickBalance} (grown on demand; the balancer never re-enters). */
+let MATRIX = /* @__PURE__ */ new Float64Array(256);
 
 function rationalMulInt(r: Rational, k: bigint): Rational {
   return rational(r.num * k, r.den);
 }
 
-function readInput(input: BalanceInput): { entries: SpeciesEntry[]; signs: number[]; nReactants: number } {
-  let reactants: SpeciesEntry[];
-  let products: SpeciesEntry[];
+function readInput(input: BalanceInput): { species: string[]; formulas: Formula[]; nReactants: number } {
+  let species: string[];
+  let formulas: Formula[];
+  let nReactants: number;
   if (typeof input === "string") {
-    const r = parseReaction(input);
-    const strip = (t: Term): SpeciesEntry => ({ species: t.species, formula: t.formula });
-    reactants = r.reactants.map(strip);
-    products = r.products.map(strip);
+    const eq = scanEquation(input);
+    species = eq.species;
+    formulas = eq.formulas;
+    nReactants = eq.nReactants;
   } else if (input !== null && typeof input === "object" && Array.isArray(input.reactants) && Array.isArray(input.products)) {
     requireArray(input.reactants, "balanceReaction", "input.reactants");
     requireArray(input.products, "balanceReaction", "input.products");
-    reactants = input.reactants.map((s, i) => entryOf(s, "reactants", i));
-    products = input.products.map((s, i) => entryOf(s, "products", i));
+    const reactants = input.reactants.map((s, i) => entryOf(s, "reactants", i));
+    const products = input.products.map((s, i) => entryOf(s, "products", i));
+    for (const [side, list] of [["reactants", reactants], ["products", products]] as const) {
+      if (list.length === 0) {
+        throw new RxthermError("INVALID_REACTION", `balanceReaction requires at least one species on the ${side} side`, { reason: `empty ${side} side`, species: [] });
+      }
+    }
+    const entries = [...reactants, ...products];
+    species = entries.map((e) => e.species);
+    formulas = entries.map((e) => e.formula);
+    nReactants = reactants.length;
   } else {
     throw new RxthermError("INVALID_ARGUMENT", "balanceReaction requires an equation text or { reactants: string[], products: string[] }", {});
   }
-  for (const [side, list] of [["reactants", reactants], ["products", products]] as const) {
-    if (list.length === 0) {
-      throw new RxthermError("INVALID_REACTION", `balanceReaction requires at least one species on the ${side} side`, { reason: `empty ${side} side`, species: [] });
-    }
-  }
-  const entries = [...reactants, ...products];
-  const seen = new Set<string>();
-  for (const e of entries) {
-    if (seen.has(e.species)) {
-      throw new RxthermError("INVALID_REACTION", `balanceReaction requires each species once, "${e.species}" appears twice`, {
+  // the first species that repeats an earlier one (pairwise for a short list, a set for a long one)
+  const n = species.length;
+  const seen = n > 24 ? new Set<string>() : null;
+  for (let j = 0; j < n; j++) {
+    const s = species[j] as string;
+    let repeated = false;
+    if (seen !== null) {
+      repeated = seen.has(s);
+      seen.add(s);
+    } else for (let i = 0; i < j && !repeated; i++) repeated = species[i] === s;
+    if (repeated) {
+      throw new RxthermError("INVALID_REACTION", `balanceReaction requires each species once, "${s}" appears twice`, {
         reason: "species repeated",
-        species: [e.species],
+        species: [s],
       });
     }
-    seen.add(e.species);
   }
-  const signs = entries.map((_, j) => (j < reactants.length ? -1 : 1));
-  return { entries, signs, nReactants: reactants.length };
+  return { species, formulas, nReactants };
 }
 
 function entryOf(species: unknown, side: string, index: number): SpeciesEntry {
@@ -263,6 +319,7 @@ function entryOf(species: unknown, side: string, index: number): SpeciesEntry {
 
 function readFixed(options: BalanceReactionOptions, keys: readonly string[]): Map<number, Rational> {
   const out = new Map<number, Rational>();
+  if (options.fixed === undefined && options.per === undefined) return out;
   const fixed = options.fixed ?? {};
   for (const [species, value] of Object.entries(fixed)) {
     const j = keys.indexOf(species);

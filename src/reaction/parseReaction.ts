@@ -1,7 +1,9 @@
 import { RxthermError } from "../errors.js";
 import { parseFormula } from "../formula/parseFormula.js";
+import type { Formula } from "../formula/types.js";
 import { rationalFromDecimalString, rationalToNumber, type Rational } from "../numeric/rational.js";
-import { makeIntegerTerm, makeReaction, makeTerm } from "./internal/reactionTerms.js";
+import { integerTerm, makeReaction, makeTerm } from "./internal/reactionTerms.js";
+import { shareFormula, sharedFormula } from "./internal/formulaMemo.js";
 import type { Reaction, Term } from "./types.js";
 
 /**
@@ -68,10 +70,46 @@ export const MAX_REACTION_COEFFICIENT = 1e9;
  * @see IUPAC, Quantities, Units and Symbols in Physical Chemistry ("Green Book"), 3rd ed. (2007), §2.10.1 (chemical equations, stoichiometric numbers)
  */
 export function parseReaction(text: string): Reaction {
+  const eq = scanEquation(text);
+  const terms: Term[] = new Array<Term>(eq.species.length);
+  for (let k = 0; k < terms.length; k++) {
+    const species = eq.species[k] as string;
+    const formula = eq.formulas[k] as Formula;
+    const n = eq.integers[k] as number;
+    terms[k] = n > 0 ? integerTerm(species, formula, n) : makeTerm({ species, formula }, eq.rationals[k] as Rational);
+  }
+  return makeReaction(terms.slice(0, eq.nReactants), terms.slice(eq.nReactants));
+}
+
+/**
+ * An equation read term by term, before any term object is built: parallel lists over the terms
+ * (reactants first), each term's species text, its parsed formula (shared, deeply frozen), its
+ * coefficient as a positive integer below 10⁹ when it is one (else 0) and otherwise as an exact
+ * rational.
+ *
+ * @internal
+ */
+export interface ScannedEquation {
+  readonly species: string[];
+  readonly formulas: Formula[];
+  /** The coefficient when it is a positive integer written with fewer than 10 characters, else 0. */
+  readonly integers: number[];
+  /** The exact coefficient where `integers` is 0 (null elsewhere). */
+  readonly rationals: (Rational | null)[];
+  readonly nReactants: number;
+}
+
+/**
+ * Read an equation as {@link parseReaction} does (same checks, same errors, in the same order)
+ * without building its terms: the balancer reads only the species and their formulas.
+ *
+ * @internal
+ */
+export function scanEquation(text: string): ScannedEquation {
   if (typeof text !== "string") {
     throw new RxthermError("INVALID_ARGUMENT", `parseReaction requires a string, got ${typeof text}`, { type: typeof text });
   }
-  if (text.trim() === "") {
+  if (isBlank(text, 0, text.length)) {
     throw new RxthermError("EMPTY_INPUT", "parseReaction requires a non-empty equation", { column: 0 });
   }
   if (text.length > MAX_REACTION_LENGTH) {
@@ -95,9 +133,11 @@ export function parseReaction(text: string): Reaction {
     });
   }
   const arrow = arrows[0] as Arrow;
-  const reactants = parseSide(text, 0, arrow.column, "reactants");
-  const products = parseSide(text, arrow.column + arrow.token.length, text.length, "products");
-  return makeReaction(reactants, products);
+  const out: ScannedEquation & { nReactants: number } = { species: [], formulas: [], integers: [], rationals: [], nReactants: 0 };
+  parseSide(text, 0, arrow.column, "reactants", out);
+  out.nReactants = out.species.length;
+  parseSide(text, arrow.column + arrow.token.length, text.length, "products", out);
+  return out;
 }
 
 // ── private helpers ──────────────────────────────────────────────────────────
@@ -133,50 +173,69 @@ function isSpace(ch: string | undefined): boolean {
   return ch === " " || ch === "\t" || ch === "\n" || ch === "\r" || ch === "\u00a0";
 }
 
-/** Split text[start, end) into terms at separator `+` signs and parse each. */
-function parseSide(text: string, start: number, end: number, side: "reactants" | "products"): Term[] {
-  if (text.slice(start, end).trim() === "") {
+/** isSpace for a char code (NaN, for a position outside the text, is no space). */
+function isSpaceCode(c: number): boolean {
+  return c === 32 || c === 9 || c === 10 || c === 13 || c === 0xa0;
+}
+
+/** ASCII white space that `String.prototype.trim` removes: tab, line feed, vertical tab, form feed, carriage return, space. */
+function isAsciiTrimSpace(c: number): boolean {
+  return c === 32 || (c >= 9 && c <= 13);
+}
+
+/** `text.slice(start, end).trim() === ""`, without the copy when an ASCII character decides it. */
+function isBlank(text: string, start: number, end: number): boolean {
+  for (let i = start; i < end; i++) {
+    const c = text.charCodeAt(i);
+    if (isAsciiTrimSpace(c)) continue;
+    if (c < 127) return false;
+    return text.slice(start, end).trim() === "";
+  }
+  return true;
+}
+
+/** Split text[start, end) into terms at separator `+` signs and parse each into `out`. */
+function parseSide(text: string, start: number, end: number, side: "reactants" | "products", out: ScannedEquation): void {
+  if (isBlank(text, start, end)) {
     throw new RxthermError("INVALID_REACTION", `parseReaction requires at least one species on the ${side} side`, {
       column: start,
       reason: `empty ${side} side`,
     });
   }
-  const terms: Term[] = [];
   let termStart = start;
   let hasContent = false; // the current term has non-space text before this point
   let hint: string | undefined; // set when the current term follows a "+digits" read as a separator
   // sign-then-number charges (Fe+2) are read as charges when the separators of this side are spaced
   const spacedSide = spacedSeparators(text, start, end);
   for (let i = start; i < end; i++) {
-    const ch = text[i] as string;
-    if (ch === "+") {
-      const prev = text[i - 1];
-      const next = i + 1 < end ? text[i + 1] : undefined;
-      const glued = hasContent && !isSpace(prev);
+    const ch = text.charCodeAt(i);
+    if (ch === 43 /* + */) {
+      const prev = text.charCodeAt(i - 1);
+      const next = i + 1 < end ? text.charCodeAt(i + 1) : -1;
+      const glued = hasContent && !isSpaceCode(prev);
       const digitsEnd = glued ? signedChargeEnd(text, i + 1, end) : -1;
       const isCharge =
         glued &&
-        (prev === "^" ||
-          next === undefined ||
-          isSpace(next) ||
-          next === "+" ||
-          next === ")" ||
-          next === "]" ||
-          next === "}" ||
+        (prev === 94 /* ^ */ ||
+          next === -1 ||
+          isSpaceCode(next) ||
+          next === 43 /* + */ ||
+          next === 41 /* ) */ ||
+          next === 93 /* ] */ ||
+          next === 125 /* } */ ||
           PHASE_AFTER_CHARGE.test(text.slice(i + 1, end)) ||
           (digitsEnd > 0 && spacedSide));
       if (!isCharge) {
-        terms.push(parseTerm(text, termStart, i, hint));
+        parseTerm(text, termStart, i, hint, out);
         hint = glued ? chargeHint(text, termStart, i, end) : undefined;
         termStart = i + 1;
         hasContent = false;
         continue;
       }
     }
-    if (!isSpace(ch)) hasContent = true;
+    if (!isSpaceCode(ch)) hasContent = true;
   }
-  terms.push(parseTerm(text, termStart, end, hint));
-  return terms;
+  parseTerm(text, termStart, end, hint, out);
 }
 
 /**
@@ -215,43 +274,52 @@ function chargeHint(text: string, termStart: number, plus: number, end: number):
   return `"${species}+${digits}" was read as ${species} + ${digits}…; if a charge was meant write ${species}${digits}+ (or space the separators: "${species}+${digits} + ...")`;
 }
 
-function parseTerm(text: string, start: number, end: number, hint?: string): Term {
-  const raw = text.slice(start, end);
-  const lead = raw.length - raw.trimStart().length;
-  const body = raw.trim();
-  const column = start + lead;
+function parseTerm(text: string, start: number, end: number, hint: string | undefined, out: ScannedEquation): void {
+  // the trimmed term [a, b): ASCII white space is stripped here; any other character at an end goes through trim()
+  let a = start;
+  let b = end;
+  while (a < b && isAsciiTrimSpace(text.charCodeAt(a))) a++;
+  while (b > a && isAsciiTrimSpace(text.charCodeAt(b - 1))) b--;
+  if (a < b && (text.charCodeAt(a) >= 127 || text.charCodeAt(b - 1) >= 127)) {
+    const raw = text.slice(start, end);
+    a = start + (raw.length - raw.trimStart().length);
+    b = a + raw.trim().length;
+  }
+  const body = text.slice(a, b);
+  const column = a;
   if (body === "") {
     throw new RxthermError("INVALID_REACTION", `parseReaction found an empty term at column ${column} (a "+" with nothing on one side)`, {
       column,
       reason: "empty term",
     });
   }
-  let coefficient: Rational = ONE;
+  let coefficient: Rational | null = null;
   let integerCoefficient = 1; // the coefficient when it is a small integer, else 0
   let speciesOffset = 0;
   const first = body.charCodeAt(0);
   const m = (first >= 48 && first <= 57) || first === 46 ? COEFFICIENT.exec(body) : null;
   if (m) {
     const ctext = m[1] as string;
-    coefficient = rationalFromDecimalString(ctext.replace(/\s+/g, ""));
-    if (coefficient.num === 0n) {
-      throw new RxthermError("INVALID_COUNT", `parseReaction requires a positive coefficient, got "${ctext}" at column ${column}`, {
-        column,
-        coefficient: ctext,
-      });
+    if (ctext.length < 10 && isDigits(ctext)) {
+      // a whole number of at most 9 digits: exact as a double, below the limit
+      integerCoefficient = Number(ctext);
+      if (integerCoefficient === 0) zeroCoefficient(ctext, column);
+    } else {
+      coefficient = rationalFromDecimalString(ctext.replace(/\s+/g, ""));
+      if (coefficient.num === 0n) zeroCoefficient(ctext, column);
+      if (rationalToNumber(coefficient) > MAX_REACTION_COEFFICIENT) {
+        throw new RxthermError("COUNT_TOO_LARGE", `parseReaction accepts coefficients up to ${MAX_REACTION_COEFFICIENT}, got "${ctext}" at column ${column}`, {
+          column,
+          coefficient: ctext,
+          limit: MAX_REACTION_COEFFICIENT,
+        });
+      }
+      integerCoefficient = coefficient.den === 1n && ctext.length < 10 ? Number(coefficient.num) : 0;
     }
-    if (rationalToNumber(coefficient) > MAX_REACTION_COEFFICIENT) {
-      throw new RxthermError("COUNT_TOO_LARGE", `parseReaction accepts coefficients up to ${MAX_REACTION_COEFFICIENT}, got "${ctext}" at column ${column}`, {
-        column,
-        coefficient: ctext,
-        limit: MAX_REACTION_COEFFICIENT,
-      });
-    }
-    integerCoefficient = coefficient.den === 1n && ctext.length < 10 ? Number(coefficient.num) : 0;
     speciesOffset = ctext.length;
     while (isSpace(body[speciesOffset])) speciesOffset++;
   }
-  const species = body.slice(speciesOffset);
+  const species = speciesOffset === 0 ? body : body.slice(speciesOffset);
   const speciesColumn = column + speciesOffset;
   if (species === "") {
     throw new RxthermError("INVALID_REACTION", `parseReaction found a coefficient without a species at column ${column}${hint !== undefined ? `; ${hint}` : ""}`, {
@@ -260,23 +328,44 @@ function parseTerm(text: string, start: number, end: number, hint?: string): Ter
       ...(hint !== undefined ? { hint } : {}),
     });
   }
-  let formula;
-  try {
-    formula = parseFormula(species);
-  } catch (e) {
-    if (e instanceof RxthermError) {
-      const inner = positionOf(e.details);
-      const where = speciesColumn + (inner ?? 0);
-      throw new RxthermError(e.code, `parseReaction: bad species "${species}" (column ${speciesColumn} of the equation; error at column ${where}): ${e.message.replace(/^\[rxtherm\]\s*/, "")}`, {
-        ...e.details,
-        column: where,
-        species,
-        speciesColumn,
-      });
+  let formula = sharedFormula(species);
+  if (formula === undefined) {
+    try {
+      formula = parseFormula(species);
+    } catch (e) {
+      if (e instanceof RxthermError) {
+        const inner = positionOf(e.details);
+        const where = speciesColumn + (inner ?? 0);
+        throw new RxthermError(e.code, `parseReaction: bad species "${species}" (column ${speciesColumn} of the equation; error at column ${where}): ${e.message.replace(/^\[rxtherm\]\s*/, "")}`, {
+          ...e.details,
+          column: where,
+          species,
+          speciesColumn,
+        });
+      }
+      throw e;
     }
-    throw e;
+    shareFormula(species, formula);
   }
-  return integerCoefficient > 0 ? makeIntegerTerm({ species, formula }, integerCoefficient) : makeTerm({ species, formula }, coefficient);
+  out.species.push(species);
+  out.formulas.push(formula);
+  out.integers.push(integerCoefficient > 0 ? integerCoefficient : 0);
+  out.rationals.push(integerCoefficient > 0 ? null : (coefficient ?? ONE));
+}
+
+function isDigits(t: string): boolean {
+  for (let i = 0; i < t.length; i++) {
+    const c = t.charCodeAt(i);
+    if (c < 48 || c > 57) return false;
+  }
+  return true;
+}
+
+function zeroCoefficient(ctext: string, column: number): never {
+  throw new RxthermError("INVALID_COUNT", `parseReaction requires a positive coefficient, got "${ctext}" at column ${column}`, {
+    column,
+    coefficient: ctext,
+  });
 }
 
 const ONE: Rational = /* @__PURE__ */ Object.freeze({ num: 1n, den: 1n });

@@ -110,6 +110,11 @@ export function makeIntegerTerm(entry: SpeciesEntry, coefficient: number): Term 
   return Object.freeze({ species: entry.species, formula: entry.formula, coefficient, exact: String(coefficient) });
 }
 
+/** {@link makeIntegerTerm} from the species and formula themselves (no entry object). */
+export function integerTerm(species: string, formula: Formula, coefficient: number): Term {
+  return Object.freeze({ species, formula, coefficient, exact: String(coefficient) });
+}
+
 /** Build a frozen Term from a species, its formula and an exact positive coefficient. */
 export function makeTerm(entry: SpeciesEntry, coefficient: Rational): Term {
   return Object.freeze({
