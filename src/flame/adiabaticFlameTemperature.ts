@@ -1,5 +1,5 @@
 import { solveFlamePoint } from "./internal/flameProblem.js";
-import { prepareFlameInput, toFlameResult } from "./internal/flameInput.js";
+import { prepareFlameInput } from "./internal/flameInput.js";
 import type { AdiabaticFlameInput, AdiabaticFlameOptions, AdiabaticFlameResult } from "./types.js";
 import { optionsOf } from "../guards.js";
 
@@ -56,7 +56,6 @@ export function adiabaticFlameTemperature(input: AdiabaticFlameInput, options: A
   options = optionsOf(options, "adiabaticFlameTemperature");
   const fn = "adiabaticFlameTemperature";
   const { setup, point } = prepareFlameInput(fn, input, options);
-  const r = solveFlamePoint(setup, point);
-  return toFlameResult(setup, point, r);
+  return solveFlamePoint(setup, point);
 }
 

@@ -1,7 +1,7 @@
 import type { ExtrapolatedPoint } from "../species/noteExtrapolation.js";
 import { RxthermError } from "../errors.js";
 import { solveFlamePoint, type FlamePoint } from "./internal/flameProblem.js";
-import { flamePointOf, prepareFlameInput, toFlameResult } from "./internal/flameInput.js";
+import { flamePointOf, prepareFlameInput } from "./internal/flameInput.js";
 import type { AdiabaticFlameInput, AdiabaticFlameOptions } from "./types.js";
 import { attachView } from "../view/attachView.js";
 import { SWEEP_VIEW } from "./internal/flameView.js";
@@ -138,7 +138,7 @@ export function flameTemperatureSweep(input: AdiabaticFlameInput, sweep: FlameSw
   points.forEach((pt, index) => {
     let r;
     try {
-      r = toFlameResult(setup, pt, solveFlamePoint(setup, pt));
+      r = solveFlamePoint(setup, pt);
     } catch (e) {
       throw withIndex(e, index, values[index]!);
     }

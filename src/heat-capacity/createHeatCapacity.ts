@@ -1,6 +1,7 @@
 import { RxthermError } from "../errors.js";
 import { slipHintDetails, withSlipHint } from "../units.js";
 import { allWithin } from "../numeric/allWithin.js";
+import { sortedWithin } from "../numeric/sortedWithin.js";
 import * as compiled from "./internal/cpCompile.js";
 import type { CpRange, RangeOptions } from "./types.js";
 import { optionsOf, describeValue } from "../guards.js";
@@ -184,7 +185,32 @@ export function createHeatCapacity(ranges: readonly CpRange[], options: CreateHe
   return new PiecewiseHeatCapacity(sorted, label, options.requirePositiveCp !== false);
 }
 
+/**
+ * The packed segments of a model: upper bounds (K) and, per segment, STRIDE coefficients in the
+ * layout of internal/cpCompile.ts (Cp, chained H and S antiderivatives, zero at 298.15 K).
+ * @internal
+ */
+export interface CompiledSegments {
+  readonly n: number;
+  readonly upper: Float64Array;
+  readonly k: Float64Array;
+}
+
+/**
+ * The packed segments of a model made by {@link createHeatCapacity} (read-only; for the summed
+ * models of heatCapacitySum.ts), or null for any other object. Not re-exported.
+ * @internal
+ */
+export function compiledSegmentsOf(model: unknown): CompiledSegments | null {
+  return model instanceof PiecewiseHeatCapacity ? PiecewiseHeatCapacity.segmentsOf(model) : null;
+}
+
 class PiecewiseHeatCapacity implements HeatCapacity {
+  /** The packed coefficients of `m` (see {@link compiledSegmentsOf}). */
+  static segmentsOf(m: PiecewiseHeatCapacity): CompiledSegments {
+    return { n: m.n, upper: m.upper, k: m.k };
+  }
+
   readonly label: string | undefined;
   readonly ranges: readonly CpRange[];
   readonly TminK: number;
@@ -361,8 +387,18 @@ class PiecewiseHeatCapacity implements HeatCapacity {
 
   // ── batch evaluations ─────────────────────────────────────────────────────
   cpBatch(temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions): Float64Array {
-    const res = this.prepareBatch("cpBatch", temperaturesK, out, options);
+    this.checkArrays("cpBatch", temperaturesK, out);
+    const sorted = this.checkTemperatures("cpBatch", temperaturesK, options);
+    const res = out ?? new Float64Array(temperaturesK.length);
     const k = this.k, len = temperaturesK.length, n = this.n;
+    if (sorted) {
+      for (let j = 0, end = 0; j < len; j = end) {
+        const i = segmentIndex(this.upper, n, temperaturesK[j]!);
+        end = this.runEnd(temperaturesK, j, i);
+        cpRun(temperaturesK, res, k, i * STRIDE, j, end);
+      }
+      return res;
+    }
     // one run per segment with the coefficients in locals, as in hBatch
     let j = 0;
     while (j < len) {
@@ -382,27 +418,35 @@ class PiecewiseHeatCapacity implements HeatCapacity {
 
   deltaHBatch(fromK: number, temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions): Float64Array {
     this.check("deltaHBatch", fromK, options);
-    const res = this.prepareBatch("deltaHBatch", temperaturesK, out, options);
-    this.hBatch(temperaturesK, res, this.h(fromK));
+    this.checkArrays("deltaHBatch", temperaturesK, out);
+    const sorted = this.checkTemperatures("deltaHBatch", temperaturesK, options);
+    const res = out ?? new Float64Array(temperaturesK.length);
+    this.hBatch(temperaturesK, res, this.h(fromK), sorted);
     return res;
   }
 
   sensibleEnthalpyBatch(temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions, offsetJPerMol = 0): Float64Array {
-    const res = this.prepareBatch("sensibleEnthalpyBatch", temperaturesK, out, options);
-    this.hBatch(temperaturesK, res, -offsetJPerMol);
+    this.checkArrays("sensibleEnthalpyBatch", temperaturesK, out);
+    const sorted = this.checkTemperatures("sensibleEnthalpyBatch", temperaturesK, options);
+    const res = out ?? new Float64Array(temperaturesK.length);
+    this.hBatch(temperaturesK, res, -offsetJPerMol, sorted);
     return res;
   }
 
   deltaSBatch(fromK: number, temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions): Float64Array {
     this.check("deltaSBatch", fromK, options);
-    const res = this.prepareBatch("deltaSBatch", temperaturesK, out, options);
-    this.sBatch(temperaturesK, res, this.s(fromK));
+    this.checkArrays("deltaSBatch", temperaturesK, out);
+    const sorted = this.checkTemperatures("deltaSBatch", temperaturesK, options);
+    const res = out ?? new Float64Array(temperaturesK.length);
+    this.sBatch(temperaturesK, res, this.s(fromK), sorted);
     return res;
   }
 
   sensibleEntropyBatch(temperaturesK: Float64Array, out?: Float64Array, options?: RangeOptions, offsetJPerMolK = 0): Float64Array {
-    const res = this.prepareBatch("sensibleEntropyBatch", temperaturesK, out, options);
-    this.sBatch(temperaturesK, res, -offsetJPerMolK);
+    this.checkArrays("sensibleEntropyBatch", temperaturesK, out);
+    const sorted = this.checkTemperatures("sensibleEntropyBatch", temperaturesK, options);
+    const res = out ?? new Float64Array(temperaturesK.length);
+    this.sBatch(temperaturesK, res, -offsetJPerMolK, sorted);
     return res;
   }
 
@@ -417,9 +461,17 @@ class PiecewiseHeatCapacity implements HeatCapacity {
     return sAt(this.k, segmentIndex(this.upper, this.n, T) * STRIDE, T);
   }
 
-  /** Hot loop of the enthalpy batches: ∫Cp dT antiderivative minus `minus`, J/mol. */
-  private hBatch(ts: Float64Array, res: Float64Array, minus: number): void {
+  /** Hot loop of the enthalpy batches: ∫Cp dT antiderivative minus `minus`, J/mol (`sorted`: checked sorted and in range). */
+  private hBatch(ts: Float64Array, res: Float64Array, minus: number, sorted: boolean): void {
     const k = this.k, len = ts.length, n = this.n;
+    if (sorted) {
+      for (let j = 0, end = 0; j < len; j = end) {
+        const i = segmentIndex(this.upper, n, ts[j]!);
+        end = this.runEnd(ts, j, i);
+        hRun(ts, res, k, i * STRIDE, minus, j, end);
+      }
+      return;
+    }
     // One run per segment: the coefficients go into locals and an inner loop without the ln-term test
     // runs while T stays in the segment (a temperature sweep or an iteration stays in one segment for
     // long runs); leaving it ends the run and costs one lookup.
@@ -446,9 +498,17 @@ class PiecewiseHeatCapacity implements HeatCapacity {
     }
   }
 
-  /** Hot loop of the entropy batches: ∫Cp/T dT antiderivative minus `minus`, J/(mol·K). */
-  private sBatch(ts: Float64Array, res: Float64Array, minus: number): void {
+  /** Hot loop of the entropy batches: ∫Cp/T dT antiderivative minus `minus`, J/(mol·K) (`sorted`: checked sorted and in range). */
+  private sBatch(ts: Float64Array, res: Float64Array, minus: number, sorted: boolean): void {
     const k = this.k, len = ts.length, n = this.n;
+    if (sorted) {
+      for (let j = 0, end = 0; j < len; j = end) {
+        const i = segmentIndex(this.upper, n, ts[j]!);
+        end = this.runEnd(ts, j, i);
+        sRun(ts, res, k, i * STRIDE, minus, j, end);
+      }
+      return;
+    }
     // one run per segment with the coefficients in locals, as in hBatch
     let j = 0;
     while (j < len) {
@@ -466,8 +526,8 @@ class PiecewiseHeatCapacity implements HeatCapacity {
     }
   }
 
-  /** Check every temperature before anything is written; return the output array. */
-  private prepareBatch(fn: string, ts: Float64Array, out: Float64Array | undefined, options: RangeOptions | undefined): Float64Array {
+  /** The temperatures and the output of a batch must be Float64Arrays, the output at least as long. */
+  private checkArrays(fn: string, ts: Float64Array, out: Float64Array | undefined): void {
     if (!(ts instanceof Float64Array)) {
       throw new RxthermError("INVALID_ARGUMENT", `${fn} requires temperaturesK as a Float64Array`, { label: this.label });
     }
@@ -476,15 +536,39 @@ class PiecewiseHeatCapacity implements HeatCapacity {
         label: this.label, length: ts.length, outLength: out instanceof Float64Array ? out.length : undefined,
       });
     }
+  }
+
+  /**
+   * Check every temperature before anything is written (throws, or allows extrapolation). Returns true
+   * when the batch is sorted and inside the data range: one pass that compares each temperature with
+   * the one before (then the first with TminK, the last with TmaxK) checks both, and the evaluation
+   * then runs segment by segment without a test per temperature. Otherwise false, after the range check.
+   */
+  private checkTemperatures(fn: string, ts: Float64Array, options: RangeOptions | undefined): boolean {
+    const len = ts.length;
     const lo = this.TminK, hi = this.TmaxK;
+    if (sortedWithin(ts, lo, hi)) return true;
     if (!allWithin(ts, lo, hi)) {
       // slow path: find each temperature outside the range (throws, or allows extrapolation)
-      for (let j = 0; j < ts.length; j++) {
+      for (let j = 0; j < len; j++) {
         const T = ts[j]!;
         if (!(T >= lo && T <= hi)) this.check(fn, T, options, j);
       }
     }
-    return out ?? new Float64Array(ts.length);
+    return false;
+  }
+
+  /** End (exclusive) of the run of a sorted batch that starts at j in segment i: the first T above the segment. */
+  private runEnd(ts: Float64Array, j: number, i: number): number {
+    if (i === this.n - 1) return ts.length;
+    const bound = this.upper[i]!;
+    let lo = j + 1, hi = ts.length;
+    while (lo < hi) {
+      const mid = (lo + hi) >>> 1;
+      if (ts[mid]! > bound) hi = mid;
+      else lo = mid + 1;
+    }
+    return lo;
   }
 
   /** Validate T; return true when it is outside the range (and extrapolation is allowed). */
@@ -514,5 +598,80 @@ class PiecewiseHeatCapacity implements HeatCapacity {
       `${fn}${this.label ? ` (${this.label})` : ""}: the ${r.cp.form} form of range [${r.TminK}, ${r.TmaxK}] K carries no absolute integration constant`,
       { label: this.label, T, rangeIndex, form: r.cp.form },
     );
+  }
+}
+
+
+// ── runs of a sorted batch inside one segment ────────────────────────────────
+// ts[j..end) are known to lie in the segment at offset o: no range test per temperature. A term
+// whose coefficient is exactly 0 (the T⁴ and 1/T terms of a Shomate Cp, the T⁵ and ln T terms of
+// its H; the 1/T terms of NASA-7) is left out, which changes no value (x + 0·T = x); otherwise the
+// Horner forms are those of cpAt, hAt and sAt.
+
+/** Cp of ts[j..end) into res, in the segment at offset o. */
+function cpRun(ts: Float64Array, res: Float64Array, k: Float64Array, o: number, j: number, end: number): void {
+  const c0 = k[o + CP_0]!, c1 = k[o + CP_1]!, c2 = k[o + CP_2]!, c3 = k[o + CP_3]!, c4 = k[o + CP_4]!, m1 = k[o + CP_M1]!, m2 = k[o + CP_M2]!;
+  if (m1 === 0 && m2 === 0) {
+    for (; j < end; j++) {
+      const T = ts[j]!;
+      res[j] = c0 + T * (c1 + T * (c2 + T * (c3 + T * c4)));
+    }
+  } else if (m1 === 0 && c4 === 0) {
+    for (; j < end; j++) {
+      const T = ts[j]!;
+      const inv = 1 / T;
+      res[j] = c0 + T * (c1 + T * (c2 + T * c3)) + inv * (inv * m2);
+    }
+  } else {
+    for (; j < end; j++) {
+      const T = ts[j]!;
+      const inv = 1 / T;
+      res[j] = c0 + T * (c1 + T * (c2 + T * (c3 + T * c4))) + inv * (m1 + inv * m2);
+    }
+  }
+}
+
+/** The H antiderivative minus `minus` of ts[j..end) into res, in the segment at offset o. */
+function hRun(ts: Float64Array, res: Float64Array, k: Float64Array, o: number, minus: number, j: number, end: number): void {
+  const h0 = k[o + H_0]! - minus, h1 = k[o + H_1]!, h2 = k[o + H_2]!, h3 = k[o + H_3]!;
+  const h4 = k[o + H_4]!, h5 = k[o + H_5]!, hi1 = k[o + H_INV]!, hl = k[o + H_LN]!;
+  if (hl !== 0) {
+    for (; j < end; j++) {
+      const T = ts[j]!;
+      res[j] = h0 + T * (h1 + T * (h2 + T * (h3 + T * (h4 + T * h5)))) + hi1 / T + hl * Math.log(T);
+    }
+  } else if (h5 === 0) {
+    for (; j < end; j++) {
+      const T = ts[j]!;
+      res[j] = h0 + T * (h1 + T * (h2 + T * (h3 + T * h4))) + hi1 / T;
+    }
+  } else if (hi1 === 0) {
+    for (; j < end; j++) {
+      const T = ts[j]!;
+      res[j] = h0 + T * (h1 + T * (h2 + T * (h3 + T * (h4 + T * h5))));
+    }
+  } else {
+    for (; j < end; j++) {
+      const T = ts[j]!;
+      res[j] = h0 + T * (h1 + T * (h2 + T * (h3 + T * (h4 + T * h5)))) + hi1 / T;
+    }
+  }
+}
+
+/** The S antiderivative minus `minus` of ts[j..end) into res, in the segment at offset o. */
+function sRun(ts: Float64Array, res: Float64Array, k: Float64Array, o: number, minus: number, j: number, end: number): void {
+  const s0 = k[o + S_0]! - minus, sl = k[o + S_LN]!, s1 = k[o + S_1]!, s2 = k[o + S_2]!, s3 = k[o + S_3]!, s4 = k[o + S_4]!;
+  const si1 = k[o + S_INV]!, si2 = k[o + S_INV2]!;
+  if (si1 === 0 && si2 === 0) {
+    for (; j < end; j++) {
+      const T = ts[j]!;
+      res[j] = s0 + sl * Math.log(T) + T * (s1 + T * (s2 + T * (s3 + T * s4)));
+    }
+  } else {
+    for (; j < end; j++) {
+      const T = ts[j]!;
+      const inv = 1 / T;
+      res[j] = s0 + sl * Math.log(T) + T * (s1 + T * (s2 + T * (s3 + T * s4))) + inv * (si1 + inv * si2);
+    }
   }
 }

@@ -44,7 +44,9 @@ export function increasingNewton(
   let loKnown = false;
   let hiKnown = false;
   let x = Math.min(Math.max(x0, lo), hi);
-  let lastValues: [number, number] = [Number.NaN, Number.NaN];
+  // the last values below and above the root (for the NO_BRACKET details)
+  let lastLow = Number.NaN;
+  let lastHigh = Number.NaN;
   for (let it = 1; it <= maxIterations; it++) {
     const { value, slope } = f(x);
     if (!Number.isFinite(value)) {
@@ -54,13 +56,13 @@ export function increasingNewton(
     if (value < 0) {
       lo = x;
       loKnown = true;
-      lastValues = [value, lastValues[1]];
-      if (x >= limits[1]) throw noBracket(fn, limits, lastValues);
+      lastLow = value;
+      if (x >= limits[1]) throw noBracket(fn, limits, lastLow, lastHigh);
     } else {
       hi = x;
       hiKnown = true;
-      lastValues = [lastValues[0], value];
-      if (x <= limits[0]) throw noBracket(fn, limits, lastValues);
+      lastHigh = value;
+      if (x <= limits[0]) throw noBracket(fn, limits, lastLow, lastHigh);
     }
     const step = slope > 0 && Number.isFinite(slope) ? -value / slope : Number.NaN;
     if (Math.abs(step) <= tolerance) return { x, value, iterations: it };
@@ -80,10 +82,10 @@ export function increasingNewton(
   );
 }
 
-function noBracket(fn: string, limits: readonly [number, number], values: [number, number]): RxthermError {
+function noBracket(fn: string, limits: readonly [number, number], low: number, high: number): RxthermError {
   return new RxthermError(
     "NO_BRACKET",
     `${fn} found no temperature in [${limits[0]}, ${limits[1]}] K (the product data range) that closes the energy balance`,
-    { rangeK: [limits[0], limits[1]], energyResidualsJ: values },
+    { rangeK: [limits[0], limits[1]], energyResidualsJ: [low, high] },
   );
 }

@@ -51,12 +51,20 @@ export function noteExtrapolation(list: ExtrapolatedPoint[], species: Species | 
   checkList(list);
   const all: readonly unknown[] = Array.isArray(species) ? requireArray(species, FN, "species") : [species];
   for (let i = 0; i < all.length; i++) checkSpecies(all[i], Array.isArray(species) ? `species[${i}]` : "species");
-  for (const sp of all as readonly Species[]) {
-    const [lo, hi] = sp.range;
-    if (T >= lo && T <= hi) continue;
-    if (!list.some((p) => p.species === sp.key && p.T === T)) list.push(Object.freeze({ species: sp.key, T, range: sp.range }));
-  }
+  for (const sp of all as readonly Species[]) appendExtrapolated(list, sp, T);
   return list;
+}
+
+/**
+ * {@link noteExtrapolation} of one species without the checks, for the library's own callers, whose
+ * list, species and T are already known to be well formed (a finite T > 0 K, a library species).
+ * @internal
+ */
+export function appendExtrapolated(list: ExtrapolatedPoint[], sp: Species, T: number): void {
+  const range = sp.range;
+  if (T >= range[0] && T <= range[1]) return;
+  for (let i = 0; i < list.length; i++) if (list[i]!.species === sp.key && list[i]!.T === T) return;
+  list.push(Object.freeze({ species: sp.key, T, range }));
 }
 
 // ── private helpers ──────────────────────────────────────────────────────────

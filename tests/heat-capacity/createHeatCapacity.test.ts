@@ -273,6 +273,11 @@ describe("createHeatCapacity", () => {
       ["N2 Shomate (3 ranges)", N2],
       ["H2O NASA-7", nasa("H2O")],
       ["tabulated", createHeatCapacity([{ TminK: 200, TmaxK: 3000, cp: { form: "tabulated", temperaturesK: [200, 700, 1500, 3000], cpJPerMolK: [29, 33, 41, 44] } }])],
+      // NASA-9 with every term (T⁻², T⁻¹, ln T in the integrals): invented coefficients, Cp > 0 over the range
+      ["NASA-9, all terms (invented)", createHeatCapacity([
+        { TminK: 300, TmaxK: 1000, cp: { form: "nasa9", a: [2e4, -300, 5, 1e-3, -2e-7, 0, 0, 0, 0] } },
+        { TminK: 1000, TmaxK: 3000, cp: { form: "nasa9", a: [-5e4, 100, 4, 5e-4, -6e-8, 4e-12, -1e-16, 0, 0] } },
+      ], { label: "NASA-9 test" })],
     ];
     for (const [name, m] of models) {
       const T = fc.double({ min: m.TminK, max: m.TmaxK, noNaN: true });
@@ -312,6 +317,30 @@ describe("createHeatCapacity", () => {
           expect(sh[i]).toBe(m.sensibleEnthalpy(t, { extrapolate: true }));
           expect(Math.abs(dh[i]! - m.deltaH(from, t))).toBeLessThan(1e-9 * 60 * m.TmaxK);
           expect(Math.abs(ds[i]! - m.deltaS(from, t))).toBeLessThan(1e-11 * 60 * m.TmaxK);
+        });
+      });
+      test.prop([fc.array(T, { minLength: 0, maxLength: 60 }), T])(`${name}: a sorted batch (evaluated segment by segment, no test per T) equals scalar`, (ts, from) => {
+        // the segment boundaries themselves are in the batch: they belong to the lower segment
+        const bounds = m.ranges.flatMap((r) => [r.TminK, r.TmaxK, ...(r.cp.form === "tabulated" ? r.cp.temperaturesK : [])]);
+        const arr = Float64Array.from([...ts, ...bounds.filter((b) => b >= m.TminK && b <= m.TmaxK)]).sort();
+        const cp = m.cpBatch(arr);
+        const sh = m.sensibleEnthalpyBatch(arr);
+        const ss = m.sensibleEntropyBatch(arr);
+        const dh = m.deltaHBatch(from, arr);
+        arr.forEach((t, i) => {
+          expect(cp[i]).toBe(m.cp(t));
+          expect(sh[i]).toBe(m.sensibleEnthalpy(t));
+          expect(ss[i]).toBe(m.sensibleEntropy(t));
+          expect(Math.abs(dh[i]! - m.deltaH(from, t))).toBeLessThan(1e-9 * 60 * m.TmaxK);
+        });
+        // the same values as the unsorted path (each T looked up on its own): reversed order
+        const rev = Float64Array.from(arr).reverse();
+        const cpRev = m.cpBatch(rev), shRev = m.sensibleEnthalpyBatch(rev), ssRev = m.sensibleEntropyBatch(rev);
+        arr.forEach((_, i) => {
+          const r = arr.length - 1 - i;
+          expect(cpRev[r]).toBe(cp[i]);
+          expect(shRev[r]).toBe(sh[i]);
+          expect(ssRev[r]).toBe(ss[i]);
         });
       });
     }

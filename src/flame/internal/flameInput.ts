@@ -1,6 +1,6 @@
 /**
  * Private: input checking shared by the flame functions — solver limits, the equivalence ratio
- * from φ or excess air, the prepared flame problem and the public result of a solved point.
+ * from φ or excess air, the prepared flame problem and its first point.
  *
  * @module
  * @internal
@@ -10,19 +10,21 @@ import { ATMOSPHERE_PA, STANDARD_TEMPERATURE_K } from "../../units.js";
 import { AIR_21_79 } from "../../extent/combustion.js";
 import { checkMixtureLimits } from "../../extent/mixtureLimits.js";
 import type { EngineLimits } from "./equilibriumEngine.js";
-import { prepareFlame, type FlamePoint, type FlamePointResult, type FlameSetup } from "./flameProblem.js";
-import { DEFAULT_FLAME_PRODUCTS, SULFUR_FLAME_PRODUCTS } from "../flameDefaults.js";
-import { flameSpecies } from "./flameLinks.js";
-import type { AdiabaticFlameInput, AdiabaticFlameOptions, AdiabaticFlameResult } from "../types.js";
-import type { Flows } from "../../extent/types.js";
-import { FLAME_PROTOTYPE } from "./flameView.js";
+import { prepareFlame, type FlamePoint, type FlameSetup } from "./flameProblem.js";
+import type { AdiabaticFlameInput, AdiabaticFlameOptions } from "../types.js";
 import { describeValue } from "../../guards.js";
+
+/** The solver settings when no option sets them (shared: the limits are only read). */
+const DEFAULT_LIMITS: EngineLimits = /* @__PURE__ */ Object.freeze({ maxIterations: 300, elementTolerance: 1e-12, toleranceK: 1e-6, extrapolate: false });
 
 /** Resolve and check the solver settings. */
 export function resolveLimits(
   fn: string,
   options: { maxIterations?: number; elementTolerance?: number; toleranceK?: number; extrapolate?: boolean },
 ): EngineLimits {
+  if (options.maxIterations === undefined && options.elementTolerance === undefined && options.toleranceK === undefined && options.extrapolate !== true) {
+    return DEFAULT_LIMITS;
+  }
   const maxIterations = options.maxIterations ?? 300;
   const elementTolerance = options.elementTolerance ?? 1e-12;
   const toleranceK = options.toleranceK ?? 1e-6;
@@ -53,8 +55,9 @@ export function prepareFlameInput(fn: string, input: AdiabaticFlameInput, option
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires process "constant-pressure" or "constant-volume", got ${describeValue(process)}`, { process });
   }
   const point = flamePointOf(fn, input);
-  const products = input.products ?? defaultProducts(fn, input);
-  if (!Array.isArray(products) || products.length === 0) {
+  // the default products (with the sulfur gases when a stream holds sulfur) are chosen with the reactants
+  const products = input.products;
+  if (products !== undefined && (!Array.isArray(products) || products.length === 0)) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires products to be a non-empty list of species keys`, { products });
   }
   const setup = prepareFlame({
@@ -83,46 +86,6 @@ export function flamePointOf(fn: string, input: AdiabaticFlameInput): FlamePoint
   return { phi, fuelT, oxidizerT, diluentT, P };
 }
 
-/** Public result of one solved point. */
-export function toFlameResult(setup: FlameSetup, point: FlamePoint, r: FlamePointResult): AdiabaticFlameResult {
-  let gas = 0;
-  const keys = Object.keys(r.moles);
-  for (let i = 0; i < keys.length; i++) if (!(keys[i]! in r.condensed)) gas += r.moles[keys[i]!]!;
-  const products: Record<string, number> = {};
-  const checkPhase = setup.mode === "equilibrium" && setup.engine !== null;
-  for (let i = 0; i < keys.length; i++) {
-    const k = keys[i]!;
-    if (!(k in r.condensed) && !(checkPhase && isCondensedKey(setup, k))) products[k] = r.moles[k]! / gas;
-  }
-  // made on the display prototype (non-enumerable display methods, no per-result cost)
-  const out = Object.create(FLAME_PROTOTYPE) as { -readonly [K in keyof AdiabaticFlameResult]: AdiabaticFlameResult[K] };
-  out.T = r.T;
-  out.P = r.P;
-  out.products = products;
-  out.moles = r.moles;
-  out.condensed = r.condensed;
-  out.oxidizer = r.oxidizerMoles;
-  out.equivalenceRatio = point.phi;
-  out.theoreticalO2 = setup.reactants.theoreticalO2;
-  out.mode = setup.mode;
-  out.process = setup.constantVolume ? "constant-volume" : "constant-pressure";
-  out.reactantEnergy = r.reactantEnergy;
-  out.residual = r.residual;
-  out.relativeResidual = r.relativeResidual;
-  out.iterations = r.iterations;
-  out.equilibriumIterations = r.equilibriumIterations;
-  out.elementResidual = r.elementResidual;
-  out.extrapolated = r.extrapolated;
-  return out;
-}
-
-function isCondensedKey(setup: FlameSetup, key: string): boolean {
-  const e = setup.engine;
-  if (e === null || setup.mode !== "equilibrium") return false;
-  const j = e.keys.indexOf(key);
-  return j >= 0 && e.problem.gas[j] === 0;
-}
-
 /** φ from the equivalence ratio or the excess air (exactly one, or neither → 1). */
 export function equivalenceRatioOf(fn: string, equivalenceRatio: number | undefined, excessAir: number | undefined, allowExtremeMixture?: boolean): number {
   if (equivalenceRatio !== undefined && excessAir !== undefined) {
@@ -149,18 +112,3 @@ function positive(fn: string, name: string, v: number): number {
   return v;
 }
 
-/** The default product set, with the sulfur gases when any reactant holds sulfur. */
-function defaultProducts(fn: string, input: AdiabaticFlameInput): readonly string[] {
-  const holdsSulfur = (flows: string | Flows | undefined): boolean => {
-    if (flows === undefined || flows === null) return false;
-    if (typeof flows === "string") return flows !== "air" && flows !== "oxygen" && (flameSpecies(fn, flows, input.library).formula.elements.S ?? 0) > 0;
-    if (typeof flows !== "object") return false;
-    for (const [key, n] of Object.entries(flows)) {
-      if (typeof n === "number" && n > 0 && (flameSpecies(fn, key, input.library).formula.elements.S ?? 0) > 0) return true;
-    }
-    return false;
-  };
-  return holdsSulfur(input.fuel) || holdsSulfur(input.oxidizer) || holdsSulfur(input.diluent)
-    ? [...DEFAULT_FLAME_PRODUCTS, ...SULFUR_FLAME_PRODUCTS]
-    : DEFAULT_FLAME_PRODUCTS;
-}

@@ -105,6 +105,15 @@ export function buildSpeciesFromParts(parts: SpeciesParts): Species {
   return new TabulatedSpecies(parts);
 }
 
+/**
+ * The compiled heat-capacity model of a species built here whose H°(T) is `hf298` + the model's
+ * sensible enthalpy and whose Cp° is the model's (no phase transitions), compiled on first use;
+ * null for a species with transitions or an object not built here.
+ */
+export function speciesModelOf(sp: Species): HeatCapacity | null {
+  return TabulatedSpecies.modelOf(sp);
+}
+
 // Built inside a pure function call: the class has computed (symbol-keyed) display methods, which a
 // bundler would otherwise keep as possible side effects, pulling the species layer into every bundle.
 const TabulatedSpecies = /* @__PURE__ */ (() =>
@@ -255,6 +264,12 @@ class TabulatedSpecies implements Species {
     }
     if (this.#trT.length !== 0) for (let j = 0; j < T.length; j++) res[j] = res[j]! + this.#transitionSum(T[j]!, this.#trS);
     return res;
+  }
+
+  /** See {@link speciesModelOf}. */
+  static modelOf(sp: unknown): HeatCapacity | null {
+    if (typeof sp !== "object" || sp === null || !(#trT in sp) || sp.#trT.length !== 0) return null;
+    return sp.#model ?? sp.#compile();
   }
 
   /** Compile the heat-capacity model on first use (data are trusted: validated or test-checked). */
