@@ -7,7 +7,10 @@ const pkg = JSON.parse(readFileSync(new URL("./package.json", import.meta.url), 
 export default defineConfig([
   {
     // rxtherm/database is its own entry: the main entry never bundles or loads its data
-    entry: { index: "src/index.ts", database: "src/database/index.ts" },
+    // internal/exact-sums: the only code that imports decimal.js, as an entry of its own so that it lands in
+    // its own chunk: a bundler can then leave decimal.js out of an app that never sums enthalpies exactly
+    // (decimal.js does not declare itself free of side effects, so an import of it in index.js would stay)
+    entry: { index: "src/index.ts", database: "src/database/index.ts", "internal/exact-sums": "src/enthalpy/exactSum.ts" },
     format: ["esm", "cjs"],
     // shared code in one chunk for both formats, so that rxtherm and rxtherm/database share one species layer
     splitting: true,

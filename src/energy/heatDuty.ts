@@ -5,7 +5,8 @@ import { noteExtrapolation, type ExtrapolatedPoint } from "../species/noteExtrap
 import type { Reaction } from "../reaction/types.js";
 import type { Stream } from "../extent/types.js";
 import { resolveStream, type Entry, type ResolvedStream } from "./internal/energyStreams.js";
-import { prepareReaction, standardEnthalpyExact } from "../enthalpy/preparedReaction.js";
+import { prepareReaction } from "../enthalpy/preparedReaction.js";
+import { standardEnthalpyExact } from "../enthalpy/exactSum.js";
 import { HEAT_DUTY_PROTOTYPE } from "./internal/energyView.js";
 import { describeValue, finiteResult, knownKeys, optionsOf, rejectUnknownKeys } from "../guards.js";
 

@@ -2,7 +2,7 @@ import { RxthermError } from "../errors.js";
 import type { Library } from "../species/types.js";
 import { parseFormula } from "../formula/parseFormula.js";
 import { resolveSpecies } from "./resolveInputs.js";
-import { ExactDecimal } from "./preparedReaction.js";
+import { ExactDecimal } from "./exactSum.js";
 import { combustionProducts } from "./internal/combustionProducts.js";
 import { decimalText } from "./reactionEnthalpyFromCombustion.js";
 import { optionsOf, describeValue } from "../guards.js";

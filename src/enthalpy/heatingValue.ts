@@ -4,7 +4,7 @@ import type { Library, Species } from "../species/types.js";
 import type { Flows } from "../extent/types.js";
 import { molarMass } from "../formula/molarMass.js";
 import { resolveSpecies } from "./resolveInputs.js";
-import { ExactDecimal } from "./preparedReaction.js";
+import { ExactDecimal } from "./exactSum.js";
 import { combustionProducts } from "./internal/combustionProducts.js";
 import { describeValue, knownKeys, optionsOf } from "../guards.js";
 

@@ -5,7 +5,7 @@ import {
   rationalToNumber, rationalToString, type Rational,
 } from "../numeric/rational.js";
 import { toReaction } from "./resolveInputs.js";
-import { ExactDecimal, exactWeightedSum } from "./preparedReaction.js";
+import { ExactDecimal, exactWeightedSum } from "./exactSum.js";
 import { describeValue, requireArray, requireRecord } from "../guards.js";
 import { formatReaction } from "../reaction/formatReaction.js";
 import { attachView, viewDescriptors } from "../view/attachView.js";

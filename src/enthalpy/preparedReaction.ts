@@ -6,7 +6,6 @@
  * @module
  * @internal
  */
-import Decimal from "decimal.js";
 import { RxthermError } from "../errors.js";
 import { isDeepFrozen } from "../guards.js";
 import type { Library, Species } from "../species/types.js";
@@ -15,8 +14,6 @@ import { rationalAdd, rationalFromDecimalString, rationalNeg, type Rational } fr
 import { reactionResiduals, resolveSpecies, toReaction } from "./resolveInputs.js";
 import { libraryOf } from "../species/species.js";
 
-/** Private decimal constructor: 34 significant digits, round half even (never Decimal.set). */
-export const ExactDecimal = /* @__PURE__ */ Decimal.clone({ precision: 34, rounding: Decimal.ROUND_HALF_EVEN });
 
 /** A reaction resolved against a library. */
 export interface PreparedReaction {
@@ -95,35 +92,4 @@ function build(fn: string, reaction: Reaction, library: Library | undefined): Pr
 function termRational(t: Reaction["reactants"][number]): Rational {
   const text = typeof t.exact === "string" && t.exact !== "" ? t.exact : String(t.coefficient);
   return rationalFromDecimalString(text);
-}
-
-/** Exact Σ ν·x for decimal texts x (J/mol), as a Decimal (one final rounded division). */
-export function exactWeightedSum(nuExact: readonly Rational[], values: readonly string[]): Decimal {
-  // Σ (p/q)·h = (Σ p·(L/q)·h) / L with L the lcm of the denominators: only the last step rounds.
-  let lcm = 1n;
-  for (const r of nuExact) lcm = (lcm / gcd(lcm, r.den)) * r.den;
-  let sum = new ExactDecimal(0);
-  for (let i = 0; i < nuExact.length; i++) {
-    const r = nuExact[i] as Rational;
-    const factor = (r.num * (lcm / r.den)).toString();
-    sum = sum.plus(new ExactDecimal(values[i] as string).times(factor));
-  }
-  return lcm === 1n ? sum : sum.div(lcm.toString());
-}
-
-function gcd(a: bigint, b: bigint): bigint {
-  while (b !== 0n) [a, b] = [b, a % b];
-  return a < 0n ? -a : a;
-}
-
-const standardSums = new WeakMap<PreparedReaction, Decimal>();
-
-/** Exact Σ ν·ΔfH°(298.15 K) of a prepared reaction in J/mol, computed once and cached. */
-export function standardEnthalpyExact(p: PreparedReaction): Decimal {
-  let sum = standardSums.get(p);
-  if (sum === undefined) {
-    sum = exactWeightedSum(p.nuExact, p.species.map((s) => s.hf298Exact));
-    standardSums.set(p, sum);
-  }
-  return sum;
 }

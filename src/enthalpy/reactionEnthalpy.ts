@@ -5,7 +5,8 @@ import { noteExtrapolation, type ExtrapolatedPoint } from "../species/noteExtrap
 import type { Reaction } from "../reaction/types.js";
 import type Decimal from "decimal.js";
 import type { Rational } from "../numeric/rational.js";
-import { prepareReaction, standardEnthalpyExact, type PreparedReaction } from "./preparedReaction.js";
+import { prepareReaction, type PreparedReaction } from "./preparedReaction.js";
+import { standardEnthalpyExact } from "./exactSum.js";
 import { REACTION_ENTHALPY_PROTOTYPE } from "./internal/enthalpyView.js";
 import { describeValue, knownKeys, optionsOf } from "../guards.js";
 

@@ -2,7 +2,7 @@ import { RxthermError } from "../errors.js";
 import type { Reaction } from "../reaction/types.js";
 import { rationalFromDecimalString, rationalNeg, type Rational } from "../numeric/rational.js";
 import { reactionResiduals, toReaction } from "./resolveInputs.js";
-import { ExactDecimal, exactWeightedSum } from "./preparedReaction.js";
+import { ExactDecimal, exactWeightedSum } from "./exactSum.js";
 import { describeValue } from "../guards.js";
 
 /**

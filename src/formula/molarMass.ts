@@ -1,4 +1,4 @@
-import Decimal from "decimal.js";
+import { decimalPlus, decimalTimes, decimalToNumber, exactDecimalOfNumber, type ExactDecimalValue } from "../numeric/exactDecimal.js";
 import { RxthermError } from "../errors.js";
 import { checkFormula } from "./internal/checkFormula.js";
 import { INDEX_MICRO_WEIGHTS, INDEX_WEIGHTS, symbolIndexOf } from "./internal/elementIndex.js";
@@ -75,16 +75,17 @@ export function molarMass(formula: string | Formula, options: MolarMassOptions =
     }
     if (exact && micro <= Number.MAX_SAFE_INTEGER) return micro / 1e6;
   }
-  let sum = new MassDecimal(0);
+  // exact sum of count × weight over the decimals the numbers print as, rounded once
+  let sum: ExactDecimalValue = { m: 0n, e: 0 };
   for (const sym in f.elements) {
-    sum = sum.plus(new MassDecimal(String(f.elements[sym])).times(String(INDEX_WEIGHTS[symbolIndexOf(sym)])));
+    const weight = exactDecimalOfNumber(INDEX_WEIGHTS[symbolIndexOf(sym)] as number);
+    sum = decimalPlus(sum, decimalTimes(exactDecimalOfNumber(f.elements[sym] as number), weight));
   }
-  if (electron && f.charge !== 0) sum = sum.minus(new MassDecimal(String(ELECTRON_MOLAR_MASS_G_PER_MOL)).times(f.charge));
-  return Number(sum.toString());
+  if (electron && f.charge !== 0) {
+    sum = decimalPlus(sum, decimalTimes(exactDecimalOfNumber(ELECTRON_MOLAR_MASS_G_PER_MOL), exactDecimalOfNumber(-f.charge)));
+  }
+  return decimalToNumber(sum);
 }
-
-/** Private decimal constructor (60 significant digits, half-even) for exact mass sums. */
-const MassDecimal = /* @__PURE__ */ Decimal.clone({ precision: 60, rounding: Decimal.ROUND_HALF_EVEN });
 
 function microWeight(sym: string): number {
   return INDEX_MICRO_WEIGHTS[symbolIndexOf(sym)] as number;

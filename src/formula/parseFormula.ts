@@ -1,4 +1,6 @@
-import Decimal from "decimal.js";
+import {
+  decimalCompare, decimalPlus, decimalTimes, decimalToNumber, exactDecimal, exactDecimalOfNumber, type ExactDecimalValue,
+} from "../numeric/exactDecimal.js";
 import { RxthermError, type RxthermErrorCode } from "../errors.js";
 import { ELEMENT_KEY_COUNT, INDEX_SYMBOLS, symbolIndex } from "./internal/elementIndex.js";
 import type { Formula, Phase } from "./types.js";
@@ -118,9 +120,23 @@ export function parseFormula(text: string): Formula {
 
 // ───────────────────────────── private scanner ─────────────────────────────
 
-/** Private exact constructor for decimal counts; never configured globally. */
-const ExactDecimal = /* @__PURE__ */ Decimal.clone({ precision: 1000, rounding: Decimal.ROUND_HALF_EVEN });
-const ONE = /* @__PURE__ */ new ExactDecimal(1);
+/** Exact 1 (decimal counts are exact BigInt decimals, numeric/exactDecimal.ts). */
+const ONE: ExactDecimalValue = { m: 1n, e: 0 };
+
+/** An exact integer count. */
+function exactInteger(v: number): ExactDecimalValue {
+  return { m: BigInt(v), e: 0 };
+}
+
+/** d > x, exactly (x a limit such as FORMULA_LIMITS.maxCount). */
+function above(d: ExactDecimalValue, x: number): boolean {
+  return decimalCompare(d, exactDecimalOfNumber(x)) > 0;
+}
+
+/** d < x, exactly. */
+function below(d: ExactDecimalValue, x: number): boolean {
+  return decimalCompare(d, exactDecimalOfNumber(x)) < 0;
+}
 
 /** Phase of a suffix word, or null (a switch, so that words like "constructor" never match). */
 function phaseOf(word: string): Phase | null {
@@ -139,7 +155,7 @@ function phaseOf(word: string): Phase | null {
 const SYMS: number[] = [];
 const COLS: number[] = [];
 const CNTS: number[] = [];
-const DCNTS: Decimal[] = [];
+const DCNTS: ExactDecimalValue[] = [];
 const EGROUP: number[] = []; // entry → id of its innermost group (adduct parts are root groups)
 const G_START: number[] = []; // by depth: entry count when the bracket opened
 const G_CLOSE: number[] = []; // by depth: expected closing char code
@@ -147,16 +163,16 @@ const G_COL: number[] = []; // by depth: column of the opening bracket
 const G_ID: number[] = []; // by depth: group id
 const GPARENT: number[] = []; // by group id: parent group id, −1 for an adduct part
 const GMUL: number[] = []; // by group id: multiplier (fast mode)
-const GDMUL: (Decimal | null)[] = []; // by group id: multiplier (exact mode), null for 1
+const GDMUL: (ExactDecimalValue | null)[] = []; // by group id: multiplier (exact mode), null for 1
 const GMCOL: number[] = []; // by group id: column of the multiplier, −1 when none is written
 const CUM: number[] = []; // by group id: product of the multipliers from the root (fast mode)
 const ACC: number[] = /* @__PURE__ */ new Array<number>(ELEMENT_KEY_COUNT).fill(0); // by element index: running total
 const ORDER: number[] = []; // element indexes in order of first appearance
-const DCUM: Decimal[] = []; // by group id: the same in exact mode
+const DCUM: ExactDecimalValue[] = []; // by group id: the same in exact mode
 
 // Results of readCount / readCharge (scratch, to avoid allocating tuples on the hot path).
 let countValue = 0;
-let countExact: Decimal | null = null;
+let countExact: ExactDecimalValue | null = null;
 let countIsInteger = true;
 let chargeNext = 0;
 
@@ -218,7 +234,7 @@ function scan(s: string, start: number, end: number, exact: boolean): Formula | 
         i += 1;
       }
       let cnt = 1;
-      let dcnt: Decimal | null = null;
+      let dcnt: ExactDecimalValue | null = null;
       lastElemCountEnd = -1;
       if (i < end) {
         const c3 = s.charCodeAt(i);
@@ -234,7 +250,7 @@ function scan(s: string, start: number, end: number, exact: boolean): Formula | 
       SYMS[n] = idx;
       COLS[n] = col;
       EGROUP[n] = cur;
-      if (exact) DCNTS[n] = dcnt ?? new ExactDecimal(cnt);
+      if (exact) DCNTS[n] = dcnt ?? exactInteger(cnt);
       else CNTS[n] = cnt;
       n++;
       continue;
@@ -391,13 +407,13 @@ function scan(s: string, start: number, end: number, exact: boolean): Formula | 
       (i + 1 === end || s.charCodeAt(i + 1) === 40)
     ) {
       // Fe3+, O2-: digits after a lone symbol followed by one sign are the charge
-      const magnitude = exact ? (DCNTS[0] as Decimal).toNumber() : (CNTS[0] as number);
+      const magnitude = exact ? decimalToNumber(DCNTS[0] as ExactDecimalValue) : (CNTS[0] as number);
       if (magnitude > FORMULA_LIMITS.maxCharge) {
         fail("INVALID_CHARGE", s, i - 1,
           `parseFormula accepts charges up to ${FORMULA_LIMITS.maxCharge} in magnitude, got ${magnitude}`, { limit: FORMULA_LIMITS.maxCharge });
       }
       charge = cs === 43 ? magnitude : -magnitude;
-      if (exact) DCNTS[0] = new ExactDecimal(1);
+      if (exact) DCNTS[0] = ONE;
       else CNTS[0] = 1;
       i++;
     } else {
@@ -476,25 +492,25 @@ function finish(
     for (let g = 0; g < gCount; g++) {
       const parent = GPARENT[g] as number;
       const own = GDMUL[g] ?? ONE;
-      const m = parent < 0 ? own : own.times(DCUM[parent] as Decimal);
-      if (m.gt(FORMULA_LIMITS.maxCount)) tooLarge(s, GMCOL[g] as number, null, m.toNumber());
-      if (m.lt(FORMULA_LIMITS.minCount)) tooSmall(s, GMCOL[g] as number, null, m.toNumber());
+      const m = parent < 0 ? own : decimalTimes(own, DCUM[parent] as ExactDecimalValue);
+      if (above(m, FORMULA_LIMITS.maxCount)) tooLarge(s, GMCOL[g] as number, null, decimalToNumber(m));
+      if (below(m, FORMULA_LIMITS.minCount)) tooSmall(s, GMCOL[g] as number, null, decimalToNumber(m));
       DCUM[g] = m;
     }
-    const sums = new Map<string, Decimal>();
+    const sums = new Map<string, ExactDecimalValue>();
     for (let k = 0; k < n; k++) {
       const sym = INDEX_SYMBOLS[SYMS[k] as number] as string;
       const g = EGROUP[k] as number;
-      const one = (DCNTS[k] as Decimal).times(DCUM[g] as Decimal);
-      if (one.gt(FORMULA_LIMITS.maxCount)) tooLarge(s, multiplierColumn(g, COLS[k] as number), sym, one.toNumber());
-      if (one.lt(FORMULA_LIMITS.minCount)) tooSmall(s, multiplierColumn(g, COLS[k] as number), sym, one.toNumber());
+      const one = decimalTimes(DCNTS[k] as ExactDecimalValue, DCUM[g] as ExactDecimalValue);
+      if (above(one, FORMULA_LIMITS.maxCount)) tooLarge(s, multiplierColumn(g, COLS[k] as number), sym, decimalToNumber(one));
+      if (below(one, FORMULA_LIMITS.minCount)) tooSmall(s, multiplierColumn(g, COLS[k] as number), sym, decimalToNumber(one));
       const prev = sums.get(sym);
-      const v = prev === undefined ? one : prev.plus(one);
-      if (v.gt(FORMULA_LIMITS.maxCount)) tooLarge(s, COLS[k] as number, sym, v.toNumber());
+      const v = prev === undefined ? one : decimalPlus(prev, one);
+      if (above(v, FORMULA_LIMITS.maxCount)) tooLarge(s, COLS[k] as number, sym, decimalToNumber(v));
       sums.set(sym, v);
     }
-    for (const [sym, v] of sums) elements[sym] = Number(v.toString());
-    // release Decimal objects
+    for (const [sym, v] of sums) elements[sym] = decimalToNumber(v);
+    // release the exact values
     DCNTS.length = 0;
     DCUM.length = 0;
     GDMUL.length = 0;
@@ -557,13 +573,13 @@ function readCount(s: string, i: number, end: number, exact: boolean, leading = 
       fail("INVALID_COUNT", s, col,
         `parseFormula accepts counts with at most ${FORMULA_LIMITS.maxDecimalPlaces} decimal places`, { limit: FORMULA_LIMITS.maxDecimalPlaces });
     }
-    const d = new ExactDecimal(s.slice(col, i));
-    if (d.isZero()) {
+    const d = exactDecimal(s.slice(col, i)) as ExactDecimalValue; // digits "." digits: always valid text
+    if (d.m === 0n) {
       fail("INVALID_COUNT", s, col, `parseFormula requires counts above zero, got ${s.slice(col, i)}`, {});
     }
-    if (d.gt(FORMULA_LIMITS.maxCount)) tooLarge(s, col, null, d.toNumber());
-    if (d.lt(FORMULA_LIMITS.minCount)) tooSmall(s, col, null, d.toNumber());
-    countValue = d.toNumber();
+    if (above(d, FORMULA_LIMITS.maxCount)) tooLarge(s, col, null, decimalToNumber(d));
+    if (below(d, FORMULA_LIMITS.minCount)) tooSmall(s, col, null, decimalToNumber(d));
+    countValue = decimalToNumber(d);
     countExact = d;
     countIsInteger = false;
     return i;
@@ -574,7 +590,7 @@ function readCount(s: string, i: number, end: number, exact: boolean, leading = 
 function integerCount(s: string, col: number, next: number, v: number, exact: boolean): number {
   if (v > FORMULA_LIMITS.maxCount) tooLarge(s, col, null, v);
   countValue = v;
-  countExact = exact ? new ExactDecimal(v) : null;
+  countExact = exact ? exactInteger(v) : null;
   countIsInteger = true;
   return next;
 }

@@ -9,7 +9,7 @@
  * @module
  * @internal
  */
-import Decimal from "decimal.js";
+import { decimalTimes, decimalToPlainText, exactDecimalOfNumber } from "../../numeric/exactDecimal.js";
 import { RxthermError } from "../../errors.js";
 import { createHeatCapacity, type HeatCapacity } from "../../heat-capacity/createHeatCapacity.js";
 import type { CpForm, CpRange, RangeOptions } from "../../heat-capacity/types.js";
@@ -23,7 +23,6 @@ import { JUPYTER_DISPLAY, RESULT_VIEW } from "../../view/displaySymbols.js";
 import { viewMimeBundle } from "../../view/renderView.js";
 import type { MimeBundle, ResultView } from "../../view/types.js";
 
-const D = /* @__PURE__ */ Decimal.clone({ precision: 34, rounding: Decimal.ROUND_HALF_EVEN });
 const EXTEND: RangeOptions = /* @__PURE__ */ Object.freeze({ extrapolate: true });
 const NO_TRANSITIONS: readonly SpeciesTransition[] = /* @__PURE__ */ Object.freeze([]);
 const NO_STEPS = /* @__PURE__ */ new Float64Array(0);
@@ -59,7 +58,7 @@ export interface SpeciesParts {
 export function buildSpecies(e: SpeciesEntry): Species {
   const reading = readSpeciesFormula(e.formula, e.phase);
   if (!reading.ok) throw new RxthermError("INVALID_DATA", `species ${e.key}: ${reading.problem}`, { species: e.key });
-  const exact = new D(String(e.hf298KJPerMol)).times(1000);
+  const exact = decimalToPlainText(decimalTimes(exactDecimalOfNumber(e.hf298KJPerMol), { m: 1000n, e: 0 }));
   const sources: Record<string, string> = { hf298: e.hf298Source, s298: e.s298Source, cp: e.heatCapacity.source };
   e.heatCapacity.ranges.forEach((r, i) => {
     if (r.source !== undefined) sources[`cp.ranges.${i}`] = r.source;
@@ -76,7 +75,7 @@ export function buildSpecies(e: SpeciesEntry): Species {
     ...(e.cas !== undefined ? { cas: e.cas } : {}),
     ...(e.dataset !== undefined ? { dataset: e.dataset } : {}),
     ...(e.note !== undefined ? { note: e.note } : {}),
-    hf298Exact: exact.isZero() ? "0" : exact.toFixed(), // no "-0"
+    hf298Exact: exact, // plain decimal text, never "-0"
     ...(e.hf298UncertaintyKJPerMol !== undefined ? { hf298UncertaintyJPerMol: e.hf298UncertaintyKJPerMol * 1000 } : {}),
     s298: e.s298JPerMolK,
     sources,
