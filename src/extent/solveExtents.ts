@@ -36,7 +36,7 @@ import { type StoichSystem, type YieldPair, buildSystem, resolveSpecies } from "
 import type { ExtentSpec, Flows } from "./types.js";
 import { attachView } from "../view/attachView.js";
 import { EXTENTS_VIEW } from "./internal/extentView.js";
-import { describeValue, finiteResult, optionsOf } from "../guards.js";
+import { describeValue, finiteResult, knownKeys, optionsOf, rejectUnknownKeys } from "../guards.js";
 import { exactLanes } from "./internal/exactLanes.js";
 import {
   EXPANSION_LIMIT,
@@ -54,6 +54,10 @@ import {
   scaleByPowerOfTen,
   scaleExpansion,
 } from "../numeric/expansion.js";
+
+/** The keys solveExtents reads (a misspelt one is an error, not a silent default). */
+const INPUT_KEYS = /* @__PURE__ */ knownKeys<SolveExtentsInput>()("feed", "reactions", "specs");
+const OPTION_KEYS = /* @__PURE__ */ knownKeys<SolveExtentsOptions>()("arithmetic");
 
 /**
  * Options of {@link solveExtents}.
@@ -181,11 +185,12 @@ export interface SolveExtentsResult {
  * @see IUPAC Compendium of Chemical Terminology (the Gold Book), entry "extent of reaction, ξ"; conversion, yield and selectivity as defined above (common practice — definitions of yield and selectivity vary between sources, so check the one your plant uses)
  */
 export function solveExtents(input: SolveExtentsInput, options: SolveExtentsOptions = {}): SolveExtentsResult {
-  options = optionsOf(options, "solveExtents");
+  options = optionsOf(options, "solveExtents", "options", OPTION_KEYS);
   const fn = "solveExtents";
   if (input === null || typeof input !== "object") {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object { feed, reactions, specs }`, {});
   }
+  rejectUnknownKeys(input, INPUT_KEYS, fn, "input");
   const arithmetic = options.arithmetic ?? "exact";
   if (arithmetic !== "exact" && arithmetic !== "float") {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires options.arithmetic "exact" or "float", got ${describeValue(arithmetic)}`, { arithmetic });

@@ -1,5 +1,5 @@
 import { solveFlamePoint } from "./internal/flameProblem.js";
-import { prepareFlameInput } from "./internal/flameInput.js";
+import { FLAME_OPTION_KEYS, prepareFlameInput } from "./internal/flameInput.js";
 import type { AdiabaticFlameInput, AdiabaticFlameOptions, AdiabaticFlameResult } from "./types.js";
 import { optionsOf } from "../guards.js";
 
@@ -53,7 +53,7 @@ export type { AdiabaticFlameInput, AdiabaticFlameOptions, AdiabaticFlameResult }
  *   W. B. White, S. M. Johnson, G. B. Dantzig, J. Chem. Phys. 28 (1958) 751 (equilibrium by Gibbs minimisation)
  */
 export function adiabaticFlameTemperature(input: AdiabaticFlameInput, options: AdiabaticFlameOptions = {}): AdiabaticFlameResult {
-  options = optionsOf(options, "adiabaticFlameTemperature");
+  options = optionsOf(options, "adiabaticFlameTemperature", "options", FLAME_OPTION_KEYS);
   const fn = "adiabaticFlameTemperature";
   const { setup, point } = prepareFlameInput(fn, input, options);
   return solveFlamePoint(setup, point);

@@ -16,7 +16,11 @@ import {
 import { resolveLimits } from "./internal/flameInput.js";
 import { attachView } from "../view/attachView.js";
 import { EQUILIBRIUM_VIEW } from "./internal/flameView.js";
-import { describeValue, optionsOf, requireArray } from "../guards.js";
+import { describeValue, knownKeys, optionsOf, rejectUnknownKeys, requireArray } from "../guards.js";
+
+/** The keys equilibriumComposition reads (a misspelt one is an error, not a silent default). */
+const INPUT_KEYS = /* @__PURE__ */ knownKeys<EquilibriumInput>()("feed", "elements", "species", "T", "H", "P", "library");
+const OPTION_KEYS = /* @__PURE__ */ knownKeys<EquilibriumOptions>()("maxIterations", "elementTolerance", "toleranceK", "extrapolate", "initialT");
 
 /**
  * What to bring to equilibrium, and at which conditions, for {@link equilibriumComposition}.
@@ -156,11 +160,12 @@ export interface EquilibriumResult {
  *   S. Gordon, B. J. McBride, NASA Reference Publication 1311, Part I (1994) (step-size control)
  */
 export function equilibriumComposition(input: EquilibriumInput, options: EquilibriumOptions = {}): EquilibriumResult {
-  options = optionsOf(options, "equilibriumComposition");
+  options = optionsOf(options, "equilibriumComposition", "options", OPTION_KEYS);
   const fn = "equilibriumComposition";
   if (input === null || typeof input !== "object") {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object`, { input });
   }
+  rejectUnknownKeys(input, INPUT_KEYS, fn, "input");
   const lim = resolveLimits(fn, options);
   const P = input.P ?? ATMOSPHERE_PA;
   if (typeof P !== "number" || !(P > 0) || !Number.isFinite(P)) {

@@ -1,11 +1,13 @@
 import type { ExtrapolatedPoint } from "../species/noteExtrapolation.js";
 import { RxthermError } from "../errors.js";
 import { solveFlamePoint, type FlamePoint } from "./internal/flameProblem.js";
-import { flamePointOf, prepareFlameInput } from "./internal/flameInput.js";
+import { FLAME_OPTION_KEYS, flamePointOf, prepareFlameInput } from "./internal/flameInput.js";
 import type { AdiabaticFlameInput, AdiabaticFlameOptions } from "./types.js";
 import { attachView } from "../view/attachView.js";
 import { SWEEP_VIEW } from "./internal/flameView.js";
-import { describeValue, optionsOf, requireArray } from "../guards.js";
+import { describeValue, knownKeys, optionsOf, rejectUnknownKeys, requireArray } from "../guards.js";
+
+const SWEEP_KEYS = /* @__PURE__ */ knownKeys<FlameSweep>()("parameter", "values");
 
 /**
  * Which setting of an {@link AdiabaticFlameInput} a sweep varies, and over which values.
@@ -86,11 +88,12 @@ export const MAX_SWEEP_POINTS = 1000;
  * @see NIST-JANAF Thermochemical Tables, 4th ed. (Chase 1998) for the built-in product data
  */
 export function flameTemperatureSweep(input: AdiabaticFlameInput, sweep: FlameSweep, options: AdiabaticFlameOptions = {}): FlameSweepResult {
-  options = optionsOf(options, "flameTemperatureSweep");
+  options = optionsOf(options, "flameTemperatureSweep", "options", FLAME_OPTION_KEYS);
   const fn = "flameTemperatureSweep";
   if (sweep === null || typeof sweep !== "object" || !Array.isArray(sweep.values) || sweep.values.length === 0) {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires a sweep { parameter, values } with at least one value`, { sweep });
   }
+  rejectUnknownKeys(sweep, SWEEP_KEYS, fn, "sweep");
   const { parameter } = sweep;
   const known = ["equivalenceRatio", "excessAir", "T", "fuelT", "oxidizerT", "P"];
   if (!known.includes(parameter)) {

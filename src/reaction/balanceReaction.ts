@@ -21,8 +21,11 @@ import {
 } from "./internal/reactionTerms.js";
 import { scanEquation } from "./parseReaction.js";
 import type { Reaction, Term } from "./types.js";
-import { describeValue, optionsOf, requireArray } from "../guards.js";
+import { describeValue, knownKeys, optionsOf, requireArray } from "../guards.js";
 import { balanceLanes } from "./internal/balanceLanes.js";
+
+/** The option keys balanceReaction reads (a misspelt one is an error, not a silent default). */
+const OPTION_KEYS = /* @__PURE__ */ knownKeys<BalanceReactionOptions>()("fixed", "per");
 
 /**
  * The species to balance: an equation text (its coefficients are ignored) or the species of
@@ -96,7 +99,7 @@ export interface BalanceReactionOptions {
  * @see IUPAC Green Book, 3rd ed. (2007), §2.10.1 (stoichiometric numbers); G. Strang, Linear Algebra and Its Applications, 4th ed. (2006), §2.2 (null space)
  */
 export function balanceReaction(input: BalanceInput, options: BalanceReactionOptions = {}): Reaction {
-  options = optionsOf(options, "balanceReaction");
+  options = optionsOf(options, "balanceReaction", "options", OPTION_KEYS);
   const { species: keys, formulas, nReactants } = readInput(input);
   const n = keys.length;
   const fixed = readFixed(options, keys);

@@ -7,7 +7,7 @@ import {
   adiabaticReactionTemperature, adiabaticTemperatureRise, availableHeat, createLibrary, efficiencyCurve, equilibriumConstant,
   flueGasDewPoint, heatDuty, heatingValue, massToMolarFlows, molarToMassFlows, reactionEnthalpy, reactionEntropy, reactionGibbs,
   reconcileExtents, totalMassFlow, validateSpeciesData, wobbeIndex, species, findSpecies, combustion, excessAirFromFlueO2,
-  excessAirFromFlueCO2,
+  excessAirFromFlueCO2, solveExtents, balanceReaction, adiabaticFlameTemperature, flameTemperatureSweep, equilibriumComposition,
 } from "../../src/index.js";
 import { caught } from "../_helpers/caught.js";
 
@@ -42,6 +42,14 @@ const CASES: [string, () => unknown, string, string | null][] = [
   ["combustion input", () => combustion({ fuel: "CH4(g)", excesAir: 0.15 } as never), "input.excesAir", "excessAir"],
   ["excessAirFromFlueO2 input", () => excessAirFromFlueO2({ fuel: "CH4(g)", dryO2: 0.03, excessAir: 0.1 } as never), "input.excessAir", null],
   ["excessAirFromFlueCO2 input", () => excessAirFromFlueCO2({ fuel: "CH4(g)", dryCo2: 0.1 } as never), "input.dryCo2", "dryCO2"],
+  ["adiabaticFlameTemperature input", () => adiabaticFlameTemperature({ fuel: "CH4(g)", excesAir: 0.15 } as never), "input.excesAir", "excessAir"],
+  ["adiabaticFlameTemperature options", () => adiabaticFlameTemperature({ fuel: "CH4(g)" }, { extrapolat: true } as never), "options.extrapolat", "extrapolate"],
+  ["flameTemperatureSweep sweep", () => flameTemperatureSweep({ fuel: "CH4(g)" }, { parameter: "equivalenceRatio", values: [1], step: 1 } as never), "sweep.step", null],
+  ["equilibriumComposition input", () => equilibriumComposition({ feed: { "CO2(g)": 1 }, species: ["CO2(g)", "CO(g)", "O2(g)"], T: 3000, p: 1e5 } as never), "input.p", "P"],
+  ["equilibriumComposition options", () => equilibriumComposition({ feed: { "CO2(g)": 1 }, species: ["CO2(g)", "CO(g)", "O2(g)"], T: 3000 }, { initialTemperature: 2000 } as never), "options.initialTemperature", null],
+  ["solveExtents input", () => solveExtents({ feed: { CO: 1, H2O: 1 }, reactions: ["CO + H2O -> CO2 + H2"], spec: [] } as never), "input.spec", "specs"],
+  ["solveExtents options", () => solveExtents({ feed: { CO: 1, H2O: 1 }, reactions: ["CO + H2O -> CO2 + H2"], specs: [{ of: "CO", conversion: 0.5 }] }, { arithmetics: "float" } as never), "options.arithmetics", "arithmetic"],
+  ["balanceReaction options", () => balanceReaction("C3H8 + O2 -> CO2 + H2O", { pre: "C3H8" } as never), "options.pre", "per"],
   ["species options", () => species("CH4(g)", undefined, { dataSet: "gri-mech-3.0" } as never), "options.dataSet", "dataset"],
   ["findSpecies query", () => findSpecies({ name: "acetone", phse: "g" } as never), "query.phse", "phase"],
 ];

@@ -12,7 +12,16 @@ import { checkMixtureLimits } from "../../extent/mixtureLimits.js";
 import type { EngineLimits } from "./equilibriumEngine.js";
 import { prepareFlame, type FlamePoint, type FlameSetup } from "./flameProblem.js";
 import type { AdiabaticFlameInput, AdiabaticFlameOptions } from "../types.js";
-import { describeValue } from "../../guards.js";
+import { describeValue, knownKeys, rejectUnknownKeys } from "../../guards.js";
+
+/** The keys the flame functions read (a misspelt one is an error, not a silent default). */
+const FLAME_INPUT_KEYS = /* @__PURE__ */ knownKeys<AdiabaticFlameInput>()(
+  "fuel", "oxidizer", "equivalenceRatio", "excessAir", "T", "fuelT", "oxidizerT", "P", "mode", "process", "products", "diluent",
+  "diluentT", "library", "allowExtremeMixture",
+);
+
+/** The option keys of the flame functions. */
+export const FLAME_OPTION_KEYS = /* @__PURE__ */ knownKeys<AdiabaticFlameOptions>()("toleranceK", "maxIterations", "elementTolerance", "extrapolate");
 
 /** The solver settings when no option sets them (shared: the limits are only read). */
 const DEFAULT_LIMITS: EngineLimits = /* @__PURE__ */ Object.freeze({ maxIterations: 300, elementTolerance: 1e-12, toleranceK: 1e-6, extrapolate: false });
@@ -45,6 +54,7 @@ export function prepareFlameInput(fn: string, input: AdiabaticFlameInput, option
   if (input === null || typeof input !== "object") {
     throw new RxthermError("INVALID_ARGUMENT", `${fn} requires an input object`, { input });
   }
+  rejectUnknownKeys(input, FLAME_INPUT_KEYS, fn, "input");
   const lim = resolveLimits(fn, options);
   const mode = input.mode ?? "equilibrium";
   if (mode !== "complete" && mode !== "equilibrium") {
