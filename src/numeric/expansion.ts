@@ -145,13 +145,7 @@ export function linearCombination(
     const e = es[pick === null ? k : (pick[k] as number)] as readonly number[];
     const c = cs[k] as number;
     if (c === 0) continue;
-    for (let i = 0; i < e.length; i++) {
-      const x = e[i] as number;
-      const p = x * c;
-      const t = twoProductTail(x, c, p);
-      if (t !== 0) n = growInPlace(n, t);
-      n = growInPlace(n, p);
-    }
+    n = growScaled(n, e, c);
     if (n > 24) n = compressInPlace(n);
   }
   LAST_LENGTH = n;
@@ -170,7 +164,12 @@ export function linearCombinationAndMore(
   c: number,
 ): [number[], number[]] {
   const sum = linearCombination(es, pick, cs);
-  let n = LAST_LENGTH;
+  const n = growScaled(LAST_LENGTH, e, c);
+  return [sum, compressRange(ACC, n)];
+}
+
+/** Add c·e exactly to the first n components of the scratch buffer; returns the new length. */
+function growScaled(n: number, e: readonly number[], c: number): number {
   for (let i = 0; i < e.length; i++) {
     const x = e[i] as number;
     const p = x * c;
@@ -178,7 +177,7 @@ export function linearCombinationAndMore(
     if (t !== 0) n = growInPlace(n, t);
     n = growInPlace(n, p);
   }
-  return [sum, compressRange(ACC, n)];
+  return n;
 }
 
 /** Length of the running expansion the last {@link linearCombination} left in the scratch buffer. */

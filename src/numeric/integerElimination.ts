@@ -10,6 +10,7 @@
  */
 
 import { divideByGcd, lcmBigInt } from "./rational.js";
+import { gcdNumber } from "./safeRational.js";
 
 /** Result of {@link integerGaussJordan}. */
 export interface IntegerEchelon {
@@ -78,7 +79,7 @@ export function integerNullSpaceNumber(rows: readonly (readonly number[])[], piv
       const row = rows[r] as readonly number[];
       if (row[f] !== 0) {
         const d = row[pivots[r] as number] as number;
-        l = (l / gcdNum(l, d)) * d;
+        l = (l / gcdNumber(l, d)) * d;
         if (!Number.isSafeInteger(l)) return null;
       }
     }
@@ -169,7 +170,7 @@ export function integerNullVectorNumber(a: Float64Array, rows: number, cols: num
       const o = at[i] as number;
       const x = a[o + c] as number;
       if (x === 0) continue;
-      const g = gcdNum(x, pv);
+      const g = gcdNumber(x, pv);
       const fa = pv / g;
       const fb = x / g;
       if ((rmax[i] as number) * Math.abs(fa) + mp * Math.abs(fb) > MAX_SAFE) return null;
@@ -183,7 +184,7 @@ export function integerNullVectorNumber(a: Float64Array, rows: number, cols: num
       }
       if (m > GROWTH) {
         let rg = 0;
-        for (let j = c + 1; j < cols && rg !== 1; j++) if (a[o + j] !== 0) rg = gcdNum(rg, a[o + j] as number);
+        for (let j = c + 1; j < cols && rg !== 1; j++) if (a[o + j] !== 0) rg = gcdNumber(rg, a[o + j] as number);
         if (rg > 1) {
           for (let j = c + 1; j < cols; j++) a[o + j] = (a[o + j] as number) / rg;
           m /= rg;
@@ -211,7 +212,7 @@ export function integerNullVectorNumber(a: Float64Array, rows: number, cols: num
     }
     if (s === 0) continue;
     const u = a[o + pc] as number;
-    const g = gcdNum(s, u);
+    const g = gcdNumber(s, u);
     const m = Math.abs(u) / g;
     if (m !== 1) {
       if (xMax * m > MAX_SAFE) return null;
@@ -253,7 +254,7 @@ export function integerNullSpaceSparseNumber(rows: readonly (readonly number[])[
     for (let r = 0; r < pivots.length; r++) {
       if (rows[r]![f] !== 0) {
         const d = rows[r]![pivots[r]!]!;
-        l = (l / gcdNum(l, d)) * d;
+        l = (l / gcdNumber(l, d)) * d;
         if (!Number.isSafeInteger(l)) return null;
       }
     }
@@ -266,7 +267,7 @@ export function integerNullSpaceSparseNumber(rows: readonly (readonly number[])[
       if (!placed && f < pc) {
         columns.push(f);
         values.push(l);
-        g = gcdNum(g, l);
+        g = gcdNumber(g, l);
         placed = true;
       }
       const a = rows[r]![f]!;
@@ -275,12 +276,12 @@ export function integerNullSpaceSparseNumber(rows: readonly (readonly number[])[
       if (!Number.isSafeInteger(v)) return null;
       columns.push(pc);
       values.push(v);
-      g = gcdNum(g, v);
+      g = gcdNumber(g, v);
     }
     if (!placed) {
       columns.push(f);
       values.push(l);
-      g = gcdNum(g, l);
+      g = gcdNumber(g, l);
     }
     if (g > 1) for (let k = 0; k < values.length; k++) values[k] = values[k]! / g;
     out.push({ columns, values });
@@ -313,33 +314,12 @@ function toSmall(matrix: readonly (readonly bigint[])[]): number[][] | null {
   return out;
 }
 
-function gcdNum(a: number, b: number): number {
-  a = Math.abs(a);
-  b = Math.abs(b);
-  if (a <= 0x7fffffff && b <= 0x7fffffff) {
-    // int32 remainders: a float64 remainder is a library call, an int32 one an instruction
-    let x = a | 0;
-    let y = b | 0;
-    while (y !== 0) {
-      const t = x % y;
-      x = y;
-      y = t;
-    }
-    return x;
-  }
-  while (b !== 0) {
-    const t = a % b;
-    a = b;
-    b = t;
-  }
-  return a;
-}
 
 function reduceRowNumber(row: number[]): void {
   let g = 0;
   for (const v of row) {
     if (v !== 0) {
-      g = gcdNum(g, v);
+      g = gcdNumber(g, v);
       if (g === 1) return;
     }
   }
@@ -398,7 +378,7 @@ function gaussJordanNumber(m: number[][], pivotCols: number): number[] | null {
       const row = m[i] as number[];
       const a = row[c] as number;
       if (a === 0) continue;
-      const g = gcdNum(a, pv);
+      const g = gcdNumber(a, pv);
       const fa = pv / g;
       const fb = a / g;
       if (maxAbs(row) * fa + mp * Math.abs(fb) <= MAX_SAFE) {
@@ -407,7 +387,7 @@ function gaussJordanNumber(m: number[][], pivotCols: number): number[] | null {
         for (let j = 0; j < width; j++) {
           const v = (row[j] as number) * fa - (pr[j] as number) * fb || 0;
           row[j] = v;
-          if (v !== 0 && rg !== 1) rg = gcdNum(rg, v);
+          if (v !== 0 && rg !== 1) rg = gcdNumber(rg, v);
         }
         if (rg > 1) for (let j = 0; j < width; j++) row[j] = (row[j] as number) / rg;
       } else {
