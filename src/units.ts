@@ -16,8 +16,7 @@
  *
  * @module
  */
-import { RxthermError } from "./errors.js";
-import { describeValue, finiteResult, optionsOf } from "./guards.js";
+import { RxthermError, describeValue, finiteResult, optionsOf } from "./errors.js";
 
 /** Temperature units accepted by {@link toKelvin} and {@link fromKelvin}. @category Units */
 export type TemperatureUnit = "K" | "C" | "F" | "R";

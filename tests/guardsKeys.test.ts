@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { editDistance, knownKeys, rejectUnknownKeys } from "../src/guards.js";
+import { editDistance, knownKeys, rejectUnknownKeys } from "../src/errors.js";
 import { caught } from "./_helpers/caught.js";
 
 interface Opts { method?: string; extrapolate?: boolean; library?: object }

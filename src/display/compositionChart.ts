@@ -1,5 +1,4 @@
-import { RxthermError } from "../errors.js";
-import { describeValue, optionsOf, requireArray, requireRecord } from "../guards.js";
+import { RxthermError, describeValue, optionsOf, requireArray, requireRecord } from "../errors.js";
 import type { FlameSweepResult } from "../flame/flameTemperatureSweep.js";
 import { makeChart } from "./internal/makeChart.js";
 import { sweepAxis, sweepNumbers } from "./internal/sweepAxis.js";

@@ -1,4 +1,4 @@
-import { optionsOf } from "../guards.js";
+import { optionsOf } from "../errors.js";
 import type { Library, Species } from "../species/types.js";
 import { speciesChart } from "./internal/speciesChart.js";
 import type { ChartSpec, SpeciesChartOptions } from "./types.js";

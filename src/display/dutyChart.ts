@@ -1,5 +1,4 @@
-import { RxthermError } from "../errors.js";
-import { describeValue } from "../guards.js";
+import { RxthermError, describeValue } from "../errors.js";
 import type { HeatDutyResult } from "../energy/heatDuty.js";
 import { makeChart } from "./internal/makeChart.js";
 import type { ChartSpec } from "./types.js";

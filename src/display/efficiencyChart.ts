@@ -1,5 +1,4 @@
-import { RxthermError } from "../errors.js";
-import { describeValue } from "../guards.js";
+import { RxthermError, describeValue } from "../errors.js";
 import type { EfficiencyCurveResult } from "../energy/firedTypes.js";
 import { makeChart } from "./internal/makeChart.js";
 import { sweepNumbers } from "./internal/sweepAxis.js";

@@ -1,4 +1,4 @@
-import { optionsOf } from "../guards.js";
+import { optionsOf } from "../errors.js";
 import type { Species } from "../species/types.js";
 import type { CpChartOptions } from "./cpChart.js";
 import { speciesChart } from "./internal/speciesChart.js";

@@ -1,4 +1,4 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, describeValue, knownKeys, optionsOf, rejectUnknownKeys } from "../errors.js";
 import { GAS_CONSTANT_J_PER_MOL_K } from "../units.js";
 import type { Library, Species } from "../species/types.js";
 import { noteExtrapolation, type ExtrapolatedPoint } from "../species/noteExtrapolation.js";
@@ -10,7 +10,6 @@ import { resolveSpeciesCached } from "../enthalpy/resolveInputs.js";
 import { resolveStream } from "./internal/energyStreams.js";
 import { attachView } from "../view/attachView.js";
 import { ADIABATIC_VIEW } from "./internal/energyView.js";
-import { describeValue, knownKeys, optionsOf, rejectUnknownKeys } from "../guards.js";
 
 /** The keys the adiabatic functions read (a misspelt one is an error, not a silent default). */
 const INPUT_KEYS = /* @__PURE__ */ knownKeys<AdiabaticReactionInput>()("inlet", "reactions", "specs", "library");

@@ -1,5 +1,5 @@
 import type { Flows } from "../extent/types.js";
-import { finiteResult } from "../guards.js";
+import { finiteResult } from "../errors.js";
 import { evaluateFired, excessAirOf, flueTemperature, prepareFired } from "./internal/firedModel.js";
 import type { AvailableHeatInput, AvailableHeatResult } from "./firedTypes.js";
 import { flueGasDewPoint } from "./flueGasDewPoint.js";

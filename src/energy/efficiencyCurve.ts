@@ -1,5 +1,4 @@
-import { RxthermError } from "../errors.js";
-import { MAX_INPUT_ARRAY_LENGTH, describeValue, finiteResult, knownKeys, rejectUnknownKeys, requireArray } from "../guards.js";
+import { RxthermError, MAX_INPUT_ARRAY_LENGTH, describeValue, finiteResult, knownKeys, rejectUnknownKeys, requireArray } from "../errors.js";
 import { detailValue, evaluateFired, excessAirOf, flueTemperature, prepareFired } from "./internal/firedModel.js";
 import type { AvailableHeatInput, EfficiencyCurveResult } from "./firedTypes.js";
 export type { EfficiencyCurveResult } from "./firedTypes.js";

@@ -1,5 +1,4 @@
-import { RxthermError } from "../errors.js";
-import { describeValue, knownKeys, rejectUnknownKeys, requireRecord } from "../guards.js";
+import { RxthermError, describeValue, knownKeys, rejectUnknownKeys, requireRecord } from "../errors.js";
 import { parseFormula } from "../formula/parseFormula.js";
 import type { Formula } from "../formula/types.js";
 import type { Flows } from "../extent/types.js";

@@ -1,4 +1,4 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, describeValue, finiteResult, knownKeys, optionsOf, rejectUnknownKeys } from "../errors.js";
 import { GAS_CONSTANT_J_PER_MOL_K } from "../units.js";
 import type { Library, Species } from "../species/types.js";
 import { noteExtrapolation, type ExtrapolatedPoint } from "../species/noteExtrapolation.js";
@@ -8,7 +8,6 @@ import { resolveStream, type Entry, type ResolvedStream } from "./internal/energ
 import { prepareReaction } from "../enthalpy/preparedReaction.js";
 import { standardEnthalpyExact } from "../enthalpy/exactSum.js";
 import { HEAT_DUTY_PROTOTYPE } from "./internal/energyView.js";
-import { describeValue, finiteResult, knownKeys, optionsOf, rejectUnknownKeys } from "../guards.js";
 
 /** The keys heatDuty reads (a misspelt one is an error, not a silent default). */
 const INPUT_KEYS = /* @__PURE__ */ knownKeys<HeatDutyInput>()("inlet", "outlet", "library", "reactions", "extents");

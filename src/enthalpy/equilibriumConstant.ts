@@ -1,11 +1,10 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, describeValue, knownKeys, optionsOf } from "../errors.js";
 import { GAS_CONSTANT_J_PER_MOL_K, STANDARD_TEMPERATURE_K } from "../units.js";
 import type { Library } from "../species/types.js";
 import type { Reaction } from "../reaction/types.js";
 import { prepareReaction } from "./preparedReaction.js";
 import { checkTemperature, reactionEnthalpy } from "./reactionEnthalpy.js";
 import { reactionGibbs } from "./reactionGibbs.js";
-import { describeValue, knownKeys, optionsOf } from "../guards.js";
 
 /** The option keys equilibriumConstant reads (a misspelt one is an error, not a silent default). */
 const OPTION_KEYS = /* @__PURE__ */ knownKeys<EquilibriumConstantOptions>()("method", "library", "extrapolate");

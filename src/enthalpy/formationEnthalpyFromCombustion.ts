@@ -1,11 +1,10 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, optionsOf, describeValue } from "../errors.js";
 import type { Library } from "../species/types.js";
 import { parseFormula } from "../formula/parseFormula.js";
 import { resolveSpecies } from "./resolveInputs.js";
 import { ExactDecimal } from "./exactSum.js";
 import { combustionProducts } from "./internal/combustionProducts.js";
 import { decimalText } from "./reactionEnthalpyFromCombustion.js";
-import { optionsOf, describeValue } from "../guards.js";
 
 /**
  * Options of {@link formationEnthalpyFromCombustion}.

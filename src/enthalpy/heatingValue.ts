@@ -1,4 +1,4 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, describeValue, knownKeys, optionsOf } from "../errors.js";
 import { ATMOSPHERE_PA, GAS_CONSTANT_J_PER_MOL_K } from "../units.js";
 import type { Library, Species } from "../species/types.js";
 import type { Flows } from "../extent/types.js";
@@ -6,7 +6,6 @@ import { molarMass } from "../formula/molarMass.js";
 import { resolveSpecies } from "./resolveInputs.js";
 import { ExactDecimal } from "./exactSum.js";
 import { combustionProducts } from "./internal/combustionProducts.js";
-import { describeValue, knownKeys, optionsOf } from "../guards.js";
 
 /** The option keys heatingValue reads (a misspelt one is an error, not a silent default). */
 const OPTION_KEYS = /* @__PURE__ */ knownKeys<HeatingValueOptions>()("basis", "per", "library");

@@ -1,4 +1,4 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, describeValue, requireArray, requireRecord } from "../errors.js";
 import type { Reaction } from "../reaction/types.js";
 import {
   rationalAdd, rationalDiv, rationalFromDecimalString, rationalIsZero, rationalMul, rationalNeg, rationalSub,
@@ -6,7 +6,6 @@ import {
 } from "../numeric/rational.js";
 import { toReaction } from "./resolveInputs.js";
 import { ExactDecimal, exactWeightedSum } from "./exactSum.js";
-import { describeValue, requireArray, requireRecord } from "../guards.js";
 import { formatReaction } from "../reaction/formatReaction.js";
 import { attachView, viewDescriptors } from "../view/attachView.js";
 import { hessCombinationView, type HessViewParts } from "./internal/enthalpyView.js";

@@ -6,8 +6,7 @@
  * @module
  * @internal
  */
-import { RxthermError } from "../errors.js";
-import { isDeepFrozen } from "../guards.js";
+import { RxthermError, isDeepFrozen } from "../errors.js";
 import type { Library, Species } from "../species/types.js";
 import type { Reaction } from "../reaction/types.js";
 import { rationalAdd, rationalFromDecimalString, rationalNeg, type Rational } from "../numeric/rational.js";

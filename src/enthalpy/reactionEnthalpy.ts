@@ -1,4 +1,4 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, describeValue, knownKeys, optionsOf } from "../errors.js";
 import { STANDARD_TEMPERATURE_K } from "../units.js";
 import type { Library } from "../species/types.js";
 import { noteExtrapolation, type ExtrapolatedPoint } from "../species/noteExtrapolation.js";
@@ -8,7 +8,6 @@ import type { Rational } from "../numeric/rational.js";
 import { prepareReaction, type PreparedReaction } from "./preparedReaction.js";
 import { standardEnthalpyExact } from "./exactSum.js";
 import { REACTION_ENTHALPY_PROTOTYPE } from "./internal/enthalpyView.js";
-import { describeValue, knownKeys, optionsOf } from "../guards.js";
 
 /** The option keys reactionEnthalpy reads (a misspelt one is an error, not a silent default). */
 const OPTION_KEYS = /* @__PURE__ */ knownKeys<ReactionEnthalpyOptions>()("T", "library", "per", "extrapolate");

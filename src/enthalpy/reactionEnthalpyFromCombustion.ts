@@ -1,9 +1,8 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, describeValue } from "../errors.js";
 import type { Reaction } from "../reaction/types.js";
 import { rationalFromDecimalString, rationalNeg, type Rational } from "../numeric/rational.js";
 import { reactionResiduals, toReaction } from "./resolveInputs.js";
 import { ExactDecimal, exactWeightedSum } from "./exactSum.js";
-import { describeValue } from "../guards.js";
 
 /**
  * Species whose standard enthalpy of combustion is zero by definition: the products of complete

@@ -3,7 +3,7 @@ import type { Library } from "../species/types.js";
 import type { Reaction } from "../reaction/types.js";
 import { prepareReaction } from "./preparedReaction.js";
 import { checkTemperature } from "./reactionEnthalpy.js";
-import { knownKeys, optionsOf } from "../guards.js";
+import { knownKeys, optionsOf } from "../errors.js";
 
 /** The option keys reactionEntropy reads (a misspelt one is an error, not a silent default). */
 const OPTION_KEYS = /* @__PURE__ */ knownKeys<ReactionEntropyOptions>()("T", "library", "extrapolate");

@@ -2,7 +2,7 @@ import { STANDARD_TEMPERATURE_K } from "../units.js";
 import type { Reaction } from "../reaction/types.js";
 import { checkTemperature, reactionEnthalpy } from "./reactionEnthalpy.js";
 import { reactionEntropy, type ReactionEntropyOptions } from "./reactionEntropy.js";
-import { knownKeys, optionsOf } from "../guards.js";
+import { knownKeys, optionsOf } from "../errors.js";
 
 /** The option keys reactionGibbs reads (a misspelt one is an error, not a silent default). */
 const OPTION_KEYS = /* @__PURE__ */ knownKeys<ReactionGibbsOptions>()("T", "library", "extrapolate");

@@ -6,13 +6,12 @@
  * @module
  * @internal
  */
-import { RxthermError } from "../errors.js";
+import { RxthermError, describeValue } from "../errors.js";
 import type { Library, Species } from "../species/types.js";
 import type { Reaction } from "../reaction/types.js";
 import { libraryOf, species } from "../species/species.js";
 import { parseReaction } from "../reaction/parseReaction.js";
 import { checkBalance } from "../reaction/checkBalance.js";
-import { describeValue } from "../guards.js";
 import { checkReactionShape } from "../reaction/checkReactionShape.js";
 
 /**

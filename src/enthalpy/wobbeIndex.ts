@@ -1,10 +1,9 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, knownKeys, optionsOf } from "../errors.js";
 import type { Library } from "../species/types.js";
 import type { Flows } from "../extent/types.js";
 import { molarMass } from "../formula/molarMass.js";
 import { resolveSpecies } from "./resolveInputs.js";
 import { heatingValue } from "./heatingValue.js";
-import { knownKeys, optionsOf } from "../guards.js";
 
 /** The option keys wobbeIndex reads (a misspelt one is an error, not a silent default). */
 const OPTION_KEYS = /* @__PURE__ */ knownKeys<WobbeIndexOptions>()("basis", "library");

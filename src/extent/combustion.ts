@@ -1,4 +1,4 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, describeValue, finiteResult, knownKeys, rejectUnknownKeys, requireRecord } from "../errors.js";
 import type { Formula } from "../formula/types.js";
 import { molarMass } from "../formula/molarMass.js";
 import { formulaOf, molarMassOf, validateFlows } from "./internal/extentSystem.js";
@@ -8,7 +8,6 @@ import { compensatedSum } from "../numeric/compensatedSum.js";
 import { checkMixtureLimits } from "./mixtureLimits.js";
 import { attachView } from "../view/attachView.js";
 import { COMBUSTION_VIEW } from "./internal/extentView.js";
-import { describeValue, finiteResult, knownKeys, rejectUnknownKeys, requireRecord } from "../guards.js";
 import { speciesByName } from "../formula/speciesNames.js";
 
 /** The keys combustion reads (a misspelt one is an error, not a silent default). */

@@ -1,6 +1,5 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, describeValue, knownKeys, rejectUnknownKeys } from "../errors.js";
 import { type CombustionInput, combustion } from "./combustion.js";
-import { describeValue, knownKeys, rejectUnknownKeys } from "../guards.js";
 
 /** The keys of the two readings' inputs (a misspelt one is an error, not a silent default). */
 const SHARED = ["fuel", "oxidizer", "oxygenEnrichment", "humidity", "carbonToCO", "allowExtremeMixture", "library"] as const;

@@ -1,4 +1,4 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, finiteResult } from "../errors.js";
 import type { Reaction } from "../reaction/types.js";
 import {
   type Rational,
@@ -15,7 +15,6 @@ import { buildSystem } from "./internal/extentSystem.js";
 import type { Flows } from "./types.js";
 import { attachView } from "../view/attachView.js";
 import { LIMITING_VIEW } from "./internal/extentView.js";
-import { finiteResult } from "../guards.js";
 
 /**
  * Result of {@link limitingReactant}. Amounts in the feed's unit (mol or mol/s).

@@ -5,8 +5,7 @@
  *
  * @module
  */
-import { RxthermError } from "../errors.js";
-import { describeValue } from "../guards.js";
+import { RxthermError, describeValue } from "../errors.js";
 
 /**
  * Largest excess air (fraction) accepted without `allowExtremeMixture: true`: 3 = 300 % excess.

@@ -1,4 +1,4 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, describeValue, finiteResult, knownKeys, optionsOf } from "../errors.js";
 import type { Reaction } from "../reaction/types.js";
 import {
   type Rational,
@@ -15,7 +15,6 @@ import { buildSystem, resolveSpecies, validateFlows } from "./internal/extentSys
 import type { Flows } from "./types.js";
 import { attachView } from "../view/attachView.js";
 import { RECONCILE_VIEW } from "./internal/extentView.js";
-import { describeValue, finiteResult, knownKeys, optionsOf } from "../guards.js";
 
 /** The option keys reconcileExtents reads (a misspelt one is an error, not a silent default). */
 const OPTION_KEYS = /* @__PURE__ */ knownKeys<ReconcileExtentsOptions>()("weights");

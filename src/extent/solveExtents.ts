@@ -1,4 +1,4 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, describeValue, finiteResult, knownKeys, optionsOf, rejectUnknownKeys } from "../errors.js";
 import type { Reaction } from "../reaction/types.js";
 import { matrixRank, nullSpace } from "../numeric/linearAlgebra.js";
 import {
@@ -36,7 +36,6 @@ import { type StoichSystem, type YieldPair, buildSystem, resolveSpecies } from "
 import type { ExtentSpec, Flows } from "./types.js";
 import { attachView } from "../view/attachView.js";
 import { EXTENTS_VIEW } from "./internal/extentView.js";
-import { describeValue, finiteResult, knownKeys, optionsOf, rejectUnknownKeys } from "../guards.js";
 import { exactLanes } from "./internal/exactLanes.js";
 import {
   EXPANSION_LIMIT,

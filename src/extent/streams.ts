@@ -3,11 +3,10 @@
  *
  * @module
  */
-import { RxthermError } from "../errors.js";
+import { RxthermError, describeValue, finiteResult, knownKeys, optionsOf } from "../errors.js";
 import { molarMassOf, validateFlows } from "./internal/extentSystem.js";
 import type { Flows } from "./types.js";
 import { compensatedSum } from "../numeric/compensatedSum.js";
-import { describeValue, finiteResult, knownKeys, optionsOf } from "../guards.js";
 
 /** The option keys of the mass-flow conversions (a misspelt one is an error, not a silent default). */
 const OPTION_KEYS = /* @__PURE__ */ knownKeys<MassFlowOptions>()("massUnit");

@@ -1,6 +1,5 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, describeValue } from "../errors.js";
 import { slipHintDetails, withSlipHint } from "../units.js";
-import { describeValue } from "../guards.js";
 
 /**
  * Saturation (vapour) pressure of water between its triple point and critical point.

@@ -1,7 +1,7 @@
 import { solveFlamePoint } from "./internal/flameProblem.js";
 import { FLAME_OPTION_KEYS, prepareFlameInput } from "./internal/flameInput.js";
 import type { AdiabaticFlameInput, AdiabaticFlameOptions, AdiabaticFlameResult } from "./types.js";
-import { optionsOf } from "../guards.js";
+import { optionsOf } from "../errors.js";
 
 export type { AdiabaticFlameInput, AdiabaticFlameOptions, AdiabaticFlameResult } from "./types.js";
 

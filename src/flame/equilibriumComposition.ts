@@ -1,4 +1,4 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, describeValue, knownKeys, optionsOf, rejectUnknownKeys, requireArray } from "../errors.js";
 import { ATMOSPHERE_PA } from "../units.js";
 import type { Flows } from "../extent/types.js";
 import type { Library, Species } from "../species/types.js";
@@ -16,7 +16,6 @@ import {
 import { resolveLimits } from "./internal/flameInput.js";
 import { attachView } from "../view/attachView.js";
 import { EQUILIBRIUM_VIEW } from "./internal/flameView.js";
-import { describeValue, knownKeys, optionsOf, rejectUnknownKeys, requireArray } from "../guards.js";
 
 /** The keys equilibriumComposition reads (a misspelt one is an error, not a silent default). */
 const INPUT_KEYS = /* @__PURE__ */ knownKeys<EquilibriumInput>()("feed", "elements", "species", "T", "H", "P", "library");

@@ -1,11 +1,10 @@
 import type { ExtrapolatedPoint } from "../species/noteExtrapolation.js";
-import { RxthermError } from "../errors.js";
+import { RxthermError, describeValue, knownKeys, optionsOf, rejectUnknownKeys, requireArray } from "../errors.js";
 import { solveFlamePoint, type FlamePoint } from "./internal/flameProblem.js";
 import { FLAME_OPTION_KEYS, flamePointOf, prepareFlameInput } from "./internal/flameInput.js";
 import type { AdiabaticFlameInput, AdiabaticFlameOptions } from "./types.js";
 import { attachView } from "../view/attachView.js";
 import { SWEEP_VIEW } from "./internal/flameView.js";
-import { describeValue, knownKeys, optionsOf, rejectUnknownKeys, requireArray } from "../guards.js";
 
 const SWEEP_KEYS = /* @__PURE__ */ knownKeys<FlameSweep>()("parameter", "values");
 

@@ -21,8 +21,7 @@
  *
  * @module
  */
-import { RxthermError } from "../errors.js";
-import { deepFreeze, describeValue } from "../guards.js";
+import { RxthermError, deepFreeze, describeValue } from "../errors.js";
 
 /**
  * What an {@link ElementData.atomicWeight} is:

@@ -1,7 +1,6 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, optionsOf, describeValue } from "../errors.js";
 import { checkFormula } from "./internal/checkFormula.js";
 import type { Formula } from "./types.js";
-import { optionsOf, describeValue } from "../guards.js";
 
 /**
  * Options of {@link formatFormula}.

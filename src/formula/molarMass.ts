@@ -1,10 +1,9 @@
 import { decimalPlus, decimalTimes, decimalToNumber, exactDecimalOfNumber, type ExactDecimalValue } from "../numeric/exactDecimal.js";
-import { RxthermError } from "../errors.js";
+import { RxthermError, optionsOf, describeValue } from "../errors.js";
 import { checkFormula } from "./internal/checkFormula.js";
 import { INDEX_MICRO_WEIGHTS, INDEX_WEIGHTS, symbolIndexOf } from "./internal/elementIndex.js";
 import { parseFormula } from "./parseFormula.js";
 import type { Formula } from "./types.js";
-import { optionsOf, describeValue } from "../guards.js";
 
 /**
  * Options of {@link molarMass}.

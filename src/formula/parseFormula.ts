@@ -1,11 +1,10 @@
 import {
   decimalCompare, decimalPlus, decimalTimes, decimalToNumber, exactDecimal, exactDecimalOfNumber, type ExactDecimalValue,
 } from "../numeric/exactDecimal.js";
-import { RxthermError, type RxthermErrorCode } from "../errors.js";
+import { RxthermError, type RxthermErrorCode, describeValue } from "../errors.js";
 import { ELEMENT_KEY_COUNT, INDEX_SYMBOLS, symbolIndex } from "./internal/elementIndex.js";
 import type { Formula, Phase } from "./types.js";
 import { FORMULA_PROTOTYPE } from "./internal/formulaView.js";
-import { describeValue } from "../guards.js";
 
 /**
  * The documented limits of the formula grammar. Text beyond them is refused with a clear error

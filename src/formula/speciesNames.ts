@@ -15,7 +15,7 @@
  *
  * @module
  */
-import { deepFreeze } from "../guards.js";
+import { deepFreeze } from "../errors.js";
 import type { Phase } from "./types.js";
 
 /**

@@ -1,7 +1,6 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, describeValue } from "../errors.js";
 import { formAbsolute, formCp } from "./internal/cpCompile.js";
 import type { HeatCapacity } from "./createHeatCapacity.js";
-import { describeValue } from "../guards.js";
 
 /**
  * How two adjacent ranges of a heat-capacity model meet at their shared boundary.

@@ -1,10 +1,9 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, optionsOf, describeValue } from "../errors.js";
 import { slipHintDetails, withSlipHint } from "../units.js";
 import { allWithin } from "../numeric/allWithin.js";
 import { sortedWithin } from "../numeric/sortedWithin.js";
 import * as compiled from "./internal/cpCompile.js";
 import type { CpRange, RangeOptions } from "./types.js";
-import { optionsOf, describeValue } from "../guards.js";
 
 // Module-local aliases of the compiled-form helpers. The hot paths call these per evaluation; a
 // local const binding is a direct reference that the JIT inlines, whereas some module loaders (the

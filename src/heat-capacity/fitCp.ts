@@ -1,9 +1,8 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, describeValue, finiteResult, optionsOf } from "../errors.js";
 import { GAS_CONSTANT_J_PER_MOL_K } from "../units.js";
 import { CELSIUS_OFFSET_K, REFERENCE_T_K, STRIDE, canonical, formCp, hAt, sAt, writeSegment } from "./internal/cpCompile.js";
 import { leastSquares } from "../numeric/leastSquares.js";
 import type { CpForm, CpRange } from "./types.js";
-import { describeValue, finiteResult, optionsOf } from "../guards.js";
 
 /**
  * One measured or tabulated heat capacity: temperature `T` in K and `cp` in J/(mol·K).

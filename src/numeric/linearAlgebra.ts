@@ -18,8 +18,7 @@
  *
  * @module
  */
-import { requireArray } from "../guards.js";
-import { RxthermError } from "../errors.js";
+import { RxthermError, requireArray } from "../errors.js";
 import { complement, integerGaussJordan, integerNullSpaceFromEchelon } from "./integerElimination.js";
 import {
   lcmBigInt,

@@ -16,8 +16,7 @@
  *
  * @module
  */
-import { RxthermError } from "../errors.js";
-import { describeValue, requireArray } from "../guards.js";
+import { RxthermError, describeValue, requireArray } from "../errors.js";
 
 /**
  * An exact rational number `num/den`, normalised: `den > 0n`, `gcd(|num|, den) = 1n`, and

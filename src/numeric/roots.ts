@@ -5,8 +5,7 @@
  *
  * @module
  */
-import { RxthermError } from "../errors.js";
-import { optionsOf, describeValue } from "../guards.js";
+import { RxthermError, optionsOf, describeValue } from "../errors.js";
 
 /**
  * Options of {@link findRoot}.

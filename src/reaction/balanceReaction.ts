@@ -1,4 +1,4 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, describeValue, knownKeys, optionsOf, requireArray } from "../errors.js";
 import { parseFormula } from "../formula/parseFormula.js";
 import type { Formula } from "../formula/types.js";
 import { rational, rationalDiv, rationalFrom, type Rational, type RationalLike } from "../numeric/rational.js";
@@ -21,7 +21,6 @@ import {
 } from "./internal/reactionTerms.js";
 import { scanEquation } from "./parseReaction.js";
 import type { Reaction, Term } from "./types.js";
-import { describeValue, knownKeys, optionsOf, requireArray } from "../guards.js";
 import { balanceLanes } from "./internal/balanceLanes.js";
 
 /** The option keys balanceReaction reads (a misspelt one is an error, not a silent default). */

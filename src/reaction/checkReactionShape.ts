@@ -6,8 +6,7 @@
  * @module
  * @internal
  */
-import { RxthermError } from "../errors.js";
-import { describeValue, requireArray, requireRecord } from "../guards.js";
+import { RxthermError, describeValue, requireArray, requireRecord } from "../errors.js";
 import type { Reaction } from "./types.js";
 
 /** Most terms on one side of a reaction object. */

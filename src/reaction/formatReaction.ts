@@ -1,8 +1,7 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, optionsOf } from "../errors.js";
 import { termCoefficient } from "./internal/reactionTerms.js";
 import { rationalToNumber, rationalToString } from "../numeric/rational.js";
 import type { Reaction, Term } from "./types.js";
-import { optionsOf } from "../guards.js";
 import { checkReactionShape } from "./checkReactionShape.js";
 
 /**

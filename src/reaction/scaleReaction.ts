@@ -1,8 +1,7 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, describeValue } from "../errors.js";
 import { rationalFrom, rationalMul, type Rational, type RationalLike } from "../numeric/rational.js";
 import { makeReaction, makeTerm, termCoefficient } from "./internal/reactionTerms.js";
 import type { Reaction, Term } from "./types.js";
-import { describeValue } from "../guards.js";
 import { checkReactionShape } from "./checkReactionShape.js";
 
 /**

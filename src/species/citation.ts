@@ -1,5 +1,4 @@
-import { RxthermError } from "../errors.js";
-import { describeValue } from "../guards.js";
+import { RxthermError, describeValue } from "../errors.js";
 
 /**
  * The source registry: id → full citation, for every source id a built-in species value carries.

@@ -3,7 +3,7 @@ import { mergeLibrary, SpeciesLibrary } from "./internal/speciesLibrary.js";
 import { libraryOf } from "./species.js";
 import type { Library, Species } from "./types.js";
 import { validateSpeciesData } from "./validateSpeciesData.js";
-import { knownKeys, optionsOf } from "../guards.js";
+import { knownKeys, optionsOf } from "../errors.js";
 
 /** The option keys createLibrary reads (a misspelt one is an error, not a silent default). */
 const OPTION_KEYS = /* @__PURE__ */ knownKeys<CreateLibraryOptions>()("base");

@@ -1,9 +1,8 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, knownKeys, rejectUnknownKeys } from "../errors.js";
 import type { Formula } from "../formula/types.js";
 import { builtInLibrary } from "./builtInLibrary.js";
 import { queryFormula, sameComposition } from "./internal/composition.js";
 import { libraryOf } from "./species.js";
-import { knownKeys, rejectUnknownKeys } from "../guards.js";
 import type { Library, Species } from "./types.js";
 
 /**

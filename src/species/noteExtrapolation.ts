@@ -1,5 +1,4 @@
-import { RxthermError } from "../errors.js";
-import { describeValue, requireArray } from "../guards.js";
+import { RxthermError, describeValue, requireArray } from "../errors.js";
 import type { Species } from "./types.js";
 
 const FN = "noteExtrapolation";

@@ -1,5 +1,4 @@
-import { RxthermError } from "../errors.js";
-import { describeValue, knownKeys, optionsOf } from "../guards.js";
+import { RxthermError, describeValue, knownKeys, optionsOf } from "../errors.js";
 import { builtInLibrary } from "./builtInLibrary.js";
 import type { Library, LibraryGetOptions, Species } from "./types.js";
 

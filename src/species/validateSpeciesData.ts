@@ -1,10 +1,9 @@
-import { RxthermError } from "../errors.js";
+import { RxthermError, knownKeys, optionsOf } from "../errors.js";
 import { createHeatCapacity, MAX_CP_RANGES, MAX_CP_TABLE_POINTS } from "../heat-capacity/createHeatCapacity.js";
 import type { CpRange } from "../heat-capacity/types.js";
 import { readSpeciesFormula } from "./internal/speciesFormula.js";
 import { SOURCES } from "./citation.js";
 import { englishMessages, speciesDataSchema, speciesEntrySchema, type SpeciesData, type SpeciesEntry } from "./schema.js";
-import { knownKeys, optionsOf } from "../guards.js";
 
 /** The option keys validateSpeciesData reads (a misspelt one is an error, not a silent default). */
 const OPTION_KEYS = /* @__PURE__ */ knownKeys<ValidateSpeciesDataOptions>()("allowBuiltInSources");

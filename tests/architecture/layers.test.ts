@@ -14,7 +14,6 @@ import { describe, expect, it } from "vitest";
 export const LAYERS: Readonly<Record<string, number>> = Object.freeze({
   "errors.ts": 0,
   "units.ts": 0,
-  "guards.ts": 0,
   numeric: 0,
   view: 0,
   formula: 1,

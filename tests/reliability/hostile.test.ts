@@ -16,7 +16,7 @@
 import fc from "fast-check";
 import { afterAll, describe, expect, it } from "vitest";
 import * as rx from "../../src/index.js";
-import { deepFreeze } from "../../src/guards.js";
+import { deepFreeze } from "../../src/errors.js";
 import { ENTRY_POINTS } from "./entryPoints.js";
 import { CALL_TIME_BOUND_MS, HOSTILE_VALUES, nonFinite, pathsOf, probe, snapshot, type Finding } from "./hostile.js";
 

@@ -5,8 +5,7 @@
  * @module
  * @internal
  */
-import { RxthermError } from "../../errors.js";
-import { describeValue } from "../../guards.js";
+import { RxthermError, describeValue } from "../../errors.js";
 import { attachView, viewDescriptors } from "../../view/attachView.js";
 import { JUPYTER_DISPLAY } from "../../view/displaySymbols.js";
 import { viewToText } from "../../view/renderView.js";

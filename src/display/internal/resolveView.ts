@@ -5,8 +5,7 @@
  * @module
  * @internal
  */
-import { RxthermError } from "../../errors.js";
-import { describeValue } from "../../guards.js";
+import { RxthermError, describeValue } from "../../errors.js";
 import { RESULT_VIEW } from "../../view/displaySymbols.js";
 import { FLOW_UNIT, recordTable } from "../../view/recordTable.js";
 import type { ResultView } from "../../view/types.js";

@@ -4,8 +4,7 @@
  * @module
  * @internal
  */
-import { RxthermError } from "../../errors.js";
-import { describeValue, requireArray } from "../../guards.js";
+import { RxthermError, describeValue, requireArray } from "../../errors.js";
 import { species as lookUp } from "../../species/species.js";
 import type { Library, Species } from "../../species/types.js";
 import { STANDARD_TEMPERATURE_K } from "../../units.js";

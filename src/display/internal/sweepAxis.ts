@@ -4,8 +4,7 @@
  * @module
  * @internal
  */
-import { RxthermError } from "../../errors.js";
-import { describeValue, requireArray } from "../../guards.js";
+import { RxthermError, describeValue, requireArray } from "../../errors.js";
 import type { FlameSweepResult } from "../../flame/flameTemperatureSweep.js";
 
 /** Title and scale of each swept setting (excess air shown in %, pressure in kPa). */

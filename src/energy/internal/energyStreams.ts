@@ -4,11 +4,10 @@
  * @module
  * @internal
  */
-import { RxthermError } from "../../errors.js";
+import { RxthermError, describeValue } from "../../errors.js";
 import type { Library, Species } from "../../species/types.js";
 import type { Stream } from "../../extent/types.js";
 import { resolveSpeciesCached } from "../../enthalpy/resolveInputs.js";
-import { describeValue } from "../../guards.js";
 
 /** One species' inlet and outlet amounts in an energy balance. */
 export interface Entry {

@@ -7,8 +7,7 @@
  * @module
  * @internal
  */
-import { RxthermError } from "../../errors.js";
-import { describeValue, knownKeys, rejectUnknownKeys } from "../../guards.js";
+import { RxthermError, describeValue, knownKeys, rejectUnknownKeys } from "../../errors.js";
 import { STANDARD_TEMPERATURE_K, ATMOSPHERE_PA, slipHintDetails, withSlipHint } from "../../units.js";
 import type { Flows } from "../../extent/types.js";
 import { combustion } from "../../extent/combustion.js";

@@ -6,8 +6,7 @@
  * @module
  * @internal
  */
-import { RxthermError } from "../../errors.js";
-import { describeValue, isDeepFrozen, requireArray, requireRecord } from "../../guards.js";
+import { RxthermError, describeValue, isDeepFrozen, requireArray, requireRecord } from "../../errors.js";
 import { molarMass } from "../../formula/molarMass.js";
 import { parseFormula } from "../../formula/parseFormula.js";
 import type { Formula } from "../../formula/types.js";

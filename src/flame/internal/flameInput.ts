@@ -5,14 +5,13 @@
  * @module
  * @internal
  */
-import { RxthermError } from "../../errors.js";
+import { RxthermError, describeValue, knownKeys, rejectUnknownKeys } from "../../errors.js";
 import { ATMOSPHERE_PA, STANDARD_TEMPERATURE_K } from "../../units.js";
 import { AIR_21_79 } from "../../extent/combustion.js";
 import { checkMixtureLimits } from "../../extent/mixtureLimits.js";
 import type { EngineLimits } from "./equilibriumEngine.js";
 import { prepareFlame, type FlamePoint, type FlameSetup } from "./flameProblem.js";
 import type { AdiabaticFlameInput, AdiabaticFlameOptions } from "../types.js";
-import { describeValue, knownKeys, rejectUnknownKeys } from "../../guards.js";
 
 /** The keys the flame functions read (a misspelt one is an error, not a silent default). */
 const FLAME_INPUT_KEYS = /* @__PURE__ */ knownKeys<AdiabaticFlameInput>()(

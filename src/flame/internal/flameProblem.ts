@@ -13,7 +13,7 @@
  * @module
  * @internal
  */
-import { RxthermError } from "../../errors.js";
+import { RxthermError, describeValue } from "../../errors.js";
 import { GAS_CONSTANT_J_PER_MOL_K, STANDARD_PRESSURE_PA, STANDARD_TEMPERATURE_K, slipHintDetails, withSlipHint } from "../../units.js";
 import { increasingNewton } from "../../numeric/increasingNewton.js";
 import type { Flows } from "../../extent/types.js";
@@ -36,7 +36,6 @@ import {
   type Engine,
   type EngineLimits,
 } from "./equilibriumEngine.js";
-import { describeValue } from "../../guards.js";
 
 const R = GAS_CONSTANT_J_PER_MOL_K;
 

@@ -2,11 +2,10 @@
  * Private validation of a caller-built {@link Formula} object (one not produced by parseFormula), shared by
  * formatFormula, molarMass and elementMassFractions. Never re-exported.
  */
-import { RxthermError } from "../../errors.js";
+import { RxthermError, describeValue, requireRecord } from "../../errors.js";
 import { FORMULA_LIMITS } from "../parseFormula.js";
 import type { Formula } from "../types.js";
 import { symbolIndexOf } from "./elementIndex.js";
-import { describeValue, requireRecord } from "../../guards.js";
 
 /**
  * Check that `formula` is a Formula whose element keys are known symbols (or D, T) with finite counts in

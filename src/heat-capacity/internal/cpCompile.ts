@@ -5,8 +5,7 @@
  *
  * Never re-exported from src/index.ts.
  */
-import { describeValue, requireArray } from "../../guards.js";
-import { RxthermError } from "../../errors.js";
+import { RxthermError, describeValue, requireArray } from "../../errors.js";
 import { GAS_CONSTANT_J_PER_MOL_K } from "../../units.js";
 import type { CpForm, CpRange } from "../types.js";
 

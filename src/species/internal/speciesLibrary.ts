@@ -5,10 +5,9 @@
  * @module
  * @internal
  */
-import { RxthermError } from "../../errors.js";
+import { RxthermError, editDistance } from "../../errors.js";
 import type { Library, LibraryGetOptions, Species } from "../types.js";
 import { queryFormula, sameComposition } from "./composition.js";
-import { editDistance } from "../../guards.js";
 
 /** All entries of one key: the default and every data-set variant. */
 export interface KeyRecord {

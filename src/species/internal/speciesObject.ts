@@ -10,7 +10,7 @@
  * @internal
  */
 import { decimalTimes, decimalToPlainText, exactDecimalOfNumber } from "../../numeric/exactDecimal.js";
-import { RxthermError } from "../../errors.js";
+import { RxthermError, deepFreeze, describeValue } from "../../errors.js";
 import { createHeatCapacity, type HeatCapacity } from "../../heat-capacity/createHeatCapacity.js";
 import type { CpForm, CpRange, RangeOptions } from "../../heat-capacity/types.js";
 import type { Formula, Phase } from "../../formula/types.js";
@@ -28,7 +28,6 @@ const NO_TRANSITIONS: readonly SpeciesTransition[] = /* @__PURE__ */ Object.free
 const NO_STEPS = /* @__PURE__ */ new Float64Array(0);
 /** Data whose lowest range starts by this temperature (the NASA 300 K convention) are read down to 298.15 K. */
 const NASA_LOW_K = 300;
-import { deepFreeze, describeValue } from "../../guards.js";
 const LN_STANDARD_PRESSURE = /* @__PURE__ */ Math.log(STANDARD_PRESSURE_PA);
 
 /**
