@@ -169,3 +169,24 @@ export interface EfficiencyCurveResult {
   /** Species evaluated outside their data range (only with `extrapolate`). */
   readonly extrapolated: readonly ExtrapolatedPoint[];
 }
+
+/**
+ * Result of {@link flueGasDewPoint}.
+ *
+ * @category Fired equipment
+ */
+export interface FlueGasDewPointResult {
+  /** Water dew point, K: the IAPWS-IF97 saturation temperature at the water partial pressure. */
+  readonly waterK: number;
+  /** Sulfuric-acid dew point, K (Verhoff–Banchero correlation); absent when the gas holds no SO3 (and no SO2 to convert). */
+  readonly acidK?: number;
+  /** Water partial pressure, Pa. */
+  readonly waterPa: number;
+  /** SO3 partial pressure used for the acid dew point, Pa (0 without sulfur). */
+  readonly so3Pa: number;
+  /**
+   * False when the water or SO3 partial pressure lies outside the range the acid dew point correlation is
+   * quoted for (see {@link flueGasDewPoint}); the value is then an extrapolation. Absent without `acidK`.
+   */
+  readonly acidWithinRange?: boolean;
+}

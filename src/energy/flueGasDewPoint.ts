@@ -7,6 +7,8 @@ import type { Library } from "../species/types.js";
 import { resolveSpeciesCached } from "../enthalpy/resolveInputs.js";
 import { attachView } from "../view/attachView.js";
 import { DEW_POINT_VIEW } from "./internal/firedView.js";
+import type { FlueGasDewPointResult } from "./firedTypes.js";
+export type { FlueGasDewPointResult } from "./firedTypes.js";
 
 const INPUT_KEYS = /* @__PURE__ */ knownKeys<FlueGasDewPointInput>()("composition", "P", "so3Fraction", "library");
 
@@ -34,26 +36,6 @@ export interface FlueGasDewPointInput {
   library?: Library;
 }
 
-/**
- * Result of {@link flueGasDewPoint}.
- *
- * @category Fired equipment
- */
-export interface FlueGasDewPointResult {
-  /** Water dew point, K: the IAPWS-IF97 saturation temperature at the water partial pressure. */
-  readonly waterK: number;
-  /** Sulfuric-acid dew point, K (Verhoff–Banchero correlation); absent when the gas holds no SO3 (and no SO2 to convert). */
-  readonly acidK?: number;
-  /** Water partial pressure, Pa. */
-  readonly waterPa: number;
-  /** SO3 partial pressure used for the acid dew point, Pa (0 without sulfur). */
-  readonly so3Pa: number;
-  /**
-   * False when the water or SO3 partial pressure lies outside the range the acid dew point correlation is
-   * quoted for (see {@link flueGasDewPoint}); the value is then an extrapolation. Absent without `acidK`.
-   */
-  readonly acidWithinRange?: boolean;
-}
 
 /**
  * Share of the sulfur oxides taken as SO3 when neither `so3Fraction` nor any SO3 is given: 2 %.

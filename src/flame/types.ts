@@ -114,3 +114,44 @@ export interface AdiabaticFlameResult {
    */
   readonly extrapolated: readonly ExtrapolatedPoint[];
 }
+
+/**
+ * Result of {@link equilibriumComposition}.
+ *
+ * @category Flame
+ */
+export interface EquilibriumResult {
+  /** Temperature, K (given, or solved from `H`). */
+  readonly T: number;
+  /** Pressure, Pa. */
+  readonly P: number;
+  /** Amount of every included product species, mol (condensed species not present: 0). */
+  readonly moles: Readonly<Record<string, number>>;
+  /** Mole fractions in the gas phase (condensed species are not counted). */
+  readonly moleFractions: Readonly<Record<string, number>>;
+  /** Amounts of the condensed species present, mol. */
+  readonly condensed: Readonly<Record<string, number>>;
+  /** Total amount of the gas phase, mol. */
+  readonly gasMoles: number;
+  /** Always true: a solve that does not converge throws `NO_CONVERGENCE` instead. */
+  readonly converged: true;
+  /** Newton iterations of the fixed-T solves (summed over the temperature search with `H`). */
+  readonly iterations: number;
+  /** Outer temperature iterations (0 at given `T`). */
+  readonly temperatureIterations: number;
+  /** Max over elements of |Σ a·n − b| / b (relative element balance). */
+  readonly elementResidual: number;
+  /** Enthalpy of the equilibrium mixture, J. */
+  readonly enthalpy: number;
+  /** With `H`: enthalpy of the result minus `H`, J. Otherwise 0. */
+  readonly energyResidual: number;
+  /** Element symbol → element potential divided by RT (dimensionless Lagrange multiplier). */
+  readonly elementPotentials: Readonly<Record<string, number>>;
+  /** Product species left out because they hold an element absent from the feed. */
+  readonly excluded: readonly string[];
+  /**
+   * Each product species outside its data range at the result temperature, with that temperature
+   * (possible only with `extrapolate: true`); empty when every species was inside its range.
+   */
+  readonly extrapolated: readonly ExtrapolatedPoint[];
+}

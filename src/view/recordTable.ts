@@ -40,3 +40,21 @@ export const FLOW_UNIT = "mol or mol/s";
 
 /** Unit label of an energy that is J for amounts and W for flows, shown in kJ / kW. */
 export const ENERGY_UNIT_K = "kJ or kW";
+
+/** A species evaluated outside its data range, as the results list it (`ExtrapolatedPoint`). */
+interface ExtrapolatedPointLike {
+  readonly species: string;
+  readonly T: number;
+  readonly range: readonly [number, number];
+}
+
+/**
+ * The note of a result computed with `extrapolate: true`: which species were evaluated outside their
+ * data range, at which temperature (the first five). No note when the list is empty.
+ */
+export function extrapolationNotes(points: readonly ExtrapolatedPointLike[]): string[] {
+  if (points.length === 0) return [];
+  const shown = points.slice(0, 5).map((p) => `${p.species} at ${+p.T.toPrecision(6)} K (data ${p.range[0]}–${p.range[1]} K)`);
+  const more = points.length > 5 ? ` and ${points.length - 5} more` : "";
+  return [`extrapolated outside the data range, a screening number: ${shown.join(", ")}${more}`];
+}

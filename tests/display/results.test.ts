@@ -96,6 +96,16 @@ describe("display of every result kind", () => {
     expect(r).toContain("not measured (taken at their reconciled flow): H2O");
   });
 
+  it("a result computed inside every data range shows no extrapolation note; an extrapolated one names species, T and range", () => {
+    for (const kind of ["flame", "equilibrium", "reactionEnthalpy", "heatDuty", "adiabatic", "availableHeat", "efficiencyCurve"]) {
+      expect(toText((KINDS[kind] as () => object)())).not.toContain("extrapolated");
+    }
+    const r = reactionEnthalpy("CH4(g) + 2 O2(g) -> CO2(g) + 2 H2O(g)", { T: 250, extrapolate: true });
+    expect(r.extrapolated.length).toBeGreaterThan(0);
+    // NIST WebBook Shomate CH4(g): 298–6000 K, so 250 K is outside
+    expect(toText(r)).toContain("CH4(g) at 250 K (data 298–6000 K)");
+  });
+
   it("a formula stays deep-equal (and strict-equal) to a plain record", () => {
     expect(parseFormula("H2O(g)")).toStrictEqual({ text: "H2O(g)", elements: { H: 2, O: 1 }, charge: 0, phase: "g" });
   });

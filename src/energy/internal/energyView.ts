@@ -5,7 +5,8 @@
  * @internal
  */
 import { viewDescriptors, viewPrototype } from "../../view/attachView.js";
-import { ENERGY_UNIT_K, FLOW_UNIT, recordTable } from "../../view/recordTable.js";
+import { ENERGY_UNIT_K, FLOW_UNIT, extrapolationNotes, recordTable } from "../../view/recordTable.js";
+import type { ExtrapolatedPoint } from "../../species/noteExtrapolation.js";
 import type { ResultView } from "../../view/types.js";
 import type { Flows } from "../../extent/types.js";
 
@@ -25,6 +26,7 @@ interface HeatDutyFields {
     readonly outlet: readonly { readonly T: number; readonly enthalpy: number; readonly sensible: number }[];
   };
   readonly warnings: readonly string[];
+  readonly extrapolated: readonly ExtrapolatedPoint[];
 }
 
 /** The view of a heat duty: the duty by both methods, its breakdown, and each stream. */
@@ -62,7 +64,7 @@ export function heatDutyView(r: HeatDutyFields): ResultView {
         rows: streams,
       },
     ],
-    ...(r.warnings.length > 0 ? { notes: [...r.warnings] } : {}),
+    notes: [...extrapolationNotes(r.extrapolated), ...r.warnings],
   };
 }
 
@@ -74,6 +76,7 @@ interface AdiabaticFields {
   readonly vessel: string;
   readonly deltaT?: number;
   readonly startT?: number;
+  readonly extrapolated: readonly ExtrapolatedPoint[];
 }
 
 /** The view of an adiabatic reaction temperature (and rise, when present). */
@@ -96,7 +99,7 @@ export function adiabaticView(r: AdiabaticFields): ResultView {
       },
       recordTable("outlet", [{ label: "outlet", unit: FLOW_UNIT, values: r.outlet.flows }]),
     ],
-    notes: ["runaway and relief screening only: follow local codes and licensed process-safety practice"],
+    notes: [...extrapolationNotes(r.extrapolated), "runaway and relief screening only: follow local codes and licensed process-safety practice"],
   };
 }
 

@@ -5,9 +5,9 @@
  * @internal
  */
 import { viewDescriptors } from "../../view/attachView.js";
-import { recordTable } from "../../view/recordTable.js";
+import { extrapolationNotes, recordTable } from "../../view/recordTable.js";
 import type { ResultView } from "../../view/types.js";
-import type { AvailableHeatResult, EfficiencyCurveResult } from "../firedTypes.js";
+import type { AvailableHeatResult, EfficiencyCurveResult, FlueGasDewPointResult } from "../firedTypes.js";
 
 /** Unit label of an energy per unit of fuel on the result's basis, shown in kJ. */
 function perFuel(per: "mol" | "kg" | "Nm3"): string {
@@ -15,7 +15,7 @@ function perFuel(per: "mol" | "kg" | "Nm3"): string {
 }
 
 /** Fields of an availableHeat result that its view reads. */
-type AvailableHeatFields = Omit<AvailableHeatResult, "extrapolated" | "heatInputHHV">;
+type AvailableHeatFields = Omit<AvailableHeatResult, "heatInputHHV">;
 
 /** The view of an available-heat balance: efficiency, the heat balance on the LHV basis, the flue gas. */
 export function availableHeatView(r: AvailableHeatFields): ResultView {
@@ -52,6 +52,7 @@ export function availableHeatView(r: AvailableHeatFields): ResultView {
       ]),
     ],
     notes: [
+      ...extrapolationNotes(r.extrapolated),
       ...(r.condensedWater > 0 ? [`water condensed: ${r.condensedWater.toPrecision(4)} mol/mol fuel`] : []),
       ...r.warnings,
     ],
@@ -62,7 +63,7 @@ export function availableHeatView(r: AvailableHeatFields): ResultView {
 export const AVAILABLE_HEAT_VIEW = /* @__PURE__ */ viewDescriptors(availableHeatView);
 
 /** Fields of an efficiencyCurve result that its view reads. */
-type EfficiencyCurveFields = Omit<EfficiencyCurveResult, "extrapolated" | "lhv" | "hhv">;
+type EfficiencyCurveFields = Omit<EfficiencyCurveResult, "lhv" | "hhv">;
 
 /** The view of an efficiency curve: one row per point. */
 export function efficiencyCurveView(r: EfficiencyCurveFields): ResultView {
@@ -81,23 +82,16 @@ export function efficiencyCurveView(r: EfficiencyCurveFields): ResultView {
         (r.availableHeat[i] ?? 0) / 1000, (r.stackLoss[i] ?? 0) / 1000, r.condensedWater[i] ?? 0,
       ]),
     }],
+    notes: extrapolationNotes(r.extrapolated),
   };
 }
 
 /** Display methods of efficiencyCurve results. */
 export const EFFICIENCY_CURVE_VIEW = /* @__PURE__ */ viewDescriptors(efficiencyCurveView);
 
-/** Fields of a flueGasDewPoint result that its view reads. */
-interface DewPointFields {
-  readonly waterK: number;
-  readonly acidK?: number;
-  readonly waterPa: number;
-  readonly so3Pa: number;
-  readonly acidWithinRange?: boolean;
-}
 
 /** The view of flue-gas dew points. */
-export function dewPointView(r: DewPointFields): ResultView {
+export function dewPointView(r: FlueGasDewPointResult): ResultView {
   return {
     title: "flue-gas dew points",
     tables: [{

@@ -6,6 +6,8 @@
  */
 import { viewDescriptors, viewPrototype } from "../../view/attachView.js";
 import type { ResultView } from "../../view/types.js";
+import { extrapolationNotes } from "../../view/recordTable.js";
+import type { ExtrapolatedPoint } from "../../species/noteExtrapolation.js";
 
 /** Fields of a reactionEnthalpy result that its view reads. */
 interface ReactionEnthalpyFields {
@@ -14,7 +16,7 @@ interface ReactionEnthalpyFields {
   readonly T: number;
   readonly exact?: string;
   readonly per: string | null;
-  readonly extrapolated: boolean;
+  readonly extrapolated: readonly ExtrapolatedPoint[];
   readonly terms: readonly { readonly species: string; readonly coefficient: number; readonly enthalpy: number }[];
 }
 
@@ -39,7 +41,7 @@ export function reactionEnthalpyView(r: ReactionEnthalpyFields): ResultView {
         rows: r.terms.map((t) => [t.species, t.coefficient, t.enthalpy / 1000, (t.coefficient * t.enthalpy) / 1000]),
       },
     ],
-    ...(r.extrapolated ? { notes: ["extrapolated outside the data range of at least one species: a screening number"] } : {}),
+    notes: extrapolationNotes(r.extrapolated),
   };
 }
 

@@ -5,17 +5,16 @@
  * @internal
  */
 import { viewDescriptors, viewPrototype } from "../../view/attachView.js";
-import { FLOW_UNIT, recordTable } from "../../view/recordTable.js";
+import { FLOW_UNIT, extrapolationNotes, recordTable } from "../../view/recordTable.js";
 import type { ResultView, ViewCell } from "../../view/types.js";
-import type { AdiabaticFlameResult } from "../types.js";
+import type { AdiabaticFlameResult, EquilibriumResult } from "../types.js";
 
 /** Caution shown under every flame result. */
 const FLAME_CAUTION = "furnace, refractory and burner limits: follow local codes and licensed engineering practice";
 
 /** The view of an adiabatic flame temperature: T, P, φ and the product composition. */
 export function flameView(r: AdiabaticFlameResult): ResultView {
-  const notes = [FLAME_CAUTION];
-  if (r.extrapolated) notes.unshift("extrapolated outside the data range of a product species: a screening number");
+  const notes = [...extrapolationNotes(r.extrapolated), FLAME_CAUTION];
   return {
     title: `adiabatic flame temperature (${r.mode}, ${r.process})`,
     tables: [
@@ -38,19 +37,9 @@ export function flameView(r: AdiabaticFlameResult): ResultView {
   };
 }
 
-/** Fields of an equilibrium composition that its view reads. */
-interface EquilibriumFields {
-  readonly T: number;
-  readonly P: number;
-  readonly moles: Readonly<Record<string, number>>;
-  readonly moleFractions: Readonly<Record<string, number>>;
-  readonly condensed: Readonly<Record<string, number>>;
-  readonly gasMoles: number;
-  readonly extrapolated: boolean;
-}
 
 /** The view of an equilibrium composition. */
-export function equilibriumView(r: EquilibriumFields): ResultView {
+export function equilibriumView(r: EquilibriumResult): ResultView {
   return {
     title: `chemical equilibrium at ${r.T} K`,
     tables: [
@@ -64,7 +53,7 @@ export function equilibriumView(r: EquilibriumFields): ResultView {
       ]),
     ],
     notes: [
-      ...(r.extrapolated ? ["extrapolated outside the data range of a species: a screening number"] : []),
+      ...extrapolationNotes(r.extrapolated),
       "toxic or flammable products: check exposure and flammability limits under local codes",
     ],
   };
