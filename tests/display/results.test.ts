@@ -88,7 +88,7 @@ describe("display of every result kind", () => {
     const h = toText(hessCombine("C(cr) + 0.5 O2(g) -> CO(g)", [
       { reaction: "C(cr) + O2(g) -> CO2(g)", enthalpy: -393510 }, { reaction: "CO(g) + 0.5 O2(g) -> CO2(g)", enthalpy: -282980 },
     ]));
-    // NIST-JANAF 4th ed. 1998: ΔfH°(CO2, g) −393.51, ΔfH°(CO, g) −110.53 kJ/mol, so the CO combustion is −282.98
+    // CODATA Key Values 1989: ΔfH°(CO2, g) −393.51, ΔfH°(CO, g) −110.53 kJ/mol, so the CO combustion is −282.98
     expect(h).toContain("-110.53");
     expect(h).toContain("CO(g) + 1/2 O2(g) -> CO2(g)");
     const r = toText(reconcileExtents({ feed: { CO: 10, H2O: 15, CO2: 0, H2: 0 }, reactions: ["CO + H2O -> CO2 + H2"], measured: { CO: 3, CO2: 7.2, H2: 6.8 } }));
